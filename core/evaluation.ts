@@ -1,0 +1,94 @@
+/**
+ * The evaluation, format `loftpoint-evaluation/1` (DESIGN.md): the JSON that
+ * `loftpoint evaluate --json` prints and every front end draws from.
+ *
+ * All numbers SI. For turbofan concepts the key `thrustToWeight` stands where
+ * `powerToWeight` stands here, and `sizing` has `thrust` instead of `power`;
+ * the types use an index signature for that one key.
+ */
+import type { LoadingAxis, RequirementKind } from './model';
+
+export const EVALUATION_FORMAT = 'loftpoint-evaluation/1';
+
+export interface LimitBoundaryJson {
+  id: string;
+  kind: RequirementKind;
+  label?: string;
+  wingLoadingMax: number;
+}
+
+export interface CurveBoundaryJson {
+  id: string;
+  kind: RequirementKind;
+  label?: string;
+  /** [wing loading, required loading or null]. */
+  points: Array<[number, number | null]>;
+}
+
+export type BoundaryJson = LimitBoundaryJson | CurveBoundaryJson;
+
+export interface MarginJson {
+  id: string;
+  /** Relative; negative means violated, -1 means no power can meet it there. */
+  margin: number;
+}
+
+export interface PointJson {
+  wingLoading: number;
+  /** `powerToWeight` or `thrustToWeight`, per `axis`. */
+  [axisKey: string]: unknown;
+}
+
+export interface OptimumJson {
+  wingLoading: number;
+  powerToWeight?: number;
+  thrustToWeight?: number;
+  active: string[];
+  margins: MarginJson[];
+  /** True when the optimum sits on the right edge of the plotted range. */
+  unbounded?: boolean;
+}
+
+export interface DesignPointJson {
+  wingLoading: number;
+  powerToWeight?: number;
+  thrustToWeight?: number;
+  feasible: boolean;
+  margins: MarginJson[];
+}
+
+export interface SpeedsJson {
+  stall: number;
+  minimumDrag: number;
+  minimumPower: number;
+  /** Additions beyond DESIGN.md's three. */
+  approach?: number;
+  stallByConfiguration?: Record<string, number>;
+}
+
+export interface SizingJson {
+  wingArea: number;
+  power?: number;
+  thrust?: number;
+  perEngine?: number;
+  takeoffWeight?: number;
+}
+
+export interface WarningJson {
+  code: string;
+  /** Concept field path the warning is about, e.g. `aircraft.aero.configurations.clean.oswaldEfficiency`. */
+  field: string;
+  message: string;
+}
+
+export interface Evaluation {
+  format: typeof EVALUATION_FORMAT;
+  axis: LoadingAxis;
+  boundaries: BoundaryJson[];
+  /** Null when no point on the diagram meets every requirement. */
+  optimum: OptimumJson | null;
+  designPoint?: DesignPointJson;
+  speeds: SpeedsJson;
+  sizing: SizingJson | null;
+  warnings: WarningJson[];
+}

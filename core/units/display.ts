@@ -1,0 +1,93 @@
+/**
+ * Display units: the one place where SI values become numbers a person reads.
+ * `si` shows the engine's own units; `us` shows US customary.
+ */
+import { FOOT_M, FOOT_PER_MINUTE_MPS, G0, HORSEPOWER_W, KNOT_MPS, POUND_FORCE_N, POUND_KG, PSF_PA } from './factors';
+
+export type UnitSystem = 'si' | 'us';
+
+export type DisplayQuantity =
+  | 'wingLoading'
+  | 'powerToWeight'
+  | 'thrustToWeight'
+  | 'area'
+  | 'power'
+  | 'thrust'
+  | 'speed'
+  | 'mass'
+  | 'length'
+  | 'altitude'
+  | 'climbRate';
+
+interface DisplayUnit {
+  unit: string;
+  /** Multiply an SI value by this to get the displayed value. */
+  fromSi: number;
+  digits: number;
+}
+
+const DISPLAY: Record<UnitSystem, Record<DisplayQuantity, DisplayUnit>> = {
+  si: {
+    wingLoading: { unit: 'N/m²', fromSi: 1, digits: 0 },
+    powerToWeight: { unit: 'W/N', fromSi: 1, digits: 2 },
+    thrustToWeight: { unit: '', fromSi: 1, digits: 3 },
+    area: { unit: 'm²', fromSi: 1, digits: 2 },
+    power: { unit: 'kW', fromSi: 1e-3, digits: 1 },
+    thrust: { unit: 'kN', fromSi: 1e-3, digits: 2 },
+    speed: { unit: 'm/s', fromSi: 1, digits: 1 },
+    mass: { unit: 'kg', fromSi: 1, digits: 0 },
+    length: { unit: 'm', fromSi: 1, digits: 0 },
+    altitude: { unit: 'm', fromSi: 1, digits: 0 },
+    climbRate: { unit: 'm/s', fromSi: 1, digits: 2 },
+  },
+  us: {
+    wingLoading: { unit: 'lb/ft²', fromSi: 1 / PSF_PA, digits: 1 },
+    powerToWeight: { unit: 'hp/lb', fromSi: POUND_FORCE_N / HORSEPOWER_W, digits: 4 },
+    thrustToWeight: { unit: '', fromSi: 1, digits: 3 },
+    area: { unit: 'ft²', fromSi: 1 / (FOOT_M * FOOT_M), digits: 1 },
+    power: { unit: 'hp', fromSi: 1 / HORSEPOWER_W, digits: 0 },
+    thrust: { unit: 'lbf', fromSi: 1 / POUND_FORCE_N, digits: 0 },
+    speed: { unit: 'kt', fromSi: 1 / KNOT_MPS, digits: 1 },
+    mass: { unit: 'lb', fromSi: 1 / POUND_KG, digits: 0 },
+    length: { unit: 'ft', fromSi: 1 / FOOT_M, digits: 0 },
+    altitude: { unit: 'ft', fromSi: 1 / FOOT_M, digits: 0 },
+    climbRate: { unit: 'ft/min', fromSi: 1 / FOOT_PER_MINUTE_MPS, digits: 0 },
+  },
+};
+
+export function displayUnit(quantity: DisplayQuantity, system: UnitSystem): DisplayUnit {
+  return DISPLAY[system][quantity];
+}
+
+/** SI value to the displayed number. */
+export function toDisplay(value: number, quantity: DisplayQuantity, system: UnitSystem): number {
+  return value * DISPLAY[system][quantity].fromSi;
+}
+
+/** Displayed number back to SI. */
+export function fromDisplay(value: number, quantity: DisplayQuantity, system: UnitSystem): number {
+  return value / DISPLAY[system][quantity].fromSi;
+}
+
+/**
+ * "812 N/m²", "16.9 lb/ft²"; never "NaN": a value that is not finite reads "—".
+ */
+export function formatQuantity(value: number | null | undefined, quantity: DisplayQuantity, system: UnitSystem): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return '—';
+  const { unit, fromSi, digits } = DISPLAY[system][quantity];
+  const shown = (value * fromSi).toLocaleString('en-US', {
+    minimumFractionDigits: digits,
+    maximumFractionDigits: digits,
+  });
+  return unit ? `${shown} ${unit}` : shown;
+}
+
+/** "+12.3 %" for a relative margin; "—" when not finite. */
+export function formatMargin(margin: number | null | undefined): string {
+  if (margin === null || margin === undefined || !Number.isFinite(margin)) return '—';
+  const pct = margin * 100;
+  const sign = pct > 0.05 ? '+' : pct < -0.05 ? '−' : '';
+  return `${sign}${Math.abs(pct).toFixed(1)} %`;
+}
+
+export { G0 };

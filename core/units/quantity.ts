@@ -1,0 +1,169 @@
+/**
+ * Quantities written with their unit ("45 kt", "25 lb/ft^2", "2.4 %"),
+ * parsed to SI. Each dimension lists the units it accepts; a value in a unit
+ * of another dimension is an error that says which units would do.
+ */
+import {
+  FOOT_M,
+  FOOT_PER_MINUTE_MPS,
+  G0,
+  HORSEPOWER_W,
+  KNOT_MPS,
+  MILE_PER_HOUR_MPS,
+  NAUTICAL_MILE_M,
+  POUND_FORCE_N,
+  POUND_KG,
+  PSF_PA,
+  RANKINE_K,
+} from './factors';
+
+export type Dimension =
+  | 'mass'
+  | 'length'
+  | 'speed'
+  | 'temperatureDifference'
+  | 'angle'
+  | 'time'
+  | 'wingLoading'
+  | 'powerToWeight'
+  | 'thrustToWeight'
+  | 'fraction';
+
+/** Units of each dimension, with the factor that takes a value to SI. */
+export const UNITS: Record<Dimension, Record<string, number>> = {
+  mass: { kg: 1, lb: POUND_KG },
+  length: { m: 1, km: 1000, ft: FOOT_M, nmi: NAUTICAL_MILE_M },
+  speed: {
+    'm/s': 1,
+    'km/h': 1000 / 3600,
+    kt: KNOT_MPS,
+    mph: MILE_PER_HOUR_MPS,
+    'ft/s': FOOT_M,
+    'ft/min': FOOT_PER_MINUTE_MPS,
+  },
+  temperatureDifference: { K: 1, degC: 1, degF: RANKINE_K },
+  angle: { deg: Math.PI / 180, rad: 1 },
+  time: { s: 1, min: 60 },
+  wingLoading: { 'N/m^2': 1, Pa: 1, 'kg/m^2': G0, 'lb/ft^2': PSF_PA, psf: PSF_PA },
+  // lb in hp/lb is pound-weight, so hp/lbf.
+  powerToWeight: { 'W/N': 1, 'W/kg': 1 / G0, 'kW/kg': 1000 / G0, 'hp/lb': HORSEPOWER_W / POUND_FORCE_N },
+  thrustToWeight: { 'N/N': 1, 'lbf/lbf': 1 },
+  fraction: { '%': 0.01 },
+};
+
+/** The SI unit each dimension is stored in, for messages and display. */
+export const SI_UNIT: Record<Dimension, string> = {
+  mass: 'kg',
+  length: 'm',
+  speed: 'm/s',
+  temperatureDifference: 'K',
+  angle: 'rad',
+  time: 's',
+  wingLoading: 'N/m^2',
+  powerToWeight: 'W/N',
+  thrustToWeight: '',
+  fraction: '',
+};
+
+/** An example of a well-written value, shown in error messages. */
+export const EXAMPLE: Record<Dimension, string> = {
+  mass: '750 kg',
+  length: '1500 ft',
+  speed: '45 kt',
+  temperatureDifference: '15 K',
+  angle: '45 deg',
+  time: '3 s',
+  wingLoading: '2400 N/m^2',
+  powerToWeight: '9 W/N',
+  thrustToWeight: '0.35',
+  fraction: '2.4 %',
+};
+
+export type ParsedQuantity = { ok: true; value: number } | { ok: false; message: string };
+
+const NUMBER = /^\s*([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*?)\s*$/;
+
+/** Spellings that mean the same unit. */
+const ALIASES: Record<string, string> = {
+  'm/s²': 'm/s^2',
+  'N/m²': 'N/m^2',
+  'N/m2': 'N/m^2',
+  'kg/m²': 'kg/m^2',
+  'kg/m2': 'kg/m^2',
+  'lb/ft²': 'lb/ft^2',
+  'lb/ft2': 'lb/ft^2',
+  '°C': 'degC',
+  '°F': 'degF',
+  '°': 'deg',
+  kts: 'kt',
+  knots: 'kt',
+  fpm: 'ft/min',
+  kmh: 'km/h',
+  lbs: 'lb',
+};
+
+function listUnits(dimension: Dimension): string {
+  return Object.keys(UNITS[dimension]).join(', ');
+}
+
+/**
+ * Parse a dimensional value. Numbers are allowed bare only for dimensionless
+ * kinds (thrustToWeight, fraction); everything else must carry a unit.
+ */
+export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuantity {
+  const dimensionless = dimension === 'fraction' || dimension === 'thrustToWeight';
+  if (typeof input === 'number') {
+    if (!Number.isFinite(input)) return { ok: false, message: `is ${input}; give a finite number` };
+    if (dimensionless) return { ok: true, value: input };
+    return {
+      ok: false,
+      message: `is a bare number (${input}); write it with a unit, e.g. "${EXAMPLE[dimension]}" (units: ${listUnits(dimension)})`,
+    };
+  }
+  if (typeof input !== 'string') {
+    return { ok: false, message: `must be a string with a unit, e.g. "${EXAMPLE[dimension]}"` };
+  }
+  const match = NUMBER.exec(input);
+  if (!match) {
+    return { ok: false, message: `"${input}" is not a number with a unit, e.g. "${EXAMPLE[dimension]}"` };
+  }
+  const magnitude = Number(match[1]);
+  const unit = ALIASES[match[2]] ?? match[2];
+  if (unit === '') {
+    if (dimensionless) return { ok: true, value: magnitude };
+    return {
+      ok: false,
+      message: `"${input}" has no unit; write it with one, e.g. "${EXAMPLE[dimension]}" (units: ${listUnits(dimension)})`,
+    };
+  }
+  const factor = UNITS[dimension][unit];
+  if (factor === undefined) {
+    return {
+      ok: false,
+      message: `"${input}": unit "${unit}" is not a ${describe(dimension)} unit; use one of ${listUnits(dimension)}`,
+    };
+  }
+  return { ok: true, value: magnitude * factor };
+}
+
+function describe(dimension: Dimension): string {
+  return {
+    mass: 'mass',
+    length: 'length',
+    speed: 'speed',
+    temperatureDifference: 'temperature difference',
+    angle: 'angle',
+    time: 'time',
+    wingLoading: 'wing loading',
+    powerToWeight: 'power-to-weight',
+    thrustToWeight: 'thrust-to-weight',
+    fraction: 'fraction',
+  }[dimension];
+}
+
+/** Parse or throw a RangeError naming the value; for code paths that already validated. */
+export function quantity(input: string, dimension: Dimension): number {
+  const parsed = parseQuantity(input, dimension);
+  if (!parsed.ok) throw new RangeError(parsed.message);
+  return parsed.value;
+}
