@@ -38,3 +38,6 @@ export {
   R_AIR,
   type AtmosphereState,
 } from './atmosphere';
+
+export * from './concept';
+export * from './diagram';

@@ -1,0 +1,15 @@
+/**
+ * The verbs of the command line, one file each. A verb that fails on bad
+ * input throws InputError; main turns it into one line and exit status 2.
+ */
+import type { Command } from 'commander';
+import type { CliIO } from './io';
+import { registerEvaluate } from './evaluate';
+import { registerProject } from './project';
+
+export type SetExitCode = (code: number) => void;
+
+export function registerCommands(program: Command, io: CliIO, setExitCode: SetExitCode): void {
+  registerEvaluate(program, io, setExitCode);
+  registerProject(program, io, setExitCode);
+}

@@ -1,0 +1,22 @@
+/** Where the command line writes: the process streams, or a buffer in tests. */
+export interface CliIO {
+  out(text: string): void;
+  err(text: string): void;
+}
+
+export const processIO: CliIO = {
+  out: (text) => void process.stdout.write(text),
+  err: (text) => void process.stderr.write(text),
+};
+
+/** An IO that keeps everything written, for tests and for all-or-nothing output. */
+export function bufferIO(): CliIO & { stdout: () => string; stderr: () => string } {
+  let out = '';
+  let err = '';
+  return {
+    out: (text) => void (out += text),
+    err: (text) => void (err += text),
+    stdout: () => out,
+    stderr: () => err,
+  };
+}

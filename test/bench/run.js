@@ -1,0 +1,21 @@
+#!/usr/bin/env node
+// `npm run bench`: the speed and size targets, measured, never asserted by a
+// timed test. Each benchmark is its own script so one can be run alone.
+import { spawnSync } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+
+const root = new URL('../..', import.meta.url).pathname;
+const benches = [
+  ['Engine: evaluation time per demo', 'test/bench/engine.ts'],
+  ['Project file: save, list, open, size', 'test/bench/store.ts'],
+  ['Designer window: drag to redraw', 'test/bench/drag.ts'],
+];
+let failed = 0;
+for (const [title, script] of benches) {
+  if (!existsSync(join(root, script))) continue;
+  console.log(`\n== ${title} (${script})`);
+  const result = spawnSync(join(root, 'node_modules/.bin/tsx'), [script], { cwd: root, stdio: 'inherit' });
+  if (result.status !== 0) failed++;
+}
+process.exit(failed > 0 ? 1 : 0);
