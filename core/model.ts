@@ -5,6 +5,7 @@
  * units are turned into this model once, by core/concept/resolve.ts; nothing
  * downstream parses units.
  */
+import type { WarningJson } from './evaluation';
 
 export type PropulsionKind = 'piston' | 'turbocharged-piston' | 'turboprop' | 'turbofan' | 'electric';
 
@@ -167,6 +168,8 @@ export interface Design {
     samples: number;
   };
   designPoint?: DesignPoint;
+  /** Notes from resolving the concept (a defaulted configuration that fell back to clean, an ignored field). */
+  warnings?: WarningJson[];
 }
 
 /**

@@ -99,7 +99,11 @@ const ALIASES: Record<string, string> = {
   knots: 'kt',
   fpm: 'ft/min',
   kmh: 'km/h',
+  kn: 'kt',
   lbs: 'lb',
+  'hp/lbf': 'hp/lb',
+  'lbf/ft^2': 'lb/ft^2',
+  'lbf/ft²': 'lb/ft^2',
 };
 
 function listUnits(dimension: Dimension): string {
@@ -128,7 +132,14 @@ export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuant
     return { ok: false, message: `"${input}" is not a number with a unit, e.g. "${EXAMPLE[dimension]}"` };
   }
   const magnitude = Number(match[1]);
-  const unit = ALIASES[match[2]] ?? match[2];
+  if (!Number.isFinite(magnitude)) {
+    return { ok: false, message: `"${input}" is too large a number; write a finite value, e.g. "${EXAMPLE[dimension]}"` };
+  }
+  const written = match[2];
+  if (/^,\d/.test(written)) {
+    return { ok: false, message: `"${input}": write the number without thousands separators, e.g. "1500 ft"` };
+  }
+  const unit = Object.hasOwn(ALIASES, written) ? ALIASES[written] : written;
   if (unit === '') {
     if (dimensionless) return { ok: true, value: magnitude };
     return {
@@ -136,15 +147,22 @@ export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuant
       message: `"${input}" has no unit; write it with one, e.g. "${EXAMPLE[dimension]}" (units: ${listUnits(dimension)})`,
     };
   }
-  const factor = UNITS[dimension][unit];
-  if (factor === undefined) {
-    return {
-      ok: false,
-      message: `"${input}": unit "${unit}" is not a ${describe(dimension)} unit; use one of ${listUnits(dimension)}`,
-    };
-  }
-  return { ok: true, value: magnitude * factor };
+  // Own keys only: "45 constructor" must not find Object.prototype.constructor.
+  if (!Object.hasOwn(UNITS[dimension], unit)) return { ok: false, message: unknownUnitMessage(input, unit, dimension) };
+  return { ok: true, value: magnitude * UNITS[dimension][unit] };
 }
+
+/** Say what the unit is if it belongs elsewhere, and what to write instead. */
+function unknownUnitMessage(input: string, unit: string, dimension: Dimension): string {
+  const wanted = `use one of ${listUnits(dimension)}`;
+  const caseMatch = Object.keys(UNITS[dimension]).find((u) => u.toLowerCase() === unit.toLowerCase());
+  if (caseMatch) return `"${input}": unit "${unit}" is not known; did you mean "${caseMatch}"? (units are case-sensitive; ${wanted})`;
+  const other = (Object.keys(UNITS) as Dimension[]).find((d) => d !== dimension && Object.hasOwn(UNITS[d], unit));
+  if (other) return `"${input}": "${unit}" is ${a(describe(other))} unit, but this field is ${a(describe(dimension))}; ${wanted}`;
+  return `"${input}": unit "${unit}" is not ${a(describe(dimension))} unit; ${wanted}`;
+}
+
+const a = (noun: string): string => (/^[aeiou]/.test(noun) ? `an ${noun}` : `a ${noun}`);
 
 function describe(dimension: Dimension): string {
   return {

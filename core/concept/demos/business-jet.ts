@@ -1,0 +1,86 @@
+/**
+ * Demo: a small twin-turbofan business jet. An invented scenario; the
+ * numbers sit in METHODS.md's typical ranges and follow the rules named on
+ * each requirement.
+ */
+import { DEMO_CAUTION, type DemoConcept } from './demo';
+
+export const businessJet: DemoConcept = {
+  slug: 'business-jet',
+  title: 'LP-60 light business jet',
+  summary:
+    'A 7,400 kg twin-turbofan jet for six passengers: the 2.4 % second-segment climb with one engine out, ' +
+    'a 900 m take-off roll on a hot day, a 410 kt cruise at FL370 and a 43,000 ft ceiling.' +
+    ` ${DEMO_CAUTION}`,
+  concept: {
+    format: 'loftpoint-concept/1',
+    name: 'LP-60 light business jet',
+    aircraft: {
+      takeoffMass: '7400 kg',
+      aero: {
+        aspectRatio: 8.6,
+        cdLinear: 0,
+        configurations: {
+          clean: { cd0: 0.021, oswaldEfficiency: 0.8, clMax: 1.45 },
+          takeoff: { cd0Increment: 0.035, oswaldEfficiency: 0.76, clMax: 1.85 },
+          'second-segment': { cd0Increment: 0.015, oswaldEfficiency: 0.76, clMax: 1.85 },
+          landing: { cd0Increment: 0.07, oswaldEfficiency: 0.7, clMax: 2.25 },
+        },
+      },
+      propulsion: { kind: 'turbofan', engines: 2, lapseExponent: 1 },
+    },
+    requirements: [
+      {
+        id: 'approach-stall',
+        kind: 'stall',
+        label: 'VS0 at most 90 kt CAS at landing mass, keeping VREF (1.23 VSR0, 14 CFR 25.125) near 111 kt (programme target)',
+        speed: '90 kt',
+        massFraction: 0.85,
+      },
+      {
+        id: 'takeoff-run',
+        kind: 'takeoff-ground-roll',
+        label: '900 m ground roll at sea level on an ISA+20 K day, paved runway (programme target)',
+        distance: '900 m',
+        temperatureOffset: '20 K',
+        rollingFriction: 0.03,
+      },
+      {
+        id: 'second-segment',
+        kind: 'climb-gradient',
+        label: '2nd segment, one engine out: 2.4 % at V2 (1.2 VS here), gear up, take-off flaps (14 CFR 25.121(b))',
+        gradient: '2.4 %',
+        temperatureOffset: '20 K',
+        enginesInoperative: 1,
+        configuration: 'second-segment',
+      },
+      {
+        id: 'landing-run',
+        kind: 'landing-ground-roll',
+        label: '750 m ground roll at landing mass on a dry runway (programme target)',
+        distance: '750 m',
+        massFraction: 0.85,
+        brakingFriction: 0.4,
+        freeRollTime: '2 s',
+      },
+      {
+        id: 'cruise',
+        kind: 'cruise',
+        label: '410 kt TAS at 37,000 ft, maximum cruise thrust, mid-fuel (programme target)',
+        speed: '410 kt',
+        altitude: '37000 ft',
+        massFraction: 0.88,
+        powerSetting: 0.9,
+      },
+      {
+        id: 'ceiling',
+        kind: 'ceiling',
+        label: 'Cruise ceiling 43,000 ft at 300 ft/min (common practice for jets)',
+        altitude: '43000 ft',
+        rate: '300 ft/min',
+        massFraction: 0.9,
+      },
+    ],
+    designPoint: { wingLoading: '3400 N/m^2', thrustToWeight: 0.31 },
+  },
+};

@@ -1,0 +1,52 @@
+/**
+ * Reading a concept: migrate to the current format, check every field,
+ * check the rules that join fields, then resolve to the SI design model.
+ * Never throws; every problem comes back as an issue with a field path.
+ */
+import type { WarningJson } from '../evaluation';
+import type { Design } from '../model';
+import { checkConcept } from './checks';
+import { fieldPath, type ConceptIssue } from './format';
+import { translateIssues } from './issues';
+import { parseJsonText } from './json-text';
+import { migrateConcept } from './migrate';
+import { resolveConcept } from './resolve';
+import { conceptSchema, type ConceptJson } from './schema';
+
+export type ParsedConcept =
+  | { ok: true; concept: ConceptJson; design: Design; warnings: WarningJson[] }
+  | { ok: false; issues: ConceptIssue[] };
+
+/**
+ * Check and resolve a concept document. `concept` in the result is the
+ * document as written (after any format migration), with no defaults filled
+ * in, so saving it back keeps the user's text.
+ */
+export function parseConcept(input: unknown): ParsedConcept {
+  try {
+    const migrated = migrateConcept(input);
+    if (!migrated.ok) return migrated;
+    const checked = conceptSchema.safeParse(migrated.concept, { reportInput: true });
+    if (!checked.success) return { ok: false, issues: translateIssues(checked.error.issues, migrated.concept) };
+    const issues = checkConcept(checked.data);
+    if (issues.length) return { ok: false, issues };
+    const { design, warnings } = resolveConcept(checked.data);
+    // A copy of what was written keeps its key order and leaves the caller's object alone.
+    const concept = structuredClone(migrated.concept) as ConceptJson;
+    return { ok: true, concept, design, warnings: [...migrated.warnings, ...warnings] };
+  } catch (error) {
+    const reason = error instanceof Error ? error.message : String(error);
+    return { ok: false, issues: [{ path: '', message: `the concept could not be read: ${reason}` }] };
+  }
+}
+
+/** Parse concept JSON text; malformed JSON comes back as an issue with its line and column. */
+export function parseConceptText(text: string, source?: string): ParsedConcept {
+  const json = parseJsonText(text);
+  if (!json.ok) {
+    const where = `line ${json.line}, column ${json.column}${source ? ` of ${source}` : ''}`;
+    if (json.path) return { ok: false, issues: [{ path: fieldPath(json.path), message: `${json.reason} (${where})` }] };
+    return { ok: false, issues: [{ path: '', message: `not valid JSON at ${where}: ${json.reason}` }] };
+  }
+  return parseConcept(json.value);
+}

@@ -1,0 +1,101 @@
+/**
+ * A valid concept turned into the SI design model the engine computes with:
+ * every default applied, every unit converted, configurations made absolute.
+ */
+import type { WarningJson } from '../evaluation';
+import { loadingAxis, type Aircraft, type ConfigurationPolar, type Design, type DesignPoint } from '../model';
+import { quantity } from '../units/quantity';
+import { DEFAULT_CD0_INCREMENT, DEFAULT_CD_LINEAR, DEFAULT_CONCEPT_NAME, DEFAULT_ENGINES, DEFAULT_LAPSE_EXPONENT, DEFAULT_SAMPLES } from './defaults';
+import { resolveRequirement } from './resolve-requirement';
+import type { ConceptJson } from './schema';
+
+type AircraftJson = ConceptJson['aircraft'];
+
+/** Each configuration's cd0 = clean cd0 + increment; e and clMax default to clean's. */
+function resolveConfigurations(aero: AircraftJson['aero']): Record<string, ConfigurationPolar> {
+  const { clean, ...others } = aero.configurations;
+  const result: Record<string, ConfigurationPolar> = { clean: { ...clean } };
+  for (const [name, c] of Object.entries(others)) {
+    // The schema lets only clean give an absolute cd0; every other configuration gives an increment.
+    const increment = 'cd0Increment' in c ? c.cd0Increment : undefined;
+    result[name] = {
+      cd0: clean.cd0 + (increment ?? DEFAULT_CD0_INCREMENT),
+      oswaldEfficiency: c.oswaldEfficiency ?? clean.oswaldEfficiency,
+      clMax: c.clMax ?? clean.clMax,
+    };
+  }
+  return result;
+}
+
+function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircraft {
+  const { kind, engines, lapseExponent, criticalAltitude } = aircraft.propulsion;
+  if (criticalAltitude !== undefined && kind !== 'turbocharged-piston') {
+    warnings.push({
+      code: 'field-ignored',
+      field: 'aircraft.propulsion.criticalAltitude',
+      message: `ignored: criticalAltitude applies to a turbocharged-piston engine, not ${kind}`,
+    });
+  }
+  if (lapseExponent !== undefined && kind !== 'turboprop' && kind !== 'turbofan') {
+    warnings.push({
+      code: 'field-ignored',
+      field: 'aircraft.propulsion.lapseExponent',
+      message: `ignored: lapseExponent applies to turboprop and turbofan; a ${kind} engine uses its own lapse model (METHODS.md section 5)`,
+    });
+  }
+  return {
+    takeoffMassKg: quantity(aircraft.takeoffMass, 'mass'),
+    aspectRatio: aircraft.aero.aspectRatio,
+    cdLinear: aircraft.aero.cdLinear ?? DEFAULT_CD_LINEAR,
+    configurations: resolveConfigurations(aircraft.aero),
+    propulsion: {
+      kind,
+      engines: engines ?? DEFAULT_ENGINES,
+      lapseExponent: lapseExponent ?? DEFAULT_LAPSE_EXPONENT[kind],
+      ...(kind === 'turbocharged-piston' && criticalAltitude !== undefined
+        ? { criticalAltitudeM: quantity(criticalAltitude, 'length') }
+        : {}),
+    },
+  };
+}
+
+function resolveDesignPoint(concept: ConceptJson): DesignPoint | undefined {
+  const point = concept.designPoint;
+  if (!point) return undefined;
+  const axis = loadingAxis(concept.aircraft.propulsion.kind);
+  const written = point[axis];
+  const loading = typeof written === 'number' ? written : quantity(written ?? '', axis);
+  return { wingLoadingPa: quantity(point.wingLoading, 'wingLoading'), loading };
+}
+
+function propellerEfficiencyWarnings(concept: ConceptJson): WarningJson[] {
+  if (concept.aircraft.propulsion.kind !== 'turbofan') return [];
+  return concept.requirements.flatMap((r, i) =>
+    r.propellerEfficiency === undefined
+      ? []
+      : [{ code: 'field-ignored', field: `requirements[${i}].propellerEfficiency`, message: `ignored: a turbofan has no propeller (requirement "${r.id}")` }],
+  );
+}
+
+/** The design and the notes made while resolving it. The concept must have passed the schema and checkConcept. */
+export function resolveConcept(concept: ConceptJson): { design: Design; warnings: WarningJson[] } {
+  const warnings: WarningJson[] = [];
+  const aircraft = resolveAircraft(concept.aircraft, warnings);
+  const names = Object.keys(aircraft.configurations);
+  const requirements = concept.requirements.map((r, i) => resolveRequirement(r, i, names, warnings));
+  warnings.push(...propellerEfficiencyWarnings(concept));
+  const range = concept.diagram?.wingLoading;
+  const designPoint = resolveDesignPoint(concept);
+  const design: Design = {
+    name: concept.name?.trim() || DEFAULT_CONCEPT_NAME,
+    aircraft,
+    requirements,
+    diagram: {
+      ...(range ? { wingLoadingRangePa: [quantity(range[0], 'wingLoading'), quantity(range[1], 'wingLoading')] as [number, number] } : {}),
+      samples: concept.diagram?.samples ?? DEFAULT_SAMPLES,
+    },
+    ...(designPoint ? { designPoint } : {}),
+    warnings: [...warnings],
+  };
+  return { design, warnings };
+}

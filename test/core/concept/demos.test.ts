@@ -1,0 +1,156 @@
+import { describe, expect, it } from 'vitest';
+import { DEMO_CONCEPTS, parseConcept, parseConceptText, type ConceptJson } from '../../../core/concept';
+import { evaluateDesign } from '../../../core/diagram';
+import type { Design, Requirement } from '../../../core/model';
+
+const PSF = 47.880258980335843; // Pa per lbf/ft^2, NIST SP 811
+const HP_PER_LBF_PER_W_PER_N = 4.4482216152605 / 745.69987158227022; // NIST SP 811
+
+function resolved(concept: ConceptJson): Design {
+  const parsed = parseConcept(concept);
+  if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
+  return parsed.design;
+}
+
+function demo(slug: string) {
+  const found = DEMO_CONCEPTS.find((d) => d.slug === slug);
+  if (!found) throw new Error(`no demo ${slug}`);
+  return { ...found, design: resolved(found.concept) };
+}
+
+function requirement<K extends Requirement['kind']>(d: Design, kind: K): Array<Extract<Requirement, { kind: K }>> {
+  return d.requirements.filter((r): r is Extract<Requirement, { kind: K }> => r.kind === kind);
+}
+
+describe('DEMO_CONCEPTS', () => {
+  it('offers the four scenarios, each with a title and a summary', () => {
+    expect(DEMO_CONCEPTS.map((d) => d.slug)).toEqual(['trainer', 'utility-twin', 'business-jet', 'survey-drone']);
+    for (const d of DEMO_CONCEPTS) {
+      expect(d.title.length).toBeGreaterThan(3);
+      expect(d.summary.length).toBeGreaterThan(40);
+      expect(d.concept.name).toBe(d.title);
+      // Rule names in the labels are context; the summary says what the numbers are for.
+      expect(d.summary).toMatch(/preliminary sizing: certification requirements come from the applicable authority, and final numbers need licensed engineering review\.$/);
+    }
+  });
+
+  it.each(DEMO_CONCEPTS.map((d) => [d.slug, d] as const))('%s parses with no issue and no warning, unchanged', (_slug, d) => {
+    const parsed = parseConcept(d.concept);
+    if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
+    expect(parsed.warnings).toEqual([]);
+    expect(parsed.concept).toEqual(d.concept);
+    // It is plain JSON: saved as text and read back, it means the same.
+    expect(parseConceptText(JSON.stringify(d.concept, null, 2))).toEqual(parsed);
+  });
+
+  it.each(DEMO_CONCEPTS.map((d) => [d.slug, d] as const))('%s says where each requirement comes from', (_slug, d) => {
+    for (const r of d.concept.requirements) expect(r.label?.length ?? 0).toBeGreaterThan(15);
+  });
+
+  it.each(DEMO_CONCEPTS.map((d) => [d.slug, d] as const))(
+    '%s gives a sensible diagram: a bounded optimum and a feasible design point near it, not on it',
+    (_slug, d) => {
+      const design = resolved(d.concept);
+      const evaluation = evaluateDesign(design);
+      const optimum = evaluation.optimum;
+      if (!optimum) throw new Error('no feasible point');
+      expect(optimum.unbounded ?? false).toBe(false);
+      expect(optimum.active.length).toBeGreaterThanOrEqual(1);
+      const point = evaluation.designPoint;
+      if (!point || !design.designPoint) throw new Error('no design point');
+      expect(point.feasible).toBe(true);
+      expect(point.margins.map((m) => m.id).sort()).toEqual(design.requirements.map((r) => r.id).sort());
+      for (const m of point.margins) expect(Number.isFinite(m.margin)).toBe(true);
+      const yOpt = optimum[evaluation.axis] as number;
+      const dw = Math.abs(point.wingLoading / optimum.wingLoading - 1);
+      const dy = Math.abs(design.designPoint.loading / yOpt - 1);
+      expect(Math.max(dw, dy)).toBeGreaterThan(0.005);
+      expect(dw).toBeLessThan(0.15);
+      expect(dy).toBeLessThan(0.15);
+      expect(evaluation.sizing?.wingArea).toBeGreaterThan(0);
+    },
+  );
+});
+
+describe('demo scenarios', () => {
+  it('trainer: a 750 kg two-seat piston single, stall 45 kt CAS in landing flaps, grass rolls, climb and ceiling', () => {
+    const { design } = demo('trainer');
+    expect(design.aircraft.takeoffMassKg).toBe(750);
+    expect(design.aircraft.propulsion).toMatchObject({ kind: 'piston', engines: 1 });
+    // CS-VLA 49: VS0 at most 45 kt CAS (METHODS.md section 8, from memory); 1 kt = 1852/3600 m/s.
+    const [stall] = requirement(design, 'stall');
+    expect(stall).toMatchObject({ configuration: 'landing', speedMps: expect.closeTo((45 * 1852) / 3600, 9) });
+    // Short grass: rolling friction about 0.05 (METHODS.md section 9, common practice).
+    expect(requirement(design, 'takeoff-ground-roll')[0]).toMatchObject({ rollingFriction: 0.05 });
+    expect(requirement(design, 'landing-ground-roll')).toHaveLength(1);
+    expect(requirement(design, 'cruise')).toHaveLength(1);
+    expect(requirement(design, 'climb-rate')).toHaveLength(1);
+    expect(requirement(design, 'ceiling')).toHaveLength(1);
+    // 14 CFR 23.65(a): 8.3 % all engines, take-off flaps (METHODS.md section 8, confirmed).
+    expect(requirement(design, 'climb-gradient')[0]).toMatchObject({ gradient: 0.083, configuration: 'takeoff' });
+  });
+
+  it('utility twin: two turboprops, a 2,200 m ISA+25 K strip and a one-engine-out gradient', () => {
+    const { design } = demo('utility-twin');
+    expect(design.aircraft.propulsion).toMatchObject({ kind: 'turboprop', engines: 2, lapseExponent: 0.75 });
+    const takeoff = requirement(design, 'takeoff-ground-roll')[0];
+    expect(takeoff).toMatchObject({ altitudeM: 2200, temperatureOffsetK: 25 });
+    expect(requirement(design, 'landing-ground-roll')[0]).toMatchObject({ altitudeM: 2200, temperatureOffsetK: 25 });
+    // 14 CFR 23.2120(b)(3): 2 % one engine out at 400 ft (METHODS.md section 8, confirmed).
+    const oei = requirement(design, 'climb-gradient')[0];
+    expect(oei).toMatchObject({ gradient: 0.02, enginesInoperative: 1, temperatureOffsetK: 25 });
+    expect(oei.altitudeM - takeoff.altitudeM).toBeCloseTo(400 * 0.3048, -1);
+  });
+
+  it('business jet: two turbofans, 2.4 % second segment one engine out, cruise below take-off mass, ceiling', () => {
+    const { design } = demo('business-jet');
+    expect(design.aircraft.propulsion).toMatchObject({ kind: 'turbofan', engines: 2 });
+    // 14 CFR 25.121(b): 2.4 % for two engines, gear up, take-off flaps (METHODS.md section 8, confirmed).
+    expect(requirement(design, 'climb-gradient')[0]).toMatchObject({ gradient: 0.024, enginesInoperative: 1 });
+    expect(requirement(design, 'cruise')[0].massFraction).toBeLessThan(1);
+    expect(requirement(design, 'ceiling')).toHaveLength(1);
+    expect(requirement(design, 'takeoff-ground-roll')).toHaveLength(1);
+    expect(requirement(design, 'landing-ground-roll')).toHaveLength(1);
+    expect(design.designPoint).toBeDefined();
+  });
+
+  it('survey drone: battery-electric, slow, short launch, sustained turn, cruise', () => {
+    const { design } = demo('survey-drone');
+    expect(design.aircraft.propulsion).toMatchObject({ kind: 'electric', engines: 1 });
+    expect(design.aircraft.takeoffMassKg).toBeLessThan(25);
+    expect(requirement(design, 'stall')[0].speedMps).toBeLessThan(15);
+    expect(requirement(design, 'takeoff-ground-roll')[0].distanceM).toBeLessThan(60);
+    // 45 deg bank: n = 1/cos 45 deg = sqrt 2.
+    expect(requirement(design, 'sustained-turn')[0]).toMatchObject({ loadFactor: expect.closeTo(Math.SQRT2, 9) });
+    // A battery does not get lighter in flight.
+    for (const r of design.requirements) expect(r.massFraction).toBe(1);
+  });
+});
+
+describe('demo numbers against the trade\'s typical values', () => {
+  // Wing loading and power loading by class: Raymer, Aircraft Design: A
+  // Conceptual Approach, Tables 5.1, 5.4 and 5.5 (from memory); bands kept wide.
+  const CLASS: Array<[slug: string, wingLoadingPsf: [number, number], loading: [number, number], unit: 'hp/lb' | 'T/W' | 'W/kg']> = [
+    // General-aviation single: about 17 psf and 0.07 hp/lb.
+    ['trainer', [10, 25], [0.05, 0.1], 'hp/lb'],
+    // Twin turboprop: about 40 psf and 0.20 hp/lb.
+    ['utility-twin', [30, 55], [0.1, 0.25], 'hp/lb'],
+    // Business jet: between jet trainer (50 psf) and jet transport (120 psf); T/W about 0.3-0.4.
+    ['business-jet', [50, 100], [0.25, 0.45], 'T/W'],
+    // Small electric UAV: a few psf, tens of watts per kilogram (common practice).
+    ['survey-drone', [1, 5], [30, 120], 'W/kg'],
+  ];
+  it.each(CLASS)('%s sits in its class', (slug, [wLo, wHi], [yLo, yHi], unit) => {
+    const { design } = demo(slug);
+    const evaluation = evaluateDesign(design);
+    const optimum = evaluation.optimum;
+    if (!optimum) throw new Error('no optimum');
+    const psf = optimum.wingLoading / PSF;
+    expect(psf).toBeGreaterThan(wLo);
+    expect(psf).toBeLessThan(wHi);
+    const y = optimum[evaluation.axis] as number;
+    const shown = unit === 'hp/lb' ? y * HP_PER_LBF_PER_W_PER_N : unit === 'W/kg' ? y * 9.80665 : y;
+    expect(shown).toBeGreaterThan(yLo);
+    expect(shown).toBeLessThan(yHi);
+  });
+});
