@@ -1,0 +1,33 @@
+/**
+ * Rate-of-climb requirement, at a given speed or at the best-rate speed.
+ */
+import type { Aircraft, Boundary, ClimbRateRequirement } from '../model';
+import { bestRateSpeed } from './best-rate-speed';
+import { flightCondition, type FlightCondition } from './flight-condition';
+import { loadingRequired } from './master-equation';
+
+/** Speed of a climb at rate RC: the given TAS, else max(V*, k V_s,c). */
+export function climbSpeedAt(
+  c: FlightCondition,
+  wingLoadingPa: number,
+  rateMps: number,
+  minimumSpeedFactor: number,
+  givenSpeedMps?: number,
+): number {
+  if (givenSpeedMps !== undefined) return givenSpeedMps;
+  return wingLoadingPa > 0 ? bestRateSpeed(c, wingLoadingPa, rateMps, minimumSpeedFactor) : NaN;
+}
+
+/** Master equation with n = 1, P_s = RC (Mattingly; METHODS.md section 6). */
+export function climbRateBoundary(requirement: ClimbRateRequirement, aircraft: Aircraft): Boundary {
+  const c = flightCondition(requirement, aircraft);
+  const { rateMps, minimumSpeedFactor, speedMps } = requirement;
+  const speedAt = (w: number): number => climbSpeedAt(c, w, rateMps, minimumSpeedFactor, speedMps);
+  return {
+    type: 'curve',
+    id: requirement.id,
+    kind: requirement.kind,
+    required: (w: number): number => loadingRequired(c, w, speedAt(w), 1, rateMps),
+    speedAt,
+  };
+}

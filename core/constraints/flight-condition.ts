@@ -1,0 +1,38 @@
+/**
+ * Everything a boundary needs about the flight condition of one requirement:
+ * air density, weight fraction, available power or thrust fraction, polar.
+ */
+import { atmosphere } from '../atmosphere';
+import { polarOf, type Polar } from '../aero/drag-polar';
+import type { Aircraft, Requirement } from '../model';
+import { availableFraction } from '../propulsion/available-fraction';
+import { isPropellerDriven } from '../propulsion/propeller';
+
+export interface FlightCondition {
+  densityKgM3: number;
+  /** beta = W/W_TO. */
+  beta: number;
+  /** alpha = lapse x power setting. */
+  alpha: number;
+  polar: Polar;
+  /** Propeller kinds convert T/W to shaft P/W. */
+  propeller: boolean;
+  propellerEfficiency: number;
+}
+
+/**
+ * The condition of a requirement. A configuration the aircraft does not
+ * define falls back to clean (the evaluation warns about it).
+ */
+export function flightCondition(requirement: Requirement, aircraft: Aircraft): FlightCondition {
+  const air = atmosphere(requirement.altitudeM, requirement.temperatureOffsetK);
+  const polar = polarOf(aircraft, requirement.configuration) ?? (polarOf(aircraft, 'clean') as Polar);
+  return {
+    densityKgM3: air.densityKgM3,
+    beta: requirement.massFraction,
+    alpha: availableFraction(aircraft.propulsion, requirement.altitudeM, requirement.temperatureOffsetK, requirement.powerSetting),
+    polar,
+    propeller: isPropellerDriven(aircraft.propulsion.kind),
+    propellerEfficiency: requirement.propellerEfficiency,
+  };
+}

@@ -1,0 +1,30 @@
+/**
+ * Landing ground-roll requirement: a wing-loading limit.
+ */
+import { G0 } from '../units/factors';
+import type { Aircraft, Boundary, LandingGroundRollRequirement } from '../model';
+import { flightCondition } from './flight-condition';
+
+/**
+ * Touchdown speed that stops in the distance: free roll for t_fr, then
+ * constant deceleration a = mu_B g0 (kinematics, METHODS.md section 6):
+ * V_TD = -a t_fr + sqrt((a t_fr)^2 + 2 a S_LG).
+ */
+export function touchdownSpeedForRoll(distanceM: number, brakingFriction: number, freeRollTimeS: number): number {
+  const a = brakingFriction * G0;
+  const at = a * freeRollTimeS;
+  return -at + Math.sqrt(at * at + 2 * a * distanceM);
+}
+
+/** w <= 1/2 rho C_Lmax,L (V_TD/k_TD)^2 / beta, V_TD = k_TD V_s,L (Raymer ch. 17, k_TD 1.15 from memory). */
+export function landingGroundRollBoundary(requirement: LandingGroundRollRequirement, aircraft: Aircraft): Boundary {
+  const c = flightCondition(requirement, aircraft);
+  const vTouchdown = touchdownSpeedForRoll(requirement.distanceM, requirement.brakingFriction, requirement.freeRollTimeS);
+  const vStall = vTouchdown / requirement.touchdownSpeedFactor;
+  return {
+    type: 'limit',
+    id: requirement.id,
+    kind: requirement.kind,
+    wingLoadingMaxPa: (0.5 * c.densityKgM3 * c.polar.clMax * vStall * vStall) / c.beta,
+  };
+}

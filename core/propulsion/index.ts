@@ -1,0 +1,3 @@
+export { pistonLapse, turbochargedPistonLapse, turbopropLapse, turbofanLapse, electricLapse } from './lapse';
+export { lapseAt, availableFraction } from './available-fraction';
+export { isPropellerDriven, shaftPowerLoading } from './propeller';

@@ -1,0 +1,14 @@
+/**
+ * Propeller-driven kinds size shaft power, not thrust.
+ */
+import type { PropulsionKind } from '../model';
+
+/** True for kinds whose diagram axis is shaft power per weight (all but turbofan). */
+export function isPropellerDriven(kind: PropulsionKind): boolean {
+  return kind !== 'turbofan';
+}
+
+/** P/W = (T/W) V / eta_p [W/N], thrust power over propeller efficiency (Anderson, Introduction to Flight, power available). */
+export function shaftPowerLoading(thrustLoading: number, speedMps: number, propellerEfficiency: number): number {
+  return (thrustLoading * speedMps) / propellerEfficiency;
+}

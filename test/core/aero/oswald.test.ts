@@ -1,0 +1,37 @@
+import { describe, expect, it } from 'vitest';
+import { oswaldEstimate, oswaldStraightWing, oswaldSweptWing } from '../../../core/aero/oswald';
+import { assertInDelta } from '../helpers/asserts';
+
+describe('oswaldStraightWing', () => {
+  it('gives 0.811 at aspect ratio 8', () => {
+    // Raymer, Aircraft Design: A Conceptual Approach, 4th ed., eq. 12.48 (from memory): AR 8 -> 0.811, as METHODS.md section 3 quotes.
+    assertInDelta(oswaldStraightWing(8), 0.811, 5e-4);
+  });
+
+  it('falls as aspect ratio grows, staying within the 0.7-0.95 typical band for light-aircraft ratios', () => {
+    // Typical e 0.7-0.95 (METHODS.md section 9, common practice) for AR 6-10.
+    let previous = Infinity;
+    for (const ar of [6, 7, 8, 9, 10]) {
+      const e = oswaldStraightWing(ar);
+      expect(e).toBeLessThan(previous);
+      expect(e).toBeGreaterThan(0.7);
+      expect(e).toBeLessThan(0.95);
+      previous = e;
+    }
+  });
+});
+
+describe('oswaldEstimate', () => {
+  it('uses the straight-wing form up to 30 deg of leading-edge sweep and the swept form beyond', () => {
+    // Raymer 4th ed. section 12.6: eq. 12.49 applies for leading-edge sweep above 30 deg (from memory).
+    const deg = Math.PI / 180;
+    expect(oswaldEstimate(8, 30 * deg)).toBe(oswaldStraightWing(8));
+    expect(oswaldEstimate(8, 35 * deg)).toBe(oswaldSweptWing(8, 35 * deg));
+  });
+
+  it('gives less efficiency with more sweep in the swept form', () => {
+    // (cos L_LE)^0.15 in Raymer eq. 12.49 (from memory) falls with sweep.
+    const deg = Math.PI / 180;
+    expect(oswaldSweptWing(8, 45 * deg)).toBeLessThan(oswaldSweptWing(8, 35 * deg));
+  });
+});

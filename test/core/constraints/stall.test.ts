@@ -1,0 +1,37 @@
+import { describe, expect, it } from 'vitest';
+import { RHO0 } from '../../../core/atmosphere';
+import { stallBoundary } from '../../../core/constraints';
+import { KNOT_MPS, PSF_PA } from '../../../core/units/factors';
+import { aircraft, stall } from '../helpers/design';
+import { assertRelative } from '../helpers/asserts';
+import { limitOf } from './curve';
+
+const twoPointOh = aircraft({ increments: { landing: { cd0Increment: 0.06, clMax: 2.0 } } });
+
+describe('stallBoundary', () => {
+  it('caps wing loading at 1/2 rho0 V^2 C_Lmax exactly', () => {
+    // w <= 1/2 rho0 V_E^2 C_Lmax (METHODS.md section 6) with 61 kt CAS (14 CFR 23.49(c), pre-Amdt 23-64, confirmed).
+    const v = 61 * KNOT_MPS;
+    expect(limitOf(stallBoundary(stall(v), twoPointOh))).toBe((0.5 * RHO0 * v * v * 2.0) / 1);
+  });
+
+  it('agrees with the same limit worked in US customary units: 25.195 lb/ft^2', () => {
+    // rho0 = 0.0023769 slug/ft^3 (Anderson, Introduction to Flight, App. B); 61 kt = 102.956 ft/s; C_Lmax 2.0.
+    assertRelative(limitOf(stallBoundary(stall(61 * KNOT_MPS), twoPointOh)) / PSF_PA, 25.195, 1e-4);
+  });
+
+  it('ignores altitude and temperature, since the speed is calibrated (CAS = EAS)', () => {
+    // METHODS.md section 2: stall limits use V_E = V_C at rho0.
+    const atField = stall(25, { altitudeM: 1500, temperatureOffsetK: 20 });
+    expect(limitOf(stallBoundary(atField, twoPointOh))).toBe(limitOf(stallBoundary(stall(25), twoPointOh)));
+  });
+
+  it('divides by the mass fraction', () => {
+    assertRelative(limitOf(stallBoundary(stall(25, { massFraction: 0.8 }), twoPointOh)), limitOf(stallBoundary(stall(25), twoPointOh)) / 0.8, 1e-15);
+  });
+
+  it('uses the named configuration', () => {
+    const clean = limitOf(stallBoundary(stall(25, { configuration: 'clean' }), twoPointOh));
+    assertRelative(clean, 0.5 * RHO0 * 625 * 1.5, 1e-15);
+  });
+});

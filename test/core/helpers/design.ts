@@ -1,0 +1,142 @@
+/**
+ * Builders of resolved SI Designs for engine tests, with the defaults of
+ * DESIGN.md applied the way the concept resolver applies them.
+ */
+import type {
+  Aircraft,
+  CeilingRequirement,
+  ClimbGradientRequirement,
+  ClimbRateRequirement,
+  ConfigurationPolar,
+  CruiseRequirement,
+  Design,
+  DesignPoint,
+  LandingGroundRollRequirement,
+  Propulsion,
+  PropulsionKind,
+  Requirement,
+  StallRequirement,
+  SustainedTurnRequirement,
+  TakeoffGroundRollRequirement,
+} from '../../../core/model';
+import { FOOT_PER_MINUTE_MPS } from '../../../core/units/factors';
+
+type Extra<R extends Requirement> = Partial<Omit<R, 'kind'>>;
+
+function common(kind: Requirement['kind'], id: string) {
+  const propellerEfficiency = kind === 'takeoff-ground-roll' ? 0.55 : kind === 'cruise' || kind === 'sustained-turn' ? 0.8 : 0.75;
+  const configuration =
+    kind === 'stall' || kind === 'landing-ground-roll' ? 'landing' : kind === 'takeoff-ground-roll' || kind === 'climb-gradient' ? 'takeoff' : 'clean';
+  return { id, enabled: true, altitudeM: 0, temperatureOffsetK: 0, massFraction: 1, powerSetting: 1, propellerEfficiency, configuration };
+}
+
+export function stall(speedMps: number, extra: Extra<StallRequirement> = {}): StallRequirement {
+  return { ...common('stall', 'stall'), kind: 'stall', speedMps, ...extra };
+}
+
+export function landingRoll(distanceM: number, extra: Extra<LandingGroundRollRequirement> = {}): LandingGroundRollRequirement {
+  return {
+    ...common('landing-ground-roll', 'landing'),
+    kind: 'landing-ground-roll',
+    distanceM,
+    brakingFriction: 0.3,
+    touchdownSpeedFactor: 1.15,
+    freeRollTimeS: 0,
+    ...extra,
+  };
+}
+
+export function takeoffRoll(distanceM: number, extra: Extra<TakeoffGroundRollRequirement> = {}): TakeoffGroundRollRequirement {
+  return {
+    ...common('takeoff-ground-roll', 'takeoff'),
+    kind: 'takeoff-ground-roll',
+    distanceM,
+    rollingFriction: 0.04,
+    clGroundRun: 0.5,
+    liftoffSpeedFactor: 1.1,
+    ...extra,
+  };
+}
+
+export function cruise(speedMps: number, extra: Extra<CruiseRequirement> = {}): CruiseRequirement {
+  return { ...common('cruise', 'cruise'), kind: 'cruise', speedMps, ...extra };
+}
+
+export function climbRate(rateMps: number, extra: Extra<ClimbRateRequirement> = {}): ClimbRateRequirement {
+  return { ...common('climb-rate', 'climb'), kind: 'climb-rate', rateMps, minimumSpeedFactor: 1.2, ...extra };
+}
+
+export function climbGradient(gradient: number, extra: Extra<ClimbGradientRequirement> = {}): ClimbGradientRequirement {
+  return { ...common('climb-gradient', 'gradient'), kind: 'climb-gradient', gradient, enginesInoperative: 0, speedFactor: 1.2, ...extra };
+}
+
+export function ceiling(altitudeM: number, extra: Extra<CeilingRequirement> = {}): CeilingRequirement {
+  return { ...common('ceiling', 'ceiling'), kind: 'ceiling', altitudeM, rateMps: 100 * FOOT_PER_MINUTE_MPS, minimumSpeedFactor: 1.2, ...extra };
+}
+
+export function sustainedTurn(speedMps: number, loadFactor: number, extra: Extra<SustainedTurnRequirement> = {}): SustainedTurnRequirement {
+  return { ...common('sustained-turn', 'turn'), kind: 'sustained-turn', speedMps, loadFactor, ...extra };
+}
+
+export interface AircraftOptions {
+  takeoffMassKg?: number;
+  aspectRatio?: number;
+  cdLinear?: number;
+  clean?: ConfigurationPolar;
+  /** Other configurations as increments over clean: cd0Increment, and optional e and clMax. */
+  increments?: Record<string, { cd0Increment?: number; oswaldEfficiency?: number; clMax?: number }>;
+  kind?: PropulsionKind;
+  engines?: number;
+  lapseExponent?: number;
+  criticalAltitudeM?: number;
+}
+
+/** An aircraft with configurations resolved to absolute values, as the concept resolver does. */
+export function aircraft(o: AircraftOptions = {}): Aircraft {
+  const clean = o.clean ?? { cd0: 0.03, oswaldEfficiency: 0.8, clMax: 1.5 };
+  const configurations: Record<string, ConfigurationPolar> = { clean };
+  const increments = o.increments ?? {
+    takeoff: { cd0Increment: 0.015, oswaldEfficiency: 0.76, clMax: 1.8 },
+    landing: { cd0Increment: 0.06, oswaldEfficiency: 0.72, clMax: 2.1 },
+  };
+  for (const [name, inc] of Object.entries(increments)) {
+    configurations[name] = {
+      cd0: clean.cd0 + (inc.cd0Increment ?? 0),
+      oswaldEfficiency: inc.oswaldEfficiency ?? clean.oswaldEfficiency,
+      clMax: inc.clMax ?? clean.clMax,
+    };
+  }
+  const kind = o.kind ?? 'piston';
+  const propulsion: Propulsion = {
+    kind,
+    engines: o.engines ?? 1,
+    lapseExponent: o.lapseExponent ?? (kind === 'turboprop' ? 0.75 : 1),
+    ...(o.criticalAltitudeM === undefined ? {} : { criticalAltitudeM: o.criticalAltitudeM }),
+  };
+  return {
+    takeoffMassKg: o.takeoffMassKg ?? 750,
+    aspectRatio: o.aspectRatio ?? 7.5,
+    cdLinear: o.cdLinear ?? 0,
+    configurations,
+    propulsion,
+  };
+}
+
+export interface DesignOptions {
+  name?: string;
+  aircraft?: Aircraft;
+  requirements: Requirement[];
+  rangePa?: [number, number];
+  samples?: number;
+  designPoint?: DesignPoint;
+}
+
+export function design(o: DesignOptions): Design {
+  return {
+    name: o.name ?? 'Test design',
+    aircraft: o.aircraft ?? aircraft(),
+    requirements: o.requirements,
+    diagram: { ...(o.rangePa ? { wingLoadingRangePa: o.rangePa } : {}), samples: o.samples ?? 201 },
+    ...(o.designPoint ? { designPoint: o.designPoint } : {}),
+  };
+}

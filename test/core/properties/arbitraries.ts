@@ -1,0 +1,100 @@
+/**
+ * fast-check generators of valid resolved Designs, with values across and a
+ * little beyond METHODS.md section 9's typical ranges.
+ */
+import fc from 'fast-check';
+import type { Design, PropulsionKind, Requirement } from '../../../core/model';
+import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffRoll } from '../helpers/design';
+
+const kinds: PropulsionKind[] = ['piston', 'turbocharged-piston', 'turboprop', 'turbofan', 'electric'];
+
+export const aircraftArb = fc
+  .record({
+    kind: fc.constantFrom(...kinds),
+    engines: fc.integer({ min: 1, max: 4 }),
+    takeoffMassKg: fc.double({ min: 20, max: 60000, noNaN: true }),
+    aspectRatio: fc.double({ min: 4, max: 20, noNaN: true }),
+    cdLinear: fc.double({ min: -0.01, max: 0.01, noNaN: true }),
+    cd0: fc.double({ min: 0.012, max: 0.05, noNaN: true }),
+    e: fc.double({ min: 0.65, max: 0.95, noNaN: true }),
+    clMax: fc.double({ min: 1.0, max: 1.8, noNaN: true }),
+    takeoffDrag: fc.double({ min: 0.005, max: 0.04, noNaN: true }),
+    takeoffLift: fc.double({ min: 0, max: 0.7, noNaN: true }),
+    landingDrag: fc.double({ min: 0.03, max: 0.09, noNaN: true }),
+    landingLift: fc.double({ min: 0.2, max: 1.3, noNaN: true }),
+    lapseExponent: fc.double({ min: 0.6, max: 1, noNaN: true }),
+    criticalAltitudeM: fc.double({ min: 0, max: 7000, noNaN: true }),
+  })
+  .map((a) =>
+    aircraft({
+      kind: a.kind,
+      engines: a.engines,
+      takeoffMassKg: a.takeoffMassKg,
+      aspectRatio: a.aspectRatio,
+      cdLinear: a.cdLinear,
+      clean: { cd0: a.cd0, oswaldEfficiency: a.e, clMax: a.clMax },
+      increments: {
+        takeoff: { cd0Increment: a.takeoffDrag, oswaldEfficiency: a.e * 0.95, clMax: a.clMax + a.takeoffLift },
+        landing: { cd0Increment: a.landingDrag, oswaldEfficiency: a.e * 0.9, clMax: a.clMax + a.landingLift },
+      },
+      lapseExponent: a.lapseExponent,
+      criticalAltitudeM: a.criticalAltitudeM,
+    }),
+  );
+
+const common = {
+  altitudeM: fc.double({ min: 0, max: 3000, noNaN: true }),
+  temperatureOffsetK: fc.double({ min: -20, max: 35, noNaN: true }),
+  massFraction: fc.double({ min: 0.7, max: 1, noNaN: true }),
+  powerSetting: fc.double({ min: 0.5, max: 1, noNaN: true }),
+  propellerEfficiency: fc.double({ min: 0.5, max: 0.9, noNaN: true }),
+};
+
+/** One requirement of any kind; `engines` bounds engines inoperative. */
+export function requirementArb(engines: number): fc.Arbitrary<Requirement> {
+  return fc.oneof(
+    fc.record({ v: fc.double({ min: 15, max: 60, noNaN: true }), ...common }).map(({ v, ...c }) => stall(v, { ...c })),
+    fc.record({ d: fc.double({ min: 150, max: 2000, noNaN: true }), ...common }).map(({ d, ...c }) => landingRoll(d, c)),
+    fc
+      .record({ d: fc.double({ min: 40, max: 2500, noNaN: true }), mu: fc.double({ min: 0.02, max: 0.12, noNaN: true }), ...common })
+      .map(({ d, mu, ...c }) => takeoffRoll(d, { ...c, rollingFriction: mu })),
+    fc
+      .record({ v: fc.double({ min: 20, max: 260, noNaN: true }), h: fc.double({ min: 0, max: 12000, noNaN: true }), ...common })
+      .map(({ v, h, ...c }) => cruise(v, { ...c, altitudeM: h })),
+    fc
+      .record({ rc: fc.double({ min: 0.5, max: 20, noNaN: true }), given: fc.option(fc.double({ min: 20, max: 150, noNaN: true }), { nil: undefined }), ...common })
+      .map(({ rc, given, ...c }) => climbRate(rc, { ...c, ...(given === undefined ? {} : { speedMps: given }) })),
+    fc
+      .record({ g: fc.double({ min: 0, max: 0.1, noNaN: true }), k: fc.integer({ min: 0, max: engines }), ...common })
+      .map(({ g, k, ...c }) => climbGradient(g, { ...c, enginesInoperative: k })),
+    fc
+      .record({ h: fc.double({ min: 1000, max: 14000, noNaN: true }), rc: fc.double({ min: 0, max: 2, noNaN: true }), ...common })
+      .map(({ h, rc, ...c }) => ceiling(h, { ...c, rateMps: rc })),
+    fc
+      .record({ v: fc.double({ min: 20, max: 200, noNaN: true }), n: fc.double({ min: 1, max: 4, noNaN: true }), ...common })
+      .map(({ v, n, ...c }) => sustainedTurn(v, n, c)),
+  );
+}
+
+export const designArb: fc.Arbitrary<Design> = aircraftArb.chain((ac) =>
+  fc
+    .record({
+      requirements: fc.array(requirementArb(ac.propulsion.engines), { minLength: 1, maxLength: 8 }),
+      range: fc.option(
+        fc.tuple(fc.double({ min: 20, max: 2000, noNaN: true }), fc.double({ min: 1.2, max: 20, noNaN: true })).map(([lo, f]): [number, number] => [lo, lo * f]),
+        { nil: undefined },
+      ),
+      samples: fc.integer({ min: 2, max: 300 }),
+      point: fc.option(fc.tuple(fc.double({ min: 30, max: 8000, noNaN: true }), fc.double({ min: 0, max: 60, noNaN: true })), { nil: undefined }),
+      disabled: fc.array(fc.boolean(), { minLength: 8, maxLength: 8 }),
+    })
+    .map(({ requirements, range, samples, point, disabled }) =>
+      design({
+        aircraft: ac,
+        requirements: requirements.map((r, i) => ({ ...r, id: `r${i}`, enabled: i === 0 || !disabled[i] })),
+        ...(range ? { rangePa: range } : {}),
+        samples,
+        ...(point ? { designPoint: { wingLoadingPa: point[0], loading: point[1] } } : {}),
+      }),
+    ),
+);
