@@ -41,3 +41,4 @@ export {
 
 export * from './concept';
 export * from './diagram';
+export * from './studies';

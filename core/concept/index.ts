@@ -4,7 +4,7 @@
  */
 export { CONCEPT_FORMAT, formatIssue, type ConceptIssue } from './format';
 export type { ConceptJson, RequirementJson } from './schema';
-export { parseConcept, parseConceptText, type ParsedConcept } from './parse';
+export { parseConcept, parseConceptText, type ParsedConcept, type ConceptUncertainty } from './parse';
 export {
   migrateConcept,
   createConceptMigrator,

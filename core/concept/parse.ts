@@ -12,9 +12,17 @@ import { parseJsonText } from './json-text';
 import { migrateConcept } from './migrate';
 import { resolveConcept } from './resolve';
 import { conceptSchema, type ConceptJson } from './schema';
+import { resolveUncertainty, type UncertainParameter } from '../studies/uncertainty-schema';
+
+/** The concept's `uncertainty` block resolved against its design. */
+export interface ConceptUncertainty {
+  seed: number;
+  samples: number;
+  parameters: UncertainParameter[];
+}
 
 export type ParsedConcept =
-  | { ok: true; concept: ConceptJson; design: Design; warnings: WarningJson[] }
+  | { ok: true; concept: ConceptJson; design: Design; warnings: WarningJson[]; uncertainty?: ConceptUncertainty }
   | { ok: false; issues: ConceptIssue[] };
 
 /**
@@ -33,7 +41,12 @@ export function parseConcept(input: unknown): ParsedConcept {
     const { design, warnings } = resolveConcept(checked.data);
     // A copy of what was written keeps its key order and leaves the caller's object alone.
     const concept = structuredClone(migrated.concept) as ConceptJson;
-    return { ok: true, concept, design, warnings: [...migrated.warnings, ...warnings] };
+    const result = { ok: true as const, concept, design, warnings: [...migrated.warnings, ...warnings] };
+    if (checked.data.uncertainty === undefined) return result;
+    const uncertainty = resolveUncertainty(checked.data.uncertainty, design, checked.data);
+    if (!uncertainty.ok) return { ok: false, issues: uncertainty.issues };
+    const { seed, samples, parameters } = uncertainty;
+    return { ...result, uncertainty: { seed, samples, parameters } };
   } catch (error) {
     const reason = error instanceof Error ? error.message : String(error);
     return { ok: false, issues: [{ path: '', message: `the concept could not be read: ${reason}` }] };

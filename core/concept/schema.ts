@@ -9,6 +9,7 @@ import { aircraftSchema } from './aircraft-schema';
 import { CONCEPT_FORMAT } from './format';
 import { quantityField, ratioField } from './quantity-field';
 import { requirementSchema } from './requirement-schema';
+import { uncertaintySchema } from '../studies/uncertainty-schema';
 
 const wingLoading = quantityField('wingLoading', { above: 0 });
 
@@ -30,6 +31,8 @@ export const conceptShape = {
   requirements: z.array(requirementSchema).min(1),
   diagram: z.strictObject(diagramShape).optional(),
   designPoint: z.strictObject(designPointShape).optional(),
+  /** Ranges on assumptions for trade studies (core/studies/uncertainty-schema.ts). */
+  uncertainty: uncertaintySchema.optional(),
 };
 
 export const conceptSchema = z.strictObject(conceptShape);

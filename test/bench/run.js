@@ -9,6 +9,7 @@ const root = new URL('../..', import.meta.url).pathname;
 const benches = [
   ['Engine: evaluation time per demo', 'test/bench/engine.ts'],
   ['Project file: save, list, open, size', 'test/bench/store.ts'],
+  ['Trade studies: bands, tornado, Monte Carlo', 'test/bench/studies.ts'],
   ['Designer window: drag to redraw', 'test/bench/drag.ts'],
 ];
 let failed = 0;
