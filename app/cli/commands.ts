@@ -4,12 +4,16 @@
  */
 import type { Command } from 'commander';
 import type { CliIO } from './io';
+import { registerDemo } from './demo';
 import { registerEvaluate } from './evaluate';
 import { registerProject } from './project';
+import { registerServe } from './serve';
 
 export type SetExitCode = (code: number) => void;
 
 export function registerCommands(program: Command, io: CliIO, setExitCode: SetExitCode): void {
   registerEvaluate(program, io, setExitCode);
   registerProject(program, io, setExitCode);
+  registerDemo(program, io, setExitCode);
+  registerServe(program, io, setExitCode);
 }

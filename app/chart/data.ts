@@ -1,0 +1,125 @@
+/**
+ * The diagram's data: an evaluation (SI) turned into plot series in display
+ * units. First step of data -> scales -> drawing; no DOM, no Node, so the
+ * designer window and the SVG writer draw from the same model.
+ */
+import type { Evaluation } from '../../core/evaluation';
+import type { LoadingAxis } from '../../core/model';
+import { displayUnit, toDisplay, type UnitSystem } from '../../core/units/display';
+import { upperEnvelope } from './envelope';
+import { designPointOf, optimumPoint } from './points';
+import { boundarySeries, overlaySeries } from './series';
+
+export { upperEnvelope } from './envelope';
+export { PLOT_LABEL_CHARS } from './series';
+
+export interface SeriesCommon {
+  id: string;
+  kind: string;
+  /** The requirement's label, else its id. */
+  label: string;
+  /** What the plot writes beside the boundary: the label when it is short, else the id. */
+  plotLabel: string;
+  /** The requirement kind in words. */
+  kindTitle: string;
+  colour: string;
+  /** SVG dash pattern; '' for a solid line. */
+  dash: string;
+  /** Binds at the optimum. */
+  binding: boolean;
+}
+
+export interface CurveSeries extends SeriesCommon {
+  type: 'curve';
+  /** [wing loading, required loading or null], display units, in sample order. */
+  points: Array<[number, number | null]>;
+}
+
+export interface LimitSeries extends SeriesCommon {
+  type: 'limit';
+  /** Largest wing loading the requirement allows, display units. */
+  wingLoading: number;
+}
+
+export type BoundarySeries = CurveSeries | LimitSeries;
+
+export interface MarkedPoint {
+  wingLoading: number;
+  loading: number;
+}
+
+export interface OverlaySeries {
+  name: string;
+  curves: CurveSeries[];
+  limits: LimitSeries[];
+  optimum: MarkedPoint | null;
+}
+
+export interface ChartData {
+  title: string;
+  system: UnitSystem;
+  axis: LoadingAxis;
+  /** Display unit strings; '' for the dimensionless thrust-to-weight. */
+  units: { wingLoading: string; loading: string };
+  curves: CurveSeries[];
+  limits: LimitSeries[];
+  /** Every boundary, curves and limits together, in the concept's order. */
+  boundaries: BoundarySeries[];
+  optimum: (MarkedPoint & { unbounded: boolean; active: string[] }) | null;
+  designPoint: (MarkedPoint & { feasible: boolean }) | null;
+  /** The evaluated wing-loading range, display units. */
+  wingLoadingRange: [number, number];
+  /** Largest wing loading every limit allows, never beyond the range. */
+  wingLoadingLimit: number;
+  /** Upper envelope of the curves at each sample; null where some curve cannot be met. */
+  envelope: Array<[number, number | null]>;
+  overlays: OverlaySeries[];
+}
+
+export interface ChartDataOptions {
+  system?: UnitSystem;
+  /** Concept name shown as the diagram's title. */
+  title?: string;
+  /** Other evaluations drawn faintly behind this one, e.g. an earlier version. */
+  overlays?: ReadonlyArray<{ name: string; evaluation: Evaluation }>;
+}
+
+export function chartData(evaluation: Evaluation, options: ChartDataOptions = {}): ChartData {
+  const system = options.system ?? 'si';
+  const axis = evaluation.axis;
+  const active = new Set(evaluation.optimum?.active ?? []);
+  const { curves, limits, boundaries } = boundarySeries(evaluation.boundaries, axis, system, active);
+  const wingLoadingRange = evaluatedRange(curves, limits, evaluation, system);
+  const tightest = Math.min(...limits.map((limit) => limit.wingLoading), wingLoadingRange[1]);
+  return {
+    title: options.title ?? '',
+    system,
+    axis,
+    units: { wingLoading: displayUnit('wingLoading', system).unit, loading: displayUnit(axis, system).unit },
+    curves,
+    limits,
+    boundaries,
+    optimum: optimumPoint(evaluation, system),
+    designPoint: designPointOf(evaluation, system),
+    wingLoadingRange,
+    wingLoadingLimit: tightest,
+    envelope: upperEnvelope(curves, wingLoadingRange),
+    overlays: (options.overlays ?? []).map(({ name, evaluation: other }) => overlaySeries(name, other, axis, system)),
+  };
+}
+
+/** The sampled wing-loading range; with no curves, a range that shows the limits and points. */
+function evaluatedRange(curves: CurveSeries[], limits: LimitSeries[], evaluation: Evaluation, system: UnitSystem): [number, number] {
+  const xs = curves.flatMap((curve) => curve.points.map((point) => point[0])).filter(Number.isFinite);
+  if (xs.length > 1) {
+    const lo = Math.min(...xs);
+    const hi = Math.max(...xs);
+    if (hi > lo) return [lo, hi];
+  }
+  const siMarks = [evaluation.optimum?.wingLoading, evaluation.designPoint?.wingLoading]
+    .filter((w): w is number => w !== undefined)
+    .map((w) => toDisplay(w, 'wingLoading', system));
+  const marks = [...limits.map((limit) => limit.wingLoading), ...siMarks].filter((w) => Number.isFinite(w) && w > 0);
+  const top = marks.length > 0 ? Math.max(...marks) * 1.25 : toDisplay(2000, 'wingLoading', system);
+  return [0, top];
+}

@@ -1,0 +1,61 @@
+/**
+ * Loftpoint's diagram colours: calm, print-friendly inks on white, one per
+ * requirement kind, shared by the SVG writer and the designer window so a
+ * boundary looks the same wherever it is drawn.
+ */
+import type { RequirementKind } from '../../core/model';
+
+export const KIND_COLOURS: Readonly<Record<RequirementKind, string>> = {
+  stall: '#33658a', // harbour blue
+  'landing-ground-roll': '#6b5b95', // heather
+  'takeoff-ground-roll': '#b8632b', // kiln orange
+  cruise: '#2e7d5b', // pine
+  'climb-rate': '#a63d4f', // brick
+  'climb-gradient': '#b98b12', // ochre
+  ceiling: '#6e4f36', // walnut
+  'sustained-turn': '#2a8a9c', // lagoon
+};
+
+/** Dash patterns that tell apart two boundaries of the same kind (first one solid). */
+export const KIND_DASHES: readonly string[] = ['', '7 4', '2 3', '10 3 2 3'];
+
+export const CHART_INKS = {
+  background: '#ffffff',
+  text: '#1f2933',
+  mutedText: '#52606d',
+  axis: '#3e4c59',
+  grid: '#e4e7eb',
+  plotFrame: '#9aa5b1',
+  feasibleFill: '#d9ebdf',
+  feasibleEdge: '#8fbf9f',
+  optimum: '#1f2933',
+  designPoint: '#b3365b',
+  overlay: '#8a94a0',
+  caution: '#7b4b00',
+} as const;
+
+/** Colour for a requirement kind; an unknown kind (a newer file) draws in the axis ink. */
+export function kindColour(kind: string): string {
+  return (KIND_COLOURS as Record<string, string>)[kind] ?? CHART_INKS.axis;
+}
+
+/** Dash pattern for the n-th boundary (0-based) of one kind. */
+export function kindDash(indexWithinKind: number): string {
+  return KIND_DASHES[indexWithinKind % KIND_DASHES.length];
+}
+
+/** Requirement kinds as people say them, for legends and reports. */
+export const KIND_TITLES: Readonly<Record<RequirementKind, string>> = {
+  stall: 'Stall speed',
+  'landing-ground-roll': 'Landing ground roll',
+  'takeoff-ground-roll': 'Take-off ground roll',
+  cruise: 'Cruise speed',
+  'climb-rate': 'Rate of climb',
+  'climb-gradient': 'Climb gradient',
+  ceiling: 'Ceiling',
+  'sustained-turn': 'Sustained turn',
+};
+
+export function kindTitle(kind: string): string {
+  return (KIND_TITLES as Record<string, string>)[kind] ?? kind;
+}

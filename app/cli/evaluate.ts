@@ -1,0 +1,129 @@
+/**
+ * `loftpoint evaluate FILE [--version N] [--json | --csv | --svg OUT] [--units si|us]`:
+ * evaluate a concept (a JSON file, or a stored version of a project file)
+ * and print a report, the evaluation JSON, the boundaries as CSV, or write
+ * the diagram as SVG. The whole output is built before anything is printed,
+ * so bad input never leaves partial output behind.
+ */
+import { closeSync, openSync, readSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
+import type { Command } from 'commander';
+import { evaluateDesign, type Evaluation, type UnitSystem } from '../../core';
+import { constraintDiagramSvg } from '../chart/svg';
+import type { SetExitCode } from './commands';
+import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
+import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
+import { evaluationCsv } from './evaluate-csv';
+import { evaluationReport } from './evaluate-report';
+import type { CliIO } from './io';
+
+export interface EvaluateOptions {
+  version?: string;
+  json?: boolean;
+  csv?: boolean;
+  svg?: string;
+  units?: string;
+}
+
+export function registerEvaluate(program: Command, io: CliIO, setExitCode: SetExitCode): void {
+  program
+    .command('evaluate')
+    .description(
+      'Evaluate a concept: which requirements bind, by how much, the optimum, the design point,\n' +
+        'wing area and installed power or thrust. Preliminary sizing only.',
+    )
+    .argument('<file>', 'a concept JSON file, or a project file with --version')
+    .option('--version <n>', 'the stored version to evaluate (project files only)')
+    .option('--json', 'print the evaluation as JSON (always SI units)')
+    .option('--csv', 'print the sampled boundaries as CSV')
+    .option('--svg <out>', 'write the constraint diagram to an SVG file')
+    .option('--units <system>', 'units of the report, CSV and SVG: si or us', 'si')
+    .action(async (file: string, options: EvaluateOptions) => {
+      try {
+        io.out(await runEvaluate(file, options));
+        setExitCode(EXIT_OK);
+      } catch (error) {
+        if (!(error instanceof ProjectReadFailure)) throw error;
+        io.err(`loftpoint: ${error.line}\n`);
+        setExitCode(EXIT_FAILURE);
+      }
+    });
+}
+
+/** Everything `evaluate` prints, built in full; throws InputError on bad input. */
+export async function runEvaluate(file: string, options: EvaluateOptions): Promise<string> {
+  const modes = (['json', 'csv', 'svg'] as const).filter((mode) => options[mode] !== undefined && options[mode] !== false);
+  if (modes.length > 1) {
+    throw new InputError(`choose one output: ${modes.map((mode) => `--${mode}`).join(' and ')} cannot be used together`, file, `--${modes[1]}`);
+  }
+  const system = unitSystem(file, options.units);
+  if (options.svg !== undefined && options.svg.trim() === '') throw new InputError('needs a file name to write, e.g. --svg diagram.svg', file, '--svg');
+  const input = await readEvaluateInput(file, options.version);
+  const evaluation = evaluateDesign(input.design);
+  const name = input.design.name;
+  if (options.json) return `${JSON.stringify(evaluation, null, 2)}\n`;
+  if (options.csv) return evaluationCsv({ name, evaluation, system });
+  if (options.svg !== undefined) {
+    const out = writeSvg(file, options.svg, evaluation, name, system);
+    return `Wrote the constraint diagram of ${oneLine(name.trim() || input.source)} to ${out}\n`;
+  }
+  return evaluationReport({ source: input.source, design: input.design, evaluation, conceptWarnings: input.warnings, system });
+}
+
+function unitSystem(file: string, units: string | undefined): UnitSystem {
+  const value = (units ?? 'si').trim().toLowerCase();
+  if (value === 'si' || value === 'us') return value;
+  throw new InputError(`must be si or us, not "${oneLine(units ?? '')}"`, file, '--units');
+}
+
+function oneLine(text: string): string {
+  return text.replace(/\s*[\r\n]+\s*/g, ' ');
+}
+
+/** An existing file is replaced only when it is an SVG: never the concept, a project or anything else. */
+function refuseToReplace(file: string, out: string, target: string): void {
+  let stats;
+  try {
+    stats = statSync(target);
+  } catch {
+    return;
+  }
+  if (stats.isDirectory()) throw new InputError(`${out} is a folder; give a file name such as ${join(out, 'diagram.svg')}`, file, '--svg');
+  if (target === resolve(file)) throw new InputError('names the file being evaluated; give the SVG its own name', file, '--svg');
+  let head = '';
+  try {
+    const fd = openSync(target, 'r');
+    try {
+      const bytes = Buffer.alloc(2048);
+      head = bytes.subarray(0, readSync(fd, bytes, 0, bytes.length, 0)).toString('utf8');
+    } finally {
+      closeSync(fd);
+    }
+  } catch {
+    head = '';
+  }
+  if (!/<svg[\s>]/.test(head)) throw new InputError(`${out} exists and is not an SVG file; it was left as it was (choose another name)`, file, '--svg');
+}
+
+/** Write next to the target and rename, so a failed write never leaves half a file. */
+function writeSvg(file: string, out: string, evaluation: Evaluation, name: string, system: UnitSystem): string {
+  const target = resolve(out);
+  refuseToReplace(file, out, target);
+  const svg = constraintDiagramSvg(evaluation, { title: name, system });
+  const temporary = `${target}.${process.pid}.tmp`;
+  try {
+    writeFileSync(temporary, svg, 'utf8');
+    renameSync(temporary, target);
+  } catch (error) {
+    rmSync(temporary, { force: true });
+    const code = (error as NodeJS.ErrnoException).code;
+    const reason =
+      code === 'ENOENT'
+        ? `the folder ${dirname(target)} does not exist`
+        : code === 'EACCES' || code === 'EPERM' || code === 'EROFS'
+          ? `cannot write ${out} (permission denied)`
+          : `cannot write ${out} (${code ?? (error instanceof Error ? error.message : String(error))})`;
+    throw new InputError(reason, file, '--svg');
+  }
+  return target;
+}
