@@ -24,22 +24,25 @@ function npx(bin) {
   return join(root, 'node_modules', '.bin', bin);
 }
 
-/** Debian's Chromium for the browser tests; installed when we may, else a one-line instruction. */
-function findChromium() {
-  const candidates = [process.env.CHROMIUM_PATH, '/usr/bin/chromium', '/usr/bin/chromium-browser'].filter(Boolean);
-  const found = candidates.find((path) => existsSync(path));
-  if (found) return found;
+/**
+ * Debian's Chromium (browser tests, PDF reports) and poppler-utils (pdftotext,
+ * to read reports back). Installed when we may (root with apt), else the
+ * caller prints a one-line instruction.
+ */
+function ensureDebianTools() {
+  const chromiumCandidates = [process.env.CHROMIUM_PATH, '/usr/bin/chromium', '/usr/bin/chromium-browser'].filter(Boolean);
+  const findChromium = () => chromiumCandidates.find((path) => existsSync(path)) ?? null;
+  const missing = [];
+  if (!findChromium()) missing.push('chromium');
+  if (!existsSync('/usr/bin/pdftotext')) missing.push('poppler-utils');
   const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
-  if (isRoot && existsSync('/usr/bin/apt-get')) {
-    console.log('\n== Chromium not found: installing Debian\'s chromium package');
-    spawnSync('apt-get', ['update'], { stdio: 'inherit' });
-    spawnSync('apt-get', ['install', '-y', '--no-install-recommends', 'chromium'], {
-      stdio: 'inherit',
-      env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' },
-    });
-    if (existsSync('/usr/bin/chromium')) return '/usr/bin/chromium';
+  if (missing.length > 0 && isRoot && existsSync('/usr/bin/apt-get')) {
+    console.log(`\n== Installing Debian packages the tests need: ${missing.join(' ')}`);
+    const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
+    spawnSync('apt-get', ['update'], { stdio: 'inherit', env });
+    spawnSync('apt-get', ['install', '-y', '--no-install-recommends', ...missing], { stdio: 'inherit', env });
   }
-  return null;
+  return { chromium: findChromium(), pdftotext: existsSync('/usr/bin/pdftotext') };
 }
 
 function countVitest(file) {
@@ -59,6 +62,11 @@ function countPlaywright(file) {
   totals.skipped += stats.skipped ?? 0;
 }
 
+const tools = ensureDebianTools();
+if (tools.chromium) process.env.CHROMIUM_PATH = tools.chromium;
+if (!tools.chromium) console.error('Browser tests and PDF reports need Chromium: install it with `apt-get install -y chromium` or set CHROMIUM_PATH.');
+if (!tools.pdftotext) console.error('Report tests read PDFs with pdftotext: install it with `apt-get install -y poppler-utils`.');
+
 run('Type check', npx('tsc'), ['--noEmit', '-p', 'tsconfig.json']);
 
 const vitestReport = join(reports, 'vitest.json');
@@ -72,9 +80,8 @@ countVitest(vitestReport);
 
 const browserConfig = join(root, 'test/browser/playwright.config.ts');
 if (existsSync(browserConfig)) {
-  const chromium = findChromium();
+  const chromium = tools.chromium;
   if (!chromium) {
-    console.error('Browser tests need Chromium: install it with `apt-get install -y chromium` or set CHROMIUM_PATH.');
     broken.push('browser tests (no Chromium)');
   } else {
     const playwrightReport = join(reports, 'playwright.json');
