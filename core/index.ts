@@ -5,6 +5,7 @@
  */
 export * from './model';
 export * from './evaluation';
+export { PRELIMINARY_CAUTION } from './caution';
 
 export { G0 } from './units/factors';
 export * as factors from './units/factors';

@@ -1,3 +1,2 @@
-/** The preliminary-sizing caution that every diagram and report carries. */
-export const SIZING_CAUTION =
-  'Preliminary sizing — certification requirements come from the applicable authority; final numbers need licensed engineering review.';
+/** The preliminary-sizing caution that every diagram and report carries (one wording, from core). */
+export { PRELIMINARY_CAUTION as SIZING_CAUTION } from '../../core/caution';

@@ -428,5 +428,4 @@ export type RemoteService = {
 };
 
 /** The preliminary-sizing caution every human-readable output carries. */
-export const PRELIMINARY_CAUTION =
-  'Preliminary sizing only: certification requirements come from the applicable authority, and final numbers need licensed engineering review.';
+export { PRELIMINARY_CAUTION } from '../../core/caution';
