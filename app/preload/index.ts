@@ -1,0 +1,26 @@
+/**
+ * The bridge: the page gets `window.api` with one function per service
+ * method, menu commands, and export through a save dialog. Nothing else of
+ * Electron or Node reaches the page. Types come from the shared contract.
+ */
+import { contextBridge, ipcRenderer, type IpcRendererEvent } from 'electron';
+import { SERVICE_METHODS } from '../service/contract';
+import { isWindowCommand, type DesktopApi, type ExportFileRequest, type WindowCommand } from '../shared/desktop-api';
+import { COMMAND_CHANNEL, EXPORT_CHANNEL, serviceChannel } from '../shared/transport';
+
+export function desktopApi(renderer: Pick<typeof ipcRenderer, 'invoke' | 'on' | 'off'>): DesktopApi {
+  const methods = Object.fromEntries(SERVICE_METHODS.map((method) => [method, (request: unknown) => renderer.invoke(serviceChannel(method), request)]));
+  return {
+    ...(methods as Omit<DesktopApi, 'onCommand' | 'exportFile'>),
+    onCommand(listener: (command: WindowCommand) => void) {
+      const handler = (_event: IpcRendererEvent, command: unknown) => {
+        if (isWindowCommand(command)) listener(command);
+      };
+      renderer.on(COMMAND_CHANNEL, handler);
+      return () => void renderer.off(COMMAND_CHANNEL, handler);
+    },
+    exportFile: (request: ExportFileRequest) => renderer.invoke(EXPORT_CHANNEL, request),
+  };
+}
+
+contextBridge.exposeInMainWorld('api', desktopApi(ipcRenderer));
