@@ -7,6 +7,7 @@ import type { CliIO } from './io';
 import { registerDemo } from './demo';
 import { registerEvaluate } from './evaluate';
 import { registerProject } from './project';
+import { registerReport } from './report';
 import { registerServe } from './serve';
 
 export type SetExitCode = (code: number) => void;
@@ -15,5 +16,6 @@ export function registerCommands(program: Command, io: CliIO, setExitCode: SetEx
   registerEvaluate(program, io, setExitCode);
   registerProject(program, io, setExitCode);
   registerDemo(program, io, setExitCode);
+  registerReport(program, io, setExitCode);
   registerServe(program, io, setExitCode);
 }

@@ -1,0 +1,239 @@
+/**
+ * `loftpoint report FILE [--version N] --out PATH [--units si|us] [--step 10%] [--samples N] [--seed N]`:
+ * the design-review report of a concept (a JSON file, or a stored version of
+ * a project file). PATH's extension picks the output: .html (self-contained),
+ * .pdf (printed by headless Chromium), .svg or .png (the diagram with bands
+ * and probability contours), .csv (the boundaries). Everything is built
+ * before anything is written; the file appears whole or not at all, and the
+ * input is never overwritten.
+ */
+import { closeSync, openSync, readSync, realpathSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { dirname, extname, join, resolve } from 'node:path';
+import type { Command } from 'commander';
+import { evaluateDesign, parseConcept, PRELIMINARY_CAUTION, type UnitSystem } from '../../core';
+import { buildReport } from '../report/report';
+import { ChromiumFailed, ChromiumUnavailable, findChromium, printPdf, svgToPng } from '../report/chromium';
+import { STUDY_DIAGRAM_SIZE } from '../report/section-results';
+import { reportDiagramSvg } from '../report/section-studies';
+import { runStudies, type StudyOptions } from '../report/studies';
+import type { SetExitCode } from './commands';
+import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
+import { evaluationCsv } from './evaluate-csv';
+import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
+import type { CliIO } from './io';
+
+export interface ReportOptions {
+  version?: string;
+  out?: string;
+  units?: string;
+  step?: string;
+  samples?: string;
+  seed?: string;
+}
+
+type OutputKind = 'html' | 'pdf' | 'svg' | 'png' | 'csv';
+
+const KINDS: Record<string, { kind: OutputKind; what: string; looksLike: (head: Buffer) => boolean }> = {
+  '.html': { kind: 'html', what: 'design-review report (HTML)', looksLike: (head) => /<!doctype html|<html[\s>]/i.test(head.toString('utf8')) },
+  '.htm': { kind: 'html', what: 'design-review report (HTML)', looksLike: (head) => /<!doctype html|<html[\s>]/i.test(head.toString('utf8')) },
+  '.pdf': { kind: 'pdf', what: 'design-review report (PDF)', looksLike: (head) => head.subarray(0, 5).toString('latin1') === '%PDF-' },
+  '.svg': { kind: 'svg', what: 'constraint diagram with bands and probability contours (SVG)', looksLike: (head) => /<svg[\s>]/.test(head.toString('utf8')) },
+  '.png': { kind: 'png', what: 'constraint diagram with bands and probability contours (PNG)', looksLike: (head) => head.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])) },
+  '.csv': { kind: 'csv', what: 'constraint boundaries (CSV)', looksLike: (head) => head.toString('utf8').startsWith('# ') },
+};
+
+export function registerReport(program: Command, io: CliIO, setExitCode: SetExitCode): void {
+  program
+    .command('report')
+    .description(
+      'Write the design-review report of a concept: requirements, assumptions, the diagram, optimum, design point,\n' +
+        'margins, sizing, speeds, bands, tornado, probabilities, requirement costs, the version note and changes.\n' +
+        'The extension of --out picks the output: .html, .pdf, .svg or .png (the diagram), .csv (the boundaries).\n' +
+        'Preliminary sizing only.',
+    )
+    .argument('<file>', 'a concept JSON file, or a project file with --version')
+    .option('--version <n>', 'the stored version to report (project files only)')
+    .option('--out <path>', 'the file to write: .html, .pdf, .svg, .png or .csv')
+    .option('--units <system>', 'units of the report: si or us', 'si')
+    .option('--step <step>', 'how far each requirement is relaxed and tightened for its cost, e.g. 10%', '10%')
+    .option('--samples <n>', 'Monte Carlo sample count (default: the concept’s, else 10000)')
+    .option('--seed <n>', 'Monte Carlo seed (default: the concept’s, else 1)')
+    .action(async (file: string, options: ReportOptions) => {
+      try {
+        io.out(await runReport(file, options));
+        setExitCode(EXIT_OK);
+      } catch (error) {
+        if (error instanceof ProjectReadFailure) {
+          io.err(`loftpoint: ${error.line}\n`);
+          setExitCode(EXIT_FAILURE);
+          return;
+        }
+        if (error instanceof ChromiumFailed) {
+          io.err(`loftpoint: ${oneLine(file)}: ${oneLine(error.message)}\n`);
+          setExitCode(EXIT_FAILURE);
+          return;
+        }
+        throw error;
+      }
+    });
+}
+
+function oneLine(text: string): string {
+  return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
+}
+
+function outputKind(file: string, out: string | undefined): { target: string; kind: OutputKind; what: string; looksLike: (head: Buffer) => boolean } {
+  if (out === undefined || out.trim() === '') throw new InputError('needs the file to write, e.g. --out review.pdf (.html, .pdf, .svg, .png or .csv)', file, '--out');
+  const extension = extname(out).toLowerCase();
+  const known = KINDS[extension];
+  if (!known) {
+    const named = extension === '' ? 'has no extension' : `has the extension "${oneLine(extension)}", which Loftpoint does not write`;
+    throw new InputError(`${oneLine(out)} ${named}; use .html, .pdf, .svg, .png or .csv`, file, '--out');
+  }
+  return { target: resolve(out), ...known };
+}
+
+function unitSystem(file: string, units: string | undefined): UnitSystem {
+  const value = (units ?? 'si').trim().toLowerCase();
+  if (value === 'si' || value === 'us') return value;
+  throw new InputError(`must be si or us, not "${oneLine(units ?? '')}"`, file, '--units');
+}
+
+/** "10%", "12.5 %" or a fraction "0.1"; strictly between 0 and 100 %. */
+export function parseStep(file: string, step: string | undefined): number {
+  const text = (step ?? '10%').trim();
+  const percent = /^(\d+(?:\.\d+)?)\s*%$/.exec(text);
+  const fraction = percent ? Number(percent[1]) / 100 : /^\d*\.\d+$|^0$/.test(text) ? Number(text) : NaN;
+  if (!percent && /^\d+(?:\.\d+)?$/.test(text) && Number(text) >= 1) {
+    throw new InputError(`"${oneLine(text)}" is ambiguous; write a percentage such as 10% or a fraction such as 0.1`, file, '--step');
+  }
+  if (!(fraction > 0 && fraction < 1)) throw new InputError(`must be a percentage between 0 and 100 such as 10%, or a fraction such as 0.1, not "${oneLine(text)}"`, file, '--step');
+  return fraction;
+}
+
+function wholeNumber(file: string, flag: string, value: string | undefined, min: number, max: number, example: string): number | undefined {
+  if (value === undefined) return undefined;
+  const text = value.trim().replace(/[_,]/g, '');
+  if (!/^\d+$/.test(text) || Number(text) < min || Number(text) > max) {
+    throw new InputError(`must be a whole number from ${min.toLocaleString('en-US')} to ${max.toLocaleString('en-US')}, e.g. ${example}, not "${oneLine(value)}"`, file, flag);
+  }
+  return Number(text);
+}
+
+/** An existing file is replaced only when it is an earlier output of the same kind: never the input, a project or anything else. */
+function refuseToReplace(file: string, out: string, target: string, looksLike: (head: Buffer) => boolean, extension: string): void {
+  let stats;
+  try {
+    stats = statSync(target);
+  } catch {
+    return;
+  }
+  if (stats.isDirectory()) throw new InputError(`${oneLine(out)} is a folder; give a file name such as ${join(out, `review${extension}`)}`, file, '--out');
+  const same = (a: string, b: string) => {
+    try {
+      return realpathSync(a) === realpathSync(b);
+    } catch {
+      return resolve(a) === resolve(b);
+    }
+  };
+  if (same(target, file)) throw new InputError('names the file being reported on; give the output its own name', file, '--out');
+  let head = Buffer.alloc(0);
+  try {
+    const fd = openSync(target, 'r');
+    try {
+      const bytes = Buffer.alloc(2048);
+      head = bytes.subarray(0, readSync(fd, bytes, 0, bytes.length, 0));
+    } finally {
+      closeSync(fd);
+    }
+  } catch {
+    head = Buffer.alloc(0);
+  }
+  if (!looksLike(head)) throw new InputError(`${oneLine(out)} exists and is not a ${extension.slice(1).toUpperCase()} file written by Loftpoint; it was left as it was (choose another name)`, file, '--out');
+}
+
+/** Write next to the target and rename, so a failed write never leaves half a file. */
+function writeWhole(file: string, out: string, target: string, content: string | Buffer): void {
+  const temporary = `${target}.${process.pid}.tmp`;
+  try {
+    writeFileSync(temporary, content);
+    renameSync(temporary, target);
+  } catch (error) {
+    rmSync(temporary, { force: true });
+    const code = (error as NodeJS.ErrnoException).code;
+    const reason =
+      code === 'ENOENT'
+        ? `the folder ${dirname(target)} does not exist`
+        : code === 'EACCES' || code === 'EPERM' || code === 'EROFS'
+          ? `cannot write ${oneLine(out)} (permission denied)`
+          : `cannot write ${oneLine(out)} (${code ?? (error instanceof Error ? error.message : String(error))})`;
+    throw new InputError(reason, file, '--out');
+  }
+}
+
+/** The version's note, author and changes; a project that cannot be read now is not the user's input (exit 1). */
+async function versionInfo(file: string, number: number) {
+  // Loaded only here: a concept JSON file never touches the native SQLite module.
+  const { storedVersionInfo } = await import('../report/version-info');
+  try {
+    return storedVersionInfo(file, number);
+  } catch (error) {
+    throw new ProjectReadFailure(`${file}: ${oneLine(error instanceof Error ? error.message : String(error))}`);
+  }
+}
+
+/** Build and write the output; returns what to print. Throws InputError on bad input. */
+export async function runReport(file: string, options: ReportOptions): Promise<string> {
+  const output = outputKind(file, options.out);
+  const extension = extname(output.target).toLowerCase();
+  const system = unitSystem(file, options.units);
+  const studyOptions: StudyOptions = { step: parseStep(file, options.step) };
+  const samples = wholeNumber(file, '--samples', options.samples, 100, 1_000_000, '10000');
+  const seed = wholeNumber(file, '--seed', options.seed, 0, 4_294_967_295, '20261202');
+  if (samples !== undefined) studyOptions.samples = samples;
+  if (seed !== undefined) studyOptions.seed = seed;
+  let chromium: string | undefined;
+  if (output.kind === 'pdf' || output.kind === 'png') {
+    try {
+      chromium = findChromium();
+    } catch (error) {
+      if (error instanceof ChromiumUnavailable) throw new InputError(oneLine(error.message), file, '--out');
+      throw error;
+    }
+  }
+  const input = await readEvaluateInput(file, options.version);
+  refuseToReplace(file, options.out as string, output.target, output.looksLike, extension);
+  const { design } = input;
+  const name = design.name.trim() || input.source;
+  const evaluation = evaluateDesign(design);
+
+  let content: string | Buffer;
+  if (output.kind === 'csv') {
+    content = evaluationCsv({ name, evaluation, system });
+  } else {
+    const parsed = parseConcept(input.concept);
+    const uncertainty = parsed.ok ? parsed.uncertainty : undefined;
+    const studies = runStudies({ design, concept: input.concept, evaluation, system, ...(uncertainty ? { uncertainty } : {}), options: studyOptions });
+    if (output.kind === 'svg' || output.kind === 'png') {
+      const svg = reportDiagramSvg({ design, evaluation, system, studies });
+      content = output.kind === 'svg' ? svg : await svgToPng(svg, STUDY_DIAGRAM_SIZE, { binary: chromium as string });
+    } else {
+      const version = options.version !== undefined ? await versionInfo(file, Number(options.version)) : undefined;
+      const html = buildReport({
+        concept: input.concept,
+        design,
+        evaluation,
+        conceptWarnings: input.warnings,
+        ...(uncertainty ? { uncertainty } : {}),
+        ...(version ? { version } : {}),
+        studies: studyOptions,
+        studyResults: studies,
+        system,
+        source: input.source,
+      });
+      content = output.kind === 'html' ? html : await printPdf(html, { binary: chromium as string });
+    }
+  }
+  writeWhole(file, options.out as string, output.target, content);
+  return `Wrote the ${output.what} of ${oneLine(name)} to ${output.target}\n${PRELIMINARY_CAUTION}\n`;
+}

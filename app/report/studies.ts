@@ -1,0 +1,128 @@
+/**
+ * The trade studies a design review shows, run once: the boundary bands,
+ * the tornado, the Monte Carlo map of the chance of meeting every
+ * requirement (on the diagram's own grid), and what each requirement costs.
+ *
+ * Ranges come from the concept's `uncertainty` block. A concept without
+ * ranges is studied on the typical ranges of METHODS.md (core
+ * `typicalUncertainty`), and everything says so: an engineer still sees
+ * which assumptions could move the point, but never mistakes handbook
+ * spreads for the concept's own.
+ */
+import {
+  boundaryBands,
+  DEFAULT_STUDY_SAMPLES,
+  DEFAULT_STUDY_SEED,
+  probabilityMap,
+  requirementCosts,
+  resolveUncertainty,
+  sampleWingLoadings,
+  tornado,
+  typicalRange,
+  typicalUncertainty,
+  type BoundaryBand,
+  type ConceptUncertainty,
+  type Design,
+  type Distribution,
+  type Evaluation,
+  type ProbabilityGrid,
+  type ProbabilityMap,
+  type RequirementCosts,
+  type Tornado,
+  type UncertainParameter,
+  type UnitSystem,
+} from '../../core';
+import { diagramGrid } from '../chart/study-grid';
+
+export interface StudyOptions {
+  /** Relative step for the requirement costs [0.1]. */
+  step?: number;
+  /** Override the concept's seed and sample count. */
+  seed?: number;
+  samples?: number;
+}
+
+export interface RangeRow {
+  field: string;
+  label: string;
+  low: number;
+  nominal: number;
+  high: number;
+  distribution: Distribution;
+  /** Where a typical range comes from (METHODS.md); absent for the concept's own ranges. */
+  source?: string;
+}
+
+export interface ReportStudies {
+  /** Whose ranges: the concept's own, or METHODS.md typical ranges because the concept gives none. */
+  ranges: 'concept' | 'typical';
+  rows: RangeRow[];
+  seed: number;
+  samples: number;
+  step: number;
+  grid: ProbabilityGrid;
+  bands: BoundaryBand[];
+  tornado: Tornado;
+  /** Null when there is nothing ranged to sample. */
+  map: ProbabilityMap | null;
+  costs: RequirementCosts;
+  /** Milliseconds each study took. */
+  timings: { bands: number; tornado: number; monteCarlo: number; costs: number };
+}
+
+function timed<T>(run: () => T): [T, number] {
+  const start = performance.now();
+  const value = run();
+  return [value, performance.now() - start];
+}
+
+function rangedParameters(design: Design, concept: unknown, uncertainty: ConceptUncertainty | undefined): { ranges: ReportStudies['ranges']; parameters: UncertainParameter[] } {
+  if (uncertainty && uncertainty.parameters.length > 0) return { ranges: 'concept', parameters: uncertainty.parameters };
+  const typical = resolveUncertainty(typicalUncertainty(design), design, concept);
+  return { ranges: 'typical', parameters: typical.ok ? typical.parameters : [] };
+}
+
+/** The wing loadings the bands are drawn at: the evaluation's own samples, else the grid's. */
+function bandWingLoadings(evaluation: Evaluation, grid: ProbabilityGrid): number[] {
+  const curve = evaluation.boundaries.find((boundary) => 'points' in boundary);
+  if (curve && 'points' in curve && curve.points.length > 1) return curve.points.map(([w]) => w);
+  return Array.from(sampleWingLoadings(grid.wingLoading, 201));
+}
+
+export function runStudies(input: {
+  design: Design;
+  concept: unknown;
+  evaluation: Evaluation;
+  uncertainty?: ConceptUncertainty;
+  system: UnitSystem;
+  options?: StudyOptions;
+}): ReportStudies {
+  const { design, evaluation, system } = input;
+  const options = input.options ?? {};
+  const { ranges, parameters } = rangedParameters(design, input.concept, input.uncertainty);
+  const seed = options.seed ?? input.uncertainty?.seed ?? DEFAULT_STUDY_SEED;
+  const samples = options.samples ?? input.uncertainty?.samples ?? DEFAULT_STUDY_SAMPLES;
+  const step = options.step ?? 0.1;
+  const grid = diagramGrid(evaluation, { system, title: design.name });
+  const [bands, bandsMs] = timed(() => boundaryBands(design, parameters, bandWingLoadings(evaluation, grid)));
+  const [moved, tornadoMs] = timed(() => tornado(design, parameters));
+  const [map, monteCarloMs] = timed(() => (parameters.length > 0 ? probabilityMap(design, parameters, { seed, samples, grid }) : null));
+  const [costs, costsMs] = timed(() => requirementCosts(design, { step }));
+  const rows = parameters.map((p): RangeRow => {
+    const source = ranges === 'typical' ? typicalRange(p.field, design)?.source : undefined;
+    return { field: p.field, label: p.label, low: p.low, nominal: p.nominal, high: p.high, distribution: p.distribution, ...(source ? { source } : {}) };
+  });
+  return {
+    ranges,
+    rows,
+    seed,
+    samples,
+    step,
+    grid,
+    bands,
+    tornado: moved,
+    map,
+    costs,
+    timings: { bands: bandsMs, tornado: tornadoMs, monteCarlo: monteCarloMs, costs: costsMs },
+  };
+}
