@@ -32,6 +32,9 @@ function chromiumPath(): string | undefined {
 process.env.LOFTPOINT_TEST_PORT ??= String(await freePort());
 process.env.LOFTPOINT_TEST_ADDRESS_FILE ??= join(tmpdir(), `loftpoint-address-${process.env.LOFTPOINT_TEST_PORT}.txt`);
 const port = process.env.LOFTPOINT_TEST_PORT;
+// Each run builds the page into its own folder, so two runs at once never share files.
+process.env.LOFTPOINT_TEST_RENDERER_DIR ??= join(root, 'out', `renderer-test-${port}`);
+const rendererDir = process.env.LOFTPOINT_TEST_RENDERER_DIR;
 
 export default defineConfig({
   testDir: '.',
@@ -52,7 +55,7 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: 'node node_modules/vite/bin/vite.js build --config app/renderer/vite.config.ts --logLevel error && node node_modules/tsx/dist/cli.mjs test/browser/serve.ts',
+    command: `node node_modules/vite/bin/vite.js build --config app/renderer/vite.config.ts --outDir "${rendererDir}" --logLevel error && node node_modules/tsx/dist/cli.mjs test/browser/serve.ts`,
     cwd: root,
     url: `http://127.0.0.1:${port}/`,
     timeout: 180_000,
@@ -62,6 +65,7 @@ export default defineConfig({
     env: {
       LOFTPOINT_TEST_PORT: port,
       LOFTPOINT_TEST_ADDRESS_FILE: process.env.LOFTPOINT_TEST_ADDRESS_FILE,
+      LOFTPOINT_TEST_RENDERER_DIR: rendererDir,
       VITE_CONFIG_NATIVE_IGNORE_WARNING: 'true',
       LOFTPOINT_AUTHOR: 'browser-test',
     },

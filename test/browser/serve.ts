@@ -4,7 +4,7 @@
  * (the user's data folder is never touched). The printed address, token
  * included, is also written to $LOFTPOINT_TEST_ADDRESS_FILE for the specs.
  */
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { runServe } from '../../app/cli/serve';
@@ -29,4 +29,6 @@ const stop = new Promise<void>((resolve) => {
   process.once('SIGINT', () => resolve());
 });
 
-await runServe({ port: process.env.LOFTPOINT_TEST_PORT ?? '0', project: join(folder, 'Browser tests.loftpoint') }, io, stop);
+const renderer = process.env.LOFTPOINT_TEST_RENDERER_DIR;
+await runServe({ port: process.env.LOFTPOINT_TEST_PORT ?? '0', project: join(folder, 'Browser tests.loftpoint'), ...(renderer ? { rendererDir: renderer } : {}) }, io, stop);
+if (renderer) rmSync(renderer, { recursive: true, force: true });
