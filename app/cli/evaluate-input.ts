@@ -6,6 +6,7 @@
 import { closeSync, openSync, readFileSync, readSync, statSync } from 'node:fs';
 import { parseConceptText, type ConceptIssue, type ConceptJson, type Design, type WarningJson } from '../../core';
 import { InputError } from './errors';
+import { oneLine } from './output-file';
 
 /** A project file that could not be read for a reason other than the user's input (busy, I/O): exit status 1. */
 export class ProjectReadFailure extends Error {
@@ -98,10 +99,6 @@ function issueError(file: string, issues: readonly ConceptIssue[]): InputError {
   if (!first) return new InputError('is not a valid concept', file);
   const more = issues.length > 1 ? ` (and ${issues.length - 1} more problem${issues.length > 2 ? 's' : ''})` : '';
   return new InputError(`${oneLine(first.message)}${more}`, file, first.path);
-}
-
-function oneLine(text: string): string {
-  return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
 }
 
 function versionNumber(file: string, version: string | undefined): number {

@@ -15,6 +15,7 @@ import {
 import { kindTitle } from '../chart/palette';
 import { SIZING_CAUTION } from '../chart/caution';
 import { wrapText } from '../chart/text';
+import { oneLine } from './output-file';
 
 export interface ReportInput {
   source: string;
@@ -42,10 +43,6 @@ export function evaluationReport(input: ReportInput): string {
     ['CAUTION', `  ${SIZING_CAUTION}`, ...wrap('Every number here follows from the assumptions in the concept (aerodynamics, propulsion, field and day); check them before relying on a result.', '  ')],
   ];
   return `${sections.map((lines) => lines.join('\n')).join('\n\n')}\n`;
-}
-
-function oneLine(text: string): string {
-  return text.replace(/\s*[\r\n]+\s*/g, ' ');
 }
 
 function wrap(text: string, indent: string): string[] {

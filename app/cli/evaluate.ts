@@ -5,8 +5,6 @@
  * the diagram as SVG. The whole output is built before anything is printed,
  * so bad input never leaves partial output behind.
  */
-import { closeSync, openSync, readSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
-import { dirname, join, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { evaluateDesign, type Evaluation, type UnitSystem } from '../../core';
 import { constraintDiagramSvg } from '../chart/svg';
@@ -16,6 +14,7 @@ import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
 import { evaluationCsv } from './evaluate-csv';
 import { evaluationReport } from './evaluate-report';
 import type { CliIO } from './io';
+import { checkOutputTarget, oneLine, writeWhole, type OutputTarget } from './output-file';
 
 export interface EvaluateOptions {
   version?: string;
@@ -76,54 +75,10 @@ function unitSystem(file: string, units: string | undefined): UnitSystem {
   throw new InputError(`must be si or us, not "${oneLine(units ?? '')}"`, file, '--units');
 }
 
-function oneLine(text: string): string {
-  return text.replace(/\s*[\r\n]+\s*/g, ' ');
-}
-
-/** An existing file is replaced only when it is an SVG: never the concept, a project or anything else. */
-function refuseToReplace(file: string, out: string, target: string): void {
-  let stats;
-  try {
-    stats = statSync(target);
-  } catch {
-    return;
-  }
-  if (stats.isDirectory()) throw new InputError(`${out} is a folder; give a file name such as ${join(out, 'diagram.svg')}`, file, '--svg');
-  if (target === resolve(file)) throw new InputError('names the file being evaluated; give the SVG its own name', file, '--svg');
-  let head = '';
-  try {
-    const fd = openSync(target, 'r');
-    try {
-      const bytes = Buffer.alloc(2048);
-      head = bytes.subarray(0, readSync(fd, bytes, 0, bytes.length, 0)).toString('utf8');
-    } finally {
-      closeSync(fd);
-    }
-  } catch {
-    head = '';
-  }
-  if (!/<svg[\s>]/.test(head)) throw new InputError(`${out} exists and is not an SVG file; it was left as it was (choose another name)`, file, '--svg');
-}
-
-/** Write next to the target and rename, so a failed write never leaves half a file. */
+/** Writes the diagram; an existing file is replaced only when it is an SVG. */
 function writeSvg(file: string, out: string, evaluation: Evaluation, name: string, system: UnitSystem): string {
-  const target = resolve(out);
-  refuseToReplace(file, out, target);
-  const svg = constraintDiagramSvg(evaluation, { title: name, system });
-  const temporary = `${target}.${process.pid}.tmp`;
-  try {
-    writeFileSync(temporary, svg, 'utf8');
-    renameSync(temporary, target);
-  } catch (error) {
-    rmSync(temporary, { force: true });
-    const code = (error as NodeJS.ErrnoException).code;
-    const reason =
-      code === 'ENOENT'
-        ? `the folder ${dirname(target)} does not exist`
-        : code === 'EACCES' || code === 'EPERM' || code === 'EROFS'
-          ? `cannot write ${out} (permission denied)`
-          : `cannot write ${out} (${code ?? (error instanceof Error ? error.message : String(error))})`;
-    throw new InputError(reason, file, '--svg');
-  }
-  return target;
+  const target: OutputTarget = { file, out, flag: '--svg', extension: '.svg', exampleName: 'diagram.svg', inputRole: 'the file being evaluated', looksLike: (head) => /<svg[\s>]/.test(head.toString('utf8')) };
+  const path = checkOutputTarget(target);
+  writeWhole(target, path, constraintDiagramSvg(evaluation, { title: name, system }));
+  return path;
 }

@@ -7,8 +7,7 @@
  * before anything is written; the file appears whole or not at all, and the
  * input is never overwritten.
  */
-import { closeSync, openSync, readSync, realpathSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
-import { dirname, extname, join, resolve } from 'node:path';
+import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { evaluateDesign, parseConcept, PRELIMINARY_CAUTION, type UnitSystem } from '../../core';
 import { buildReport } from '../report/report';
@@ -21,6 +20,7 @@ import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
 import { evaluationCsv } from './evaluate-csv';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
 import type { CliIO } from './io';
+import { checkOutputTarget, oneLine, writeWhole, type OutputTarget } from './output-file';
 
 export interface ReportOptions {
   version?: string;
@@ -78,10 +78,6 @@ export function registerReport(program: Command, io: CliIO, setExitCode: SetExit
     });
 }
 
-function oneLine(text: string): string {
-  return text.replace(/\s*[\r\n]+\s*/g, ' ').trim();
-}
-
 function outputKind(file: string, out: string | undefined): { target: string; kind: OutputKind; what: string; looksLike: (head: Buffer) => boolean } {
   if (out === undefined || out.trim() === '') throw new InputError('needs the file to write, e.g. --out review.pdf (.html, .pdf, .svg, .png or .csv)', file, '--out');
   const extension = extname(out).toLowerCase();
@@ -120,57 +116,6 @@ function wholeNumber(file: string, flag: string, value: string | undefined, min:
   return Number(text);
 }
 
-/** An existing file is replaced only when it is an earlier output of the same kind: never the input, a project or anything else. */
-function refuseToReplace(file: string, out: string, target: string, looksLike: (head: Buffer) => boolean, extension: string): void {
-  let stats;
-  try {
-    stats = statSync(target);
-  } catch {
-    return;
-  }
-  if (stats.isDirectory()) throw new InputError(`${oneLine(out)} is a folder; give a file name such as ${join(out, `review${extension}`)}`, file, '--out');
-  const same = (a: string, b: string) => {
-    try {
-      return realpathSync(a) === realpathSync(b);
-    } catch {
-      return resolve(a) === resolve(b);
-    }
-  };
-  if (same(target, file)) throw new InputError('names the file being reported on; give the output its own name', file, '--out');
-  let head = Buffer.alloc(0);
-  try {
-    const fd = openSync(target, 'r');
-    try {
-      const bytes = Buffer.alloc(2048);
-      head = bytes.subarray(0, readSync(fd, bytes, 0, bytes.length, 0));
-    } finally {
-      closeSync(fd);
-    }
-  } catch {
-    head = Buffer.alloc(0);
-  }
-  if (!looksLike(head)) throw new InputError(`${oneLine(out)} exists and is not a ${extension.slice(1).toUpperCase()} file written by Loftpoint; it was left as it was (choose another name)`, file, '--out');
-}
-
-/** Write next to the target and rename, so a failed write never leaves half a file. */
-function writeWhole(file: string, out: string, target: string, content: string | Buffer): void {
-  const temporary = `${target}.${process.pid}.tmp`;
-  try {
-    writeFileSync(temporary, content);
-    renameSync(temporary, target);
-  } catch (error) {
-    rmSync(temporary, { force: true });
-    const code = (error as NodeJS.ErrnoException).code;
-    const reason =
-      code === 'ENOENT'
-        ? `the folder ${dirname(target)} does not exist`
-        : code === 'EACCES' || code === 'EPERM' || code === 'EROFS'
-          ? `cannot write ${oneLine(out)} (permission denied)`
-          : `cannot write ${oneLine(out)} (${code ?? (error instanceof Error ? error.message : String(error))})`;
-    throw new InputError(reason, file, '--out');
-  }
-}
-
 /** The version's note, author and changes; a project that cannot be read now is not the user's input (exit 1). */
 async function versionInfo(file: string, number: number) {
   // Loaded only here: a concept JSON file never touches the native SQLite module.
@@ -202,7 +147,8 @@ export async function runReport(file: string, options: ReportOptions): Promise<s
     }
   }
   const input = await readEvaluateInput(file, options.version);
-  refuseToReplace(file, options.out as string, output.target, output.looksLike, extension);
+  const target: OutputTarget = { file, out: options.out as string, flag: '--out', extension, exampleName: `review${extension}`, inputRole: 'the file being reported on', looksLike: output.looksLike };
+  checkOutputTarget(target);
   const { design } = input;
   const name = design.name.trim() || input.source;
   const evaluation = evaluateDesign(design);
@@ -234,6 +180,6 @@ export async function runReport(file: string, options: ReportOptions): Promise<s
       content = output.kind === 'html' ? html : await printPdf(html, { binary: chromium as string });
     }
   }
-  writeWhole(file, options.out as string, output.target, content);
+  writeWhole(target, output.target, content);
   return `Wrote the ${output.what} of ${oneLine(name)} to ${output.target}\n${PRELIMINARY_CAUTION}\n`;
 }

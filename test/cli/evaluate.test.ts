@@ -302,7 +302,7 @@ describe('loftpoint evaluate FILE --svg OUT', () => {
 
     const notes = join(dir, 'notes.txt');
     writeFileSync(notes, 'design review notes');
-    await expectInputError(['evaluate', demoFile('trainer'), '--svg', notes], demoFile('trainer'), '--svg', /not an SVG file; it was left as it was/);
+    await expectInputError(['evaluate', demoFile('trainer'), '--svg', notes], demoFile('trainer'), '--svg', /not an SVG file written by Loftpoint; it was left as it was/);
     expect(readFileSync(notes, 'utf8')).toBe('design review notes');
   });
 
