@@ -26,6 +26,9 @@ const gradient = z.custom<number | string>((input) => gradientProblem(input) ===
 export const commonRequirementShape = {
   id: z.string().min(1),
   label: z.string().optional(),
+  /** Where the requirement comes from (a rule, a specification paragraph) and any note on it; shown, not computed. */
+  source: z.string().optional(),
+  note: z.string().optional(),
   enabled: z.boolean().optional(),
   altitude: altitude.optional(),
   temperatureOffset: quantityField('temperatureDifference', { from: -60, to: 60 }).optional(),
