@@ -15,6 +15,7 @@ import { COMMAND_CHANNEL } from '../shared/transport';
 import { PROJECT_EXTENSION, userDataFolder } from '../server/first-start';
 import { exportFile } from './exports';
 import { ipcHandlers, registerIpc, senderCheck } from './ipc';
+import { hiddenPrintWindow, printReportPdf } from './print';
 import { menuTemplate } from './menu';
 import { projectShell } from './projects';
 import { isOwnPage } from './security';
@@ -87,6 +88,7 @@ function setupIpc(): void {
           },
           app.getPath('documents'),
         ),
+      printPdf: (_event, payload) => printReportPdf(payload, { openWindow: hiddenPrintWindow }),
     }),
   );
 }

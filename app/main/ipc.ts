@@ -1,5 +1,6 @@
 /**
- * IPC from the page: one handler per service method, plus export. Each
+ * IPC from the page: one handler per service method, plus export and
+ * printing a report to PDF. Each
  * handler first drops messages from any page that is not our window's, then
  * checks the payload from `unknown` before anything touches the project.
  * Handlers are plain functions; registerIpc wires them to ipcMain.
@@ -7,7 +8,7 @@
 import type { IpcMainInvokeEvent } from 'electron';
 import { SERVICE_METHODS, type ServiceResult } from '../service/contract';
 import type { Dispatch } from '../shared/transport';
-import { EXPORT_CHANNEL, failure, serviceChannel } from '../shared/transport';
+import { EXPORT_CHANNEL, failure, PRINT_CHANNEL, serviceChannel } from '../shared/transport';
 
 /** The part of an IPC event the handlers look at. */
 export interface IpcEventLike {
@@ -21,6 +22,8 @@ export interface IpcDeps {
   dispatch: Dispatch;
   /** Writes an export through a save dialog owned by the sender's window. */
   exportFile: (event: IpcEventLike, payload: unknown) => Promise<ServiceResult<unknown>>;
+  /** Prints a report's HTML to PDF in a hidden window; answers with the bytes. */
+  printPdf: (event: IpcEventLike, payload: unknown) => Promise<ServiceResult<unknown>>;
   /** True for messages from our own window showing our own page. */
   isTrustedSender: (event: IpcEventLike) => boolean;
 }
@@ -34,6 +37,7 @@ export function ipcHandlers(deps: IpcDeps): Map<string, IpcHandler> {
     handlers.set(serviceChannel(method), async (event, payload) => (deps.isTrustedSender(event) ? deps.dispatch(method, payload) : untrusted()));
   }
   handlers.set(EXPORT_CHANNEL, async (event, payload) => (deps.isTrustedSender(event) ? deps.exportFile(event, payload) : untrusted()));
+  handlers.set(PRINT_CHANNEL, async (event, payload) => (deps.isTrustedSender(event) ? deps.printPdf(event, payload) : untrusted()));
   return handlers;
 }
 

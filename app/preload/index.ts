@@ -1,17 +1,18 @@
 /**
  * The bridge: the page gets `window.api` with one function per service
- * method, menu commands, and export through a save dialog. Nothing else of
+ * method, menu commands, export through a save dialog, and printing a report
+ * to PDF. Nothing else of
  * Electron or Node reaches the page. Types come from the shared contract.
  */
 import { contextBridge, ipcRenderer, type IpcRendererEvent } from 'electron';
 import { SERVICE_METHODS } from '../service/contract';
-import { isWindowCommand, type DesktopApi, type ExportFileRequest, type WindowCommand } from '../shared/desktop-api';
-import { COMMAND_CHANNEL, EXPORT_CHANNEL, serviceChannel } from '../shared/transport';
+import { isWindowCommand, type DesktopApi, type ExportFileRequest, type PrintPdfRequest, type WindowCommand } from '../shared/desktop-api';
+import { COMMAND_CHANNEL, EXPORT_CHANNEL, PRINT_CHANNEL, serviceChannel } from '../shared/transport';
 
 export function desktopApi(renderer: Pick<typeof ipcRenderer, 'invoke' | 'on' | 'off'>): DesktopApi {
   const methods = Object.fromEntries(SERVICE_METHODS.map((method) => [method, (request: unknown) => renderer.invoke(serviceChannel(method), request)]));
   return {
-    ...(methods as Omit<DesktopApi, 'onCommand' | 'exportFile'>),
+    ...(methods as Omit<DesktopApi, 'onCommand' | 'exportFile' | 'printPdf'>),
     onCommand(listener: (command: WindowCommand) => void) {
       const handler = (_event: IpcRendererEvent, command: unknown) => {
         if (isWindowCommand(command)) listener(command);
@@ -20,6 +21,7 @@ export function desktopApi(renderer: Pick<typeof ipcRenderer, 'invoke' | 'on' | 
       return () => void renderer.off(COMMAND_CHANNEL, handler);
     },
     exportFile: (request: ExportFileRequest) => renderer.invoke(EXPORT_CHANNEL, request),
+    printPdf: (request: PrintPdfRequest) => renderer.invoke(PRINT_CHANNEL, request),
   };
 }
 

@@ -34,6 +34,8 @@ export interface ReportInput {
   system: UnitSystem;
   /** Where the concept came from, e.g. "trainer.json" or "fleet.loftpoint, version 3". */
   source?: string;
+  /** No version because the concept is an unsaved draft in the window (not a concept file). */
+  unsavedDraft?: boolean;
   generatedAt?: Date;
   /** Studies already run (the command line reuses them for other outputs); run here when absent. */
   studyResults?: ReportStudies;
@@ -70,7 +72,7 @@ export function buildReport(input: ReportInput): string {
     marginsSection(ctx),
     `<div class="two-up">\n${sizingSection(ctx)}\n${speedsSection(ctx)}\n</div>`,
     studiesSection(ctx, studies),
-    versionSection(input.version, input.version?.changesSinceParent, system),
+    versionSection(input.version, input.version?.changesSinceParent, system, input.unsavedDraft === true && !input.version),
     warningsSection([...(input.conceptWarnings ?? []), ...evaluation.warnings]),
     `<footer class="end">${cautionBox(true)}</footer>`,
   ];

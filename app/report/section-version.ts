@@ -79,9 +79,12 @@ export function changesHtml(comparison: VersionComparison, system: UnitSystem): 
   return parts.join('\n');
 }
 
-export function versionSection(version: ReportVersion | undefined, comparison: VersionComparison | undefined, system: UnitSystem): string {
+export function versionSection(version: ReportVersion | undefined, comparison: VersionComparison | undefined, system: UnitSystem, unsavedDraft = false): string {
   if (!version) {
-    return section('version', 'Version', paragraph('This report was made from a concept file, not a saved version: there is no version note and no parent to compare with.', 'muted'));
+    const from = unsavedDraft
+      ? 'This report was made from an unsaved draft in the designer window, not a saved version: there is no version note yet. Save a version to record one.'
+      : 'This report was made from a concept file, not a saved version: there is no version note and no parent to compare with.';
+    return section('version', 'Version', paragraph(from, 'muted'));
   }
   const parts = [
     facts([

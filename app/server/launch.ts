@@ -10,6 +10,7 @@ import type { ProjectInfo, ServiceError } from '../service/contract';
 import { createDispatch } from '../shared/dispatch';
 import { pagePolicy } from '../shared/page-policy';
 import { openOrCreateProject, userDataFolder } from './first-start';
+import { chromiumPrinter } from './print';
 import { startBrowserServer, type BrowserServer } from './server';
 import { rendererFolders } from './static-files';
 import { createLaunchToken } from './token';
@@ -83,7 +84,7 @@ export async function launchBrowserMode(options: LaunchOptions): Promise<Browser
       (method, request) => invokeService(service, method, request),
       pagePolicy('start `loftpoint serve --project FILE` to work on another project'),
     );
-    server = await startBrowserServer({ port: options.port, token: createLaunchToken(), rendererDir, dispatch });
+    server = await startBrowserServer({ port: options.port, token: createLaunchToken(), rendererDir, dispatch, printPdf: chromiumPrinter() });
   } catch (error) {
     await invokeService(service, 'closeProject', {});
     if (error instanceof LaunchError) throw error;

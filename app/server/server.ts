@@ -2,13 +2,16 @@
  * Browser mode: the built page and the service API over HTTP, on 127.0.0.1
  * only. GET serves the page; POST /api/METHOD with a JSON body calls one
  * service method and answers with the same result value the desktop window
- * gets over IPC.
+ * gets over IPC. POST /api/print/pdf, behind the same checks, prints a
+ * design-review report and answers with the PDF.
  */
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { CONTENT_SECURITY_POLICY, HEADER_ONLY_POLICY } from '../shared/csp';
+import { checkPrintRequest, MAX_REPORT_HTML_BYTES, PRINT_PDF_PATH } from '../shared/print-request';
 import type { Dispatch } from '../shared/transport';
 import { isAllowedHost, refuseApiRequest, type ApiRequestHeaders } from './guard';
+import type { PrintPdf } from './print';
 import { readStaticFile } from './static-files';
 
 /** Concept documents are a few kilobytes; anything this large is not one. */
@@ -21,6 +24,8 @@ export interface BrowserServerOptions {
   /** Folder holding the built page (index.html and assets/). */
   rendererDir: string;
   dispatch: Dispatch;
+  /** Prints a checked report to PDF; without it the print route says printing is not available. */
+  printPdf?: PrintPdf;
 }
 
 export interface BrowserServer {
@@ -52,13 +57,13 @@ function refuse(res: ServerResponse, status: number, code: string, message: stri
   sendJson(res, status, { ok: false, error: { code, message } });
 }
 
-function readBody(req: IncomingMessage): Promise<string | null> {
+function readBody(req: IncomingMessage, limit = MAX_BODY_BYTES): Promise<string | null> {
   return new Promise((resolveBody, reject) => {
     const chunks: Buffer[] = [];
     let size = 0;
     req.on('data', (chunk: Buffer) => {
       size += chunk.length;
-      if (size > MAX_BODY_BYTES) {
+      if (size > limit) {
         resolveBody(null);
         req.destroy();
         return;
@@ -70,20 +75,45 @@ function readBody(req: IncomingMessage): Promise<string | null> {
   });
 }
 
-async function handleApi(req: IncomingMessage, res: ServerResponse, method: string, options: BrowserServerOptions, port: number): Promise<void> {
-  if (req.method !== 'POST') return refuse(res, 405, 'method-not-allowed', 'API calls use POST');
-  const refusal = refuseApiRequest(req.headers as ApiRequestHeaders, { port, token: options.token });
-  if (refusal) return refuse(res, refusal.status, 'refused', refusal.message);
-  const text = await readBody(req);
-  if (text === null) return refuse(res, 413, 'too-large', `request body is over ${MAX_BODY_BYTES} bytes`);
-  let payload: unknown;
-  try {
-    payload = text.trim() === '' ? undefined : JSON.parse(text);
-  } catch {
-    return refuse(res, 400, 'bad-json', 'request body is not valid JSON');
+/** The JSON body of an API call that passed the guard, or null once the refusal is sent. */
+async function guardedJson(req: IncomingMessage, res: ServerResponse, options: BrowserServerOptions, port: number, limit: number): Promise<{ payload: unknown } | null> {
+  if (req.method !== 'POST') {
+    refuse(res, 405, 'method-not-allowed', 'API calls use POST');
+    return null;
   }
-  const result = await options.dispatch(method, payload);
-  sendJson(res, 200, result);
+  const refusal = refuseApiRequest(req.headers as ApiRequestHeaders, { port, token: options.token });
+  if (refusal) {
+    refuse(res, refusal.status, 'refused', refusal.message);
+    return null;
+  }
+  const text = await readBody(req, limit);
+  if (text === null) {
+    refuse(res, 413, 'too-large', `request body is over ${limit} bytes`);
+    return null;
+  }
+  try {
+    return { payload: text.trim() === '' ? undefined : JSON.parse(text) };
+  } catch {
+    refuse(res, 400, 'bad-json', 'request body is not valid JSON');
+    return null;
+  }
+}
+
+async function handleApi(req: IncomingMessage, res: ServerResponse, method: string, options: BrowserServerOptions, port: number): Promise<void> {
+  const body = await guardedJson(req, res, options, port, MAX_BODY_BYTES);
+  if (body) sendJson(res, 200, await options.dispatch(method, body.payload));
+}
+
+async function handlePrint(req: IncomingMessage, res: ServerResponse, options: BrowserServerOptions, port: number): Promise<void> {
+  // The HTML travels as a JSON string: allow for its escapes on top of the report's own limit.
+  const body = await guardedJson(req, res, options, port, 2 * MAX_REPORT_HTML_BYTES);
+  if (!body) return;
+  const checked = checkPrintRequest(body.payload);
+  if (!checked.ok) return sendJson(res, 400, { ok: false, error: { code: 'bad-request', message: `printPdf: ${checked.field}: ${checked.message}`, field: checked.field } });
+  if (!options.printPdf) return refuse(res, 501, 'io', 'this server does not print PDFs; export the HTML report and print it from the browser');
+  const printed = await options.printPdf(checked.html);
+  if (!printed.ok) return sendJson(res, printed.error.code === 'io' ? 503 : 500, printed);
+  send(res, 200, Buffer.from(printed.value.buffer, printed.value.byteOffset, printed.value.byteLength), { 'Content-Type': 'application/pdf', 'Cache-Control': 'no-store' });
 }
 
 async function handlePage(req: IncomingMessage, res: ServerResponse, path: string, rendererDir: string): Promise<void> {
@@ -118,7 +148,9 @@ export async function startBrowserServer(options: BrowserServerOptions): Promise
       return send(res, 403, message, { 'Content-Type': 'text/plain; charset=utf-8' });
     }
     const api = /^\/api\/([A-Za-z][A-Za-z0-9]*)$/.exec(url.pathname);
-    const work = url.pathname.startsWith('/api/')
+    const work = url.pathname === PRINT_PDF_PATH
+      ? handlePrint(req, res, options, port)
+      : url.pathname.startsWith('/api/')
       ? api
         ? handleApi(req, res, api[1], options, port)
         : Promise.resolve(refuse(res, 404, 'unknown-method', `no API method at ${url.pathname}`))

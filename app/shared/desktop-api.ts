@@ -1,8 +1,8 @@
 /**
  * What the desktop window's preload puts on `window.api`: the service
- * methods (typed from the contract), plus the two things only the shell can
- * do for the page: tell it about menu commands, and write a file the person
- * picks in a save dialog.
+ * methods (typed from the contract), plus the three things only the shell
+ * can do for the page: tell it about menu commands, write a file the person
+ * picks in a save dialog, and print a report to PDF.
  */
 import type { RemoteService, ServiceResult } from '../service/contract';
 
@@ -13,6 +13,10 @@ export const WINDOW_COMMANDS = [
   'redo',
   'export-diagram',
   'export-concept',
+  'export-diagram-png',
+  'export-boundaries',
+  'export-report-html',
+  'export-report-pdf',
   'units-si',
   'units-us',
   'reset-view',
@@ -29,24 +33,39 @@ export function isWindowCommand(value: unknown): value is WindowCommand {
 
 /** Export formats the page can hand to the shell, with the file filter each gets. */
 export const EXPORT_KINDS = {
-  svg: { name: 'SVG diagram', extensions: ['svg'], mime: 'image/svg+xml' },
-  json: { name: 'Concept JSON', extensions: ['json'], mime: 'application/json' },
-  csv: { name: 'CSV table', extensions: ['csv'], mime: 'text/csv' },
+  svg: { name: 'SVG diagram', extensions: ['svg'], mime: 'image/svg+xml', binary: false },
+  json: { name: 'Concept JSON', extensions: ['json'], mime: 'application/json', binary: false },
+  csv: { name: 'CSV table', extensions: ['csv'], mime: 'text/csv', binary: false },
+  html: { name: 'HTML report', extensions: ['html', 'htm'], mime: 'text/html', binary: false },
+  pdf: { name: 'PDF report', extensions: ['pdf'], mime: 'application/pdf', binary: true },
+  png: { name: 'PNG image', extensions: ['png'], mime: 'image/png', binary: true },
 } as const;
 
 export type ExportKind = keyof typeof EXPORT_KINDS;
+
+/** How `content` is written: text as UTF-8, or bytes as base64 (the binary kinds, PDF and PNG). */
+export type ExportEncoding = 'utf8' | 'base64';
 
 export interface ExportFileRequest {
   kind: ExportKind;
   /** File name offered in the dialog, without folders. */
   suggestedName: string;
   content: string;
+  /** Absent means 'utf8'. */
+  encoding?: ExportEncoding;
 }
 
 /** The file written, or null when the person cancelled the dialog. */
 export type ExportFileResponse = { file: string } | null;
 
+/** A design-review report (self-contained HTML) for the shell to print to PDF. */
+export interface PrintPdfRequest {
+  html: string;
+}
+
 export interface DesktopApi extends RemoteService {
   onCommand(listener: (command: WindowCommand) => void): () => void;
   exportFile(request: ExportFileRequest): Promise<ServiceResult<ExportFileResponse>>;
+  /** The PDF's bytes, printed by the shell with scripts off. */
+  printPdf(request: PrintPdfRequest): Promise<ServiceResult<Uint8Array>>;
 }

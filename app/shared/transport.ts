@@ -24,3 +24,5 @@ export function serviceChannel<M extends string>(method: M): `loftpoint:service:
 export const COMMAND_CHANNEL = 'loftpoint:command';
 /** Channel on which the page asks main to write a file through a save dialog. */
 export const EXPORT_CHANNEL = 'loftpoint:export';
+/** Channel on which the page asks main to print a report's HTML to PDF. */
+export const PRINT_CHANNEL = 'loftpoint:print-pdf';

@@ -31,7 +31,59 @@ describe('checkExportRequest', () => {
   });
 });
 
+// The first bytes of each format: PNG, W3C PNG specification section 5.2 (ISO/IEC 15948); PDF, ISO 32000-1 section 7.5.2.
+const PNG_START = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52]);
+const PDF_START = Buffer.from('%PDF-1.7\n%\xe2\xe3\xcf\xd3\n', 'latin1');
+
+describe('checkExportRequest for binary kinds', () => {
+  it.each([
+    ['png', PNG_START],
+    ['pdf', PDF_START],
+  ])('accepts %s bytes sent as base64 (RFC 4648, as Node encodes it) and decodes them exactly', (kind, bytes) => {
+    const checked = checkExportRequest({ kind, suggestedName: `a.${kind}`, content: bytes.toString('base64'), encoding: 'base64' });
+    expect(checked.ok).toBe(true);
+    if (checked.ok) expect(Buffer.compare(checked.bytes as Buffer, bytes)).toBe(0);
+  });
+
+  it.each([
+    [{ kind: 'png', suggestedName: 'a.png', content: PNG_START.toString('base64') }, 'encoding', 'base64'],
+    [{ kind: 'pdf', suggestedName: 'a.pdf', content: PDF_START.toString('base64'), encoding: 'utf8' }, 'encoding', 'base64'],
+    [{ kind: 'svg', suggestedName: 'a.svg', content: 'PHN2Zy8+', encoding: 'base64' }, 'encoding', 'utf8'],
+    [{ kind: 'png', suggestedName: 'a.png', content: 'not base64!', encoding: 'base64' }, 'content', 'base64'],
+    [{ kind: 'png', suggestedName: 'a.png', content: PDF_START.toString('base64'), encoding: 'base64' }, 'content', 'PNG signature'],
+    [{ kind: 'pdf', suggestedName: 'a.pdf', content: Buffer.from('<html>').toString('base64'), encoding: 'base64' }, 'content', 'PDF signature'],
+    [{ kind: 'pdf', suggestedName: 'a.pdf', content: 42, encoding: 'base64' }, 'content', 'base64'],
+    [{ kind: 'html', suggestedName: 'a.html', content: '<p>', encoding: 'gzip' }, 'encoding', 'utf8'],
+  ])('refuses %j, naming %s', (payload, field, words) => {
+    const checked = checkExportRequest(payload);
+    expect(checked.ok).toBe(false);
+    if (!checked.ok) {
+      expect(checked.field).toBe(field);
+      expect(checked.message).toContain(words);
+    }
+  });
+
+  it('keeps text kinds as they were: UTF-8 text with or without the encoding field', () => {
+    for (const request of [
+      { kind: 'html', suggestedName: 'r.html', content: '<!DOCTYPE html><p>Ω</p>' },
+      { kind: 'csv', suggestedName: 'b.csv', content: 'a,b\n', encoding: 'utf8' },
+    ]) {
+      const checked = checkExportRequest(request);
+      expect(checked.ok).toBe(true);
+      if (checked.ok) expect(checked.bytes).toBe(request.content);
+    }
+  });
+});
+
 describe('exportFile', () => {
+  it('writes a PNG sent as base64 as its bytes, offering the PNG filter', async () => {
+    const ask = vi.fn(async () => join(folder, 'diagram.png'));
+    const result = await exportFile({ kind: 'png', suggestedName: 'd.png', content: PNG_START.toString('base64'), encoding: 'base64' }, ask, folder);
+    expect(result.ok).toBe(true);
+    expect(ask).toHaveBeenCalledWith({ defaultPath: join(folder, 'd.png'), filters: [{ name: 'PNG image', extensions: ['png'] }] });
+    expect(Buffer.compare(readFileSync(join(folder, 'diagram.png')), PNG_START)).toBe(0);
+  });
+
   it('writes the content where the person chose, offering the suggested name in the documents folder', async () => {
     const ask = vi.fn(async () => join(folder, 'chosen.svg'));
     const result = await exportFile({ kind: 'svg', suggestedName: 'trainer.svg', content: '<svg/>' }, ask, '/home/ada/Documents');

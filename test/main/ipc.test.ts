@@ -1,7 +1,7 @@
 import { describe, expect, it, vi } from 'vitest';
 import { ipcHandlers, registerIpc, senderCheck, type IpcEventLike } from '../../app/main/ipc';
 import { SERVICE_METHODS } from '../../app/service/contract';
-import { EXPORT_CHANNEL, serviceChannel } from '../../app/shared/transport';
+import { EXPORT_CHANNEL, PRINT_CHANNEL, serviceChannel } from '../../app/shared/transport';
 
 vi.mock('electron', () => ({}));
 
@@ -16,13 +16,21 @@ const fromUs: IpcEventLike = { sender: ourContents, senderFrame: { url: page } }
 function handlers() {
   const dispatch = vi.fn(async (method: string, payload: unknown) => ({ ok: true as const, value: { method, payload } }));
   const exportFile = vi.fn(async () => ({ ok: true as const, value: null }));
-  return { dispatch, exportFile, map: ipcHandlers({ dispatch, exportFile, isTrustedSender: trusted }) };
+  const printPdf = vi.fn(async () => ({ ok: true as const, value: new Uint8Array([0x25, 0x50, 0x44, 0x46, 0x2d]) }));
+  return { dispatch, exportFile, printPdf, map: ipcHandlers({ dispatch, exportFile, printPdf, isTrustedSender: trusted }) };
 }
 
 describe('ipcHandlers', () => {
-  it('answers on one channel per service method and one for export', () => {
+  it('answers on one channel per service method, one for export and one for printing', () => {
     const { map } = handlers();
-    expect([...map.keys()].sort()).toEqual([...SERVICE_METHODS.map((method) => serviceChannel(method)), EXPORT_CHANNEL].sort());
+    expect([...map.keys()].sort()).toEqual([...SERVICE_METHODS.map((method) => serviceChannel(method)), EXPORT_CHANNEL, PRINT_CHANNEL].sort());
+  });
+
+  it('passes a print request from our window to the printer, with its sender', async () => {
+    const { map, printPdf } = handlers();
+    const result = await map.get(PRINT_CHANNEL)!(fromUs, { html: '<!DOCTYPE html>' });
+    expect(printPdf).toHaveBeenCalledWith(fromUs, { html: '<!DOCTYPE html>' });
+    expect(result.ok).toBe(true);
   });
 
   it('passes a message from our window to the service by method name', async () => {
@@ -37,13 +45,14 @@ describe('ipcHandlers', () => {
     ['our window showing another page', { sender: ourContents, senderFrame: { url: 'https://evil.example/' } }],
     ['a frame that is gone', { sender: ourContents, senderFrame: null }],
   ])('drops messages from %s before they reach the service', async (_title, event) => {
-    const { map, dispatch, exportFile } = handlers();
+    const { map, dispatch, exportFile, printPdf } = handlers();
     for (const handler of map.values()) {
       const result = await handler(event as IpcEventLike, {});
       expect(result.ok).toBe(false);
     }
     expect(dispatch).not.toHaveBeenCalled();
     expect(exportFile).not.toHaveBeenCalled();
+    expect(printPdf).not.toHaveBeenCalled();
   });
 });
 

@@ -40,6 +40,7 @@ describe('menuTemplate', () => {
     ['Undo', 'CmdOrCtrl+Z'],
     ['Redo', 'Ctrl+Y'],
     ['Export Diagram (SVG)…', 'CmdOrCtrl+E'],
+    ['Export Design-Review Report (PDF)…', 'CmdOrCtrl+P'],
   ])('%s has the shortcut %s', (label, accelerator) => {
     expect(byLabel(menuTemplate(actions(), state), label).accelerator).toBe(accelerator);
   });
@@ -49,6 +50,9 @@ describe('menuTemplate', () => {
     const template = menuTemplate(a, state);
     for (const label of ['Save Version…', 'Undo', 'Redo', 'Export Diagram (SVG)…', 'Export Concept (JSON)…', 'US Customary Units', 'Reset Diagram View', 'History']) click(byLabel(template, label));
     expect(a.sent).toEqual(['save-version', 'undo', 'redo', 'export-diagram', 'export-concept', 'units-us', 'reset-view', 'show-history']);
+    a.sent.length = 0;
+    for (const label of ['Export Design-Review Report (PDF)…', 'Export Design-Review Report (HTML)…', 'Export Diagram (PNG)…', 'Export Boundaries (CSV)…']) click(byLabel(template, label));
+    expect(a.sent).toEqual(['export-report-pdf', 'export-report-html', 'export-diagram-png', 'export-boundaries']);
     click(byLabel(template, 'New Project…'));
     click(byLabel(template, 'Open Project…'));
     click(byLabel(template, 'b.loftpoint'));

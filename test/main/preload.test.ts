@@ -3,7 +3,7 @@
  */
 import { describe, expect, it, vi } from 'vitest';
 import { SERVICE_METHODS } from '../../app/service/contract';
-import { COMMAND_CHANNEL, EXPORT_CHANNEL, serviceChannel } from '../../app/shared/transport';
+import { COMMAND_CHANNEL, EXPORT_CHANNEL, PRINT_CHANNEL, serviceChannel } from '../../app/shared/transport';
 
 const exposed: Record<string, unknown> = {};
 vi.mock('electron', () => ({
@@ -24,9 +24,9 @@ function fakeRenderer() {
 }
 
 describe('preload', () => {
-  it('exposes exactly the service methods, menu commands and export as window.api', () => {
+  it('exposes exactly the service methods, menu commands, export and printing as window.api', () => {
     expect(Object.keys(exposed)).toEqual(['api']);
-    expect(Object.keys(exposed.api as object).sort()).toEqual([...SERVICE_METHODS, 'exportFile', 'onCommand'].sort());
+    expect(Object.keys(exposed.api as object).sort()).toEqual([...SERVICE_METHODS, 'exportFile', 'onCommand', 'printPdf'].sort());
   });
 
   it('sends each method on its own channel with the request as given', async () => {
@@ -35,6 +35,8 @@ describe('preload', () => {
     expect(await api.getVersion({ version: 4 })).toEqual({ channel: serviceChannel('getVersion'), payload: { version: 4 } });
     await api.exportFile({ kind: 'svg', suggestedName: 'a.svg', content: '<svg/>' });
     expect(renderer.invoke).toHaveBeenLastCalledWith(EXPORT_CHANNEL, { kind: 'svg', suggestedName: 'a.svg', content: '<svg/>' });
+    await api.printPdf({ html: '<!DOCTYPE html>' });
+    expect(renderer.invoke).toHaveBeenLastCalledWith(PRINT_CHANNEL, { html: '<!DOCTYPE html>' });
   });
 
   it('passes on known menu commands only, and stops listening when asked', () => {

@@ -1,0 +1,102 @@
+/**
+ * Printing a design-review report to PDF for the desktop window: the page
+ * sends the report's HTML; main checks it, writes it to a fresh temporary
+ * folder and prints it in a hidden window with JavaScript off, its own
+ * in-memory session and no way out (no navigation, no requests but its own
+ * file), then hands back the bytes. The page itself cannot print to PDF.
+ */
+import { BrowserWindow, type PrintToPDFOptions } from 'electron';
+import { randomUUID } from 'node:crypto';
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import type { ServiceResult } from '../service/contract';
+import { checkPrintRequest } from '../shared/print-request';
+import { failure } from '../shared/transport';
+import { lockSession, lockWebContents } from './security';
+
+/** The part of a BrowserWindow printing uses. */
+export interface PrintWindow {
+  loadFile(file: string): Promise<void>;
+  webContents: { printToPDF(options: PrintToPDFOptions): Promise<Buffer> };
+  destroy(): void;
+}
+
+export interface PrintDeps {
+  /** A hidden window that may show only `page`. */
+  openWindow: (page: string) => PrintWindow;
+  /** Where the temporary folder goes [the system's]. */
+  folder?: string;
+  timeoutMs?: number;
+}
+
+/** Paper size and margins come from the report's own @page rule; its shaded boxes print. */
+export const PDF_OPTIONS: PrintToPDFOptions = { printBackground: true, preferCSSPageSize: true, generateDocumentOutline: true };
+
+/** A window for printing only: never shown, no scripts, no Node, its own session. */
+export function printWindowOptions(partition: string) {
+  return {
+    show: false,
+    width: 900,
+    height: 1200,
+    webPreferences: {
+      javascript: false,
+      sandbox: true,
+      contextIsolation: true,
+      nodeIntegration: false,
+      nodeIntegrationInWorker: false,
+      nodeIntegrationInSubFrames: false,
+      webSecurity: true,
+      allowRunningInsecureContent: false,
+      webviewTag: false,
+      spellcheck: false,
+      partition,
+    },
+  };
+}
+
+export function hiddenPrintWindow(page: string): PrintWindow {
+  // A session of its own (in memory, never on disk), locked to the one page.
+  const window = new BrowserWindow(printWindowOptions(`loftpoint-print-${randomUUID()}`));
+  const url = pathToFileURL(page).href;
+  lockWebContents(window.webContents, url);
+  lockSession(window.webContents.session, url);
+  return window;
+}
+
+function withTimeout<T>(work: Promise<T>, ms: number): Promise<T> {
+  return new Promise((resolve, reject) => {
+    const timer = setTimeout(() => reject(new Error(`it took longer than ${Math.round(ms / 1000)} s`)), ms);
+    work.then(
+      (value) => (clearTimeout(timer), resolve(value)),
+      (error: unknown) => (clearTimeout(timer), reject(error)),
+    );
+  });
+}
+
+export async function printReportPdf(payload: unknown, deps: PrintDeps): Promise<ServiceResult<Uint8Array>> {
+  const checked = checkPrintRequest(payload);
+  if (!checked.ok) return failure('bad-request', `printPdf: ${checked.field}: ${checked.message}`, checked.field);
+  let folder: string | null = null;
+  let window: PrintWindow | null = null;
+  try {
+    folder = await mkdtemp(join(deps.folder ?? tmpdir(), 'loftpoint-print-'));
+    const page = join(folder, 'report.html');
+    await writeFile(page, checked.html, 'utf8');
+    const opened = deps.openWindow(page);
+    window = opened;
+    const pdf = await withTimeout(
+      opened.loadFile(page).then(() => opened.webContents.printToPDF(PDF_OPTIONS)),
+      deps.timeoutMs ?? 60_000,
+    );
+    const bytes = new Uint8Array(pdf);
+    if (bytes.length < 5 || String.fromCharCode(...bytes.subarray(0, 5)) !== '%PDF-') return failure('internal', 'The report could not be printed to PDF: the printer gave no PDF');
+    return { ok: true, value: bytes };
+  } catch (error) {
+    return failure('io', `The report could not be printed to PDF: ${error instanceof Error ? error.message.split('\n')[0] : String(error)}`);
+  } finally {
+    window?.destroy();
+    if (folder) await rm(folder, { recursive: true, force: true });
+  }
+}
