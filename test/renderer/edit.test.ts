@@ -44,6 +44,29 @@ describe('concept edits', () => {
     expect(freshRequirementId(doc, 'stall')).toBe('stall-2');
   });
 
+  it('remove the ranges on a removed requirement, so the concept still reads', () => {
+    const base = demo();
+    const takeoff = (base.requirements as Array<{ id: string; kind: string }>).findIndex((r) => r.kind === 'takeoff-ground-roll');
+    const id = (base.requirements as Array<{ id: string }>)[takeoff].id;
+    const doc: ConceptDocument = {
+      ...base,
+      uncertainty: {
+        seed: 7,
+        samples: 1000,
+        parameters: [
+          { field: `requirements.${id}.rollingFriction`, low: 0.02, high: 0.1 },
+          { field: 'aircraft.aero.aspectRatio', low: 6, high: 8 },
+        ],
+      },
+    };
+    expect(parseConcept(doc).ok).toBe(true);
+    const removed = removeRequirement(doc, takeoff);
+    expect(removed.uncertainty).toEqual({ seed: 7, samples: 1000, parameters: [{ field: 'aircraft.aero.aspectRatio', low: 6, high: 8 }] });
+    expect(parseConcept(removed).ok).toBe(true);
+    // The old document is untouched.
+    expect((doc.uncertainty as { parameters: unknown[] }).parameters).toHaveLength(2);
+  });
+
   it('switch off, remove and place the design point in SI', () => {
     let doc = setRequirementEnabled(demo(), 0, false);
     expect(getIn(doc, ['requirements', 0, 'enabled'])).toBe(false);

@@ -6,6 +6,8 @@
 import { SERVICE_METHODS, type RemoteService, type ServiceMethod, type ServiceResult } from '../../../service/contract';
 import type { DesktopApi, ExportFileRequest, WindowCommand } from '../../../shared/desktop-api';
 import { EXPORT_KINDS } from '../../../shared/desktop-api';
+import { PRINT_PDF_PATH } from '../../../shared/print-request';
+import { base64ToBytes } from '../export/base64';
 
 export const TOKEN_HEADER = 'X-Loftpoint-Token';
 const TOKEN_KEY = 'loftpoint.token';
@@ -18,6 +20,8 @@ export interface Connection {
   onCommand(listener: (command: WindowCommand) => void): () => void;
   /** Writes a file: a save dialog in the desktop window, a download in the browser. */
   exportFile(request: ExportFileRequest): Promise<string | null>;
+  /** A design-review report's HTML printed to PDF by the shell; throws an Error with a message to show. */
+  printPdf(html: string): Promise<Uint8Array>;
 }
 
 declare global {
@@ -60,8 +64,50 @@ export function httpService(token: string, fetcher: typeof fetch = fetch): Remot
   return Object.fromEntries(SERVICE_METHODS.map((method) => [method, (request: unknown) => call(method, request)])) as RemoteService;
 }
 
+const PDF_SIGNATURE = '%PDF-';
+
+function isPdf(bytes: Uint8Array): boolean {
+  return bytes.length > PDF_SIGNATURE.length && String.fromCharCode(...bytes.subarray(0, PDF_SIGNATURE.length)) === PDF_SIGNATURE;
+}
+
+/** Browser mode: the server prints with its Chromium, behind the same token and origin checks as the service. */
+export function httpPrinter(token: string, fetcher: typeof fetch = fetch): (html: string) => Promise<Uint8Array> {
+  return async (html) => {
+    let response: Response;
+    try {
+      response = await fetcher(`.${PRINT_PDF_PATH}`, {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
+        body: JSON.stringify({ html }),
+        credentials: 'same-origin',
+        cache: 'no-store',
+      });
+    } catch {
+      throw new Error('the Loftpoint server is not answering; is `loftpoint serve` still running?');
+    }
+    if ((response.headers.get('Content-Type') ?? '').startsWith('application/pdf')) {
+      const bytes = new Uint8Array(await response.arrayBuffer());
+      if (response.ok && isPdf(bytes)) return bytes;
+      throw new Error('the server answered with a damaged PDF');
+    }
+    let message = `the server answered ${response.status} without a PDF`;
+    try {
+      const result = (await response.json()) as { error?: { message?: unknown } };
+      if (typeof result.error?.message === 'string') message = result.error.message;
+    } catch {
+      // The status line is all there is.
+    }
+    throw new Error(message);
+  };
+}
+
+/** The bytes a request stands for: its text, or its base64 decoded. */
+export function exportBytes(request: ExportFileRequest): BlobPart {
+  return request.encoding === 'base64' ? base64ToBytes(request.content) : request.content;
+}
+
 function download(request: ExportFileRequest): string {
-  const blob = new Blob([request.content], { type: EXPORT_KINDS[request.kind].mime });
+  const blob = new Blob([exportBytes(request)], { type: EXPORT_KINDS[request.kind].mime });
   const url = URL.createObjectURL(blob);
   const link = document.createElement('a');
   link.href = url;
@@ -85,9 +131,18 @@ export function connect(): Connection {
         if (!result.ok) throw new Error(result.error.message);
         return result.value ? result.value.file : null;
       },
+      printPdf: async (html) => {
+        const result = await desktop.printPdf({ html });
+        if (!result.ok) throw new Error(result.error.message);
+        if (!isPdf(result.value)) throw new Error('the desktop shell answered with a damaged PDF');
+        return result.value;
+      },
     };
   }
-  const local = { onCommand: () => () => {}, exportFile: async (request: ExportFileRequest) => download(request) };
+  const noPrinter = async (): Promise<Uint8Array> => {
+    throw new Error('PDF needs the Loftpoint desktop window or `loftpoint serve`; export the HTML report and print it from the browser instead');
+  };
+  const local = { onCommand: () => () => {}, exportFile: async (request: ExportFileRequest) => download(request), printPdf: noPrinter };
   if (location.protocol !== 'http:') {
     return { mode: 'offline', service: null, problem: 'No project is open: this page was opened without its server.', ...local };
   }
@@ -100,5 +155,5 @@ export function connect(): Connection {
       ...local,
     };
   }
-  return { mode: 'browser', service: httpService(token), ...local };
+  return { mode: 'browser', service: httpService(token), ...local, printPdf: httpPrinter(token) };
 }

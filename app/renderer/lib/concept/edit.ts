@@ -64,8 +64,16 @@ export function addRequirement(document: ConceptDocument, kind: RequirementKind)
   return { document: { ...document, requirements: [...requirementsOf(document), requirement] }, id };
 }
 
+/** Removes the requirement and any ranges on its own assumptions (`requirements.ID.…`), which would otherwise point at nothing. */
 export function removeRequirement(document: ConceptDocument, index: number): ConceptDocument {
-  return { ...document, requirements: requirementsOf(document).filter((_, i) => i !== index) };
+  const requirements = requirementsOf(document);
+  const id = requirements[index]?.id;
+  const next: ConceptDocument = { ...document, requirements: requirements.filter((_, i) => i !== index) };
+  const uncertainty = document.uncertainty;
+  if (typeof id !== 'string' || !isRecord(uncertainty) || !Array.isArray(uncertainty.parameters)) return next;
+  const prefix = `requirements.${id}.`;
+  const parameters = uncertainty.parameters.filter((parameter) => !(isRecord(parameter) && typeof parameter.field === 'string' && parameter.field.startsWith(prefix)));
+  return parameters.length === uncertainty.parameters.length ? next : { ...next, uncertainty: { ...uncertainty, parameters } };
 }
 
 /** `enabled` is left out when true, as the file's default. */
