@@ -2,7 +2,8 @@
  * What each requirement costs, as rows of display text: core
  * `requirementCosts` (the optimum with each requirement relaxed and
  * tightened by a step) with the stepped value and the changes of the
- * optimum's loading and wing area in display units, absolute and relative.
+ * optimum's loading, wing area and installed power or thrust in display
+ * units, absolute and relative.
  * Shared by the report's table and the window's.
  */
 import type { LoadingAxis } from '../../core/model';
@@ -17,6 +18,8 @@ export interface CostCaseText {
   /** "+0.52 W/N (+4.9 %)"; "nothing feasible" when no point meets every requirement. */
   loading: string;
   wingArea: string;
+  /** Installed sea-level power (or thrust, for jets) at the optimum, all engines. */
+  installed: string;
   feasible: boolean;
 }
 
@@ -68,26 +71,29 @@ function changeText(value: number, relative: number, quantity: DisplayQuantity, 
   return `${unit ? `${absolute} ${unit}` : absolute} (${formatMargin(relative)})`;
 }
 
-function caseText(cost: RequirementCost, entry: CostCase, axis: LoadingAxis, system: UnitSystem): CostCaseText {
+function caseText(cost: RequirementCost, entry: CostCase, axis: LoadingAxis, nominalInstalled: number, system: UnitSystem): CostCaseText {
   const value = steppedValueText(cost.steppedField, entry.value, system);
-  if (!entry.optimum) return { value, loading: 'nothing feasible', wingArea: 'nothing feasible', feasible: false };
+  if (!entry.optimum) return { value, loading: 'nothing feasible', wingArea: 'nothing feasible', installed: 'nothing feasible', feasible: false };
+  const installedRelative = nominalInstalled > 0 ? entry.installedChange / nominalInstalled : NaN;
   return {
     value,
     loading: changeText(entry.loadingChange, entry.loadingChangeRelative, axis, system),
     wingArea: changeText(entry.wingAreaChangeM2, entry.wingAreaChangeRelative, 'area', system),
+    installed: changeText(entry.installedChange, installedRelative, axis === 'thrustToWeight' ? 'thrust' : 'power', system),
     feasible: true,
   };
 }
 
 export function costRows(costs: RequirementCosts, system: UnitSystem): CostRow[] {
+  const nominalInstalled = costs.nominal?.installed ?? NaN;
   return costs.costs.map((cost) => ({
     id: cost.id,
     kind: kindTitle(cost.kind),
     label: cost.label?.trim() || cost.id,
     stepped: `${WORDS_OF_FIELD[cost.steppedField] ?? cost.conceptField} ${steppedValueText(cost.steppedField, cost.nominalValue, system)}`,
     relaxedDirection: cost.relaxedDirection,
-    relaxed: caseText(cost, cost.relaxed, costs.axis, system),
-    tightened: caseText(cost, cost.tightened, costs.axis, system),
+    relaxed: caseText(cost, cost.relaxed, costs.axis, nominalInstalled, system),
+    tightened: caseText(cost, cost.tightened, costs.axis, nominalInstalled, system),
     notes: [...cost.notes],
   }));
 }

@@ -106,14 +106,17 @@ function costsPart(ctx: ReportContext, studies: ReportStudies): string {
     const name = markup(`<span class="id">${text(row.id)}</span><span class="label">${text(row.kind)}: ${text(row.stepped)}</span>`);
     const notes = row.notes.length > 0 ? markup(`<span class="label">${text(row.notes.join(' '))}</span>`) : '';
     return [
-      [name, 'relaxed', row.relaxed.value, changeCell(row.relaxed.loading, row.relaxed.feasible), changeCell(row.relaxed.wingArea, row.relaxed.feasible)],
-      [notes, 'tightened', row.tightened.value, changeCell(row.tightened.loading, row.tightened.feasible), changeCell(row.tightened.wingArea, row.tightened.feasible)],
+      [name, 'relaxed', row.relaxed.value, changeCell(row.relaxed.loading, row.relaxed.feasible), changeCell(row.relaxed.wingArea, row.relaxed.feasible), changeCell(row.relaxed.installed, row.relaxed.feasible)],
+      [notes, 'tightened', row.tightened.value, changeCell(row.tightened.loading, row.tightened.feasible), changeCell(row.tightened.wingArea, row.tightened.feasible), changeCell(row.tightened.installed, row.tightened.feasible)],
     ];
   });
   return [
-    table(['Requirement', 'Case', 'Stepped to', `Optimum ${ctx.axisSymbol}: change`, 'Wing area at optimum: change'], rows, { numeric: [2, 3, 4], className: 'costs' }),
+    table(['Requirement', 'Case', 'Stepped to', `Optimum ${ctx.axisSymbol}: change`, 'Wing area at optimum: change', `${ctx.evaluation.axis === 'thrustToWeight' ? 'Installed thrust' : 'Installed power'}: change`], rows, {
+      numeric: [2, 3, 4, 5],
+      className: 'costs',
+    }),
     paragraph(
-      `Each requirement in turn relaxed and tightened by ${step} of its main value, the others as they are; the optimum is found again and compared with today’s. Wing area is at the optimum, at take-off mass. A requirement that does not bind usually costs nothing until the step makes it bind.`,
+      `Each requirement in turn relaxed and tightened by ${step} of its main value, the others as they are; the optimum is found again and compared with today’s. Wing area and installed power or thrust (sea-level rated, all engines) are at the optimum, at take-off mass. A requirement that does not bind usually costs nothing until the step makes it bind.`,
       'small muted',
     ),
   ].join('\n');

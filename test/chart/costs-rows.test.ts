@@ -30,6 +30,18 @@ describe('costRows', () => {
     expect(cruise.relaxedDirection).toBe('down');
   });
 
+  it('gives the installed power change in kW, in step with the power-to-weight change at a fixed mass', () => {
+    // P = (P/W) W at take-off weight (common practice), so at one mass both change by the same fraction.
+    const stall = costRows(costs, 'si').find((row) => row.id === 'stall')!;
+    const relative = (text: string) => Number(/\(([+−-][\d.]+) %\)$/.exec(text)![1].replace('−', '-'));
+    expect(stall.tightened.installed).toMatch(/^\+[\d.]+ kW \(\+[\d.]+ %\)$/);
+    expect(relative(stall.tightened.installed)).toBeCloseTo(relative(stall.tightened.loading), 1);
+    expect(relative(stall.relaxed.installed)).toBeCloseTo(relative(stall.relaxed.loading), 1);
+    const jet = studied(demoConcept('business-jet'));
+    const jetRows = costRows(requirementCosts(jet.design, { step: 0.1 }), 'si');
+    expect(jetRows.find((row) => row.relaxed.feasible)!.relaxed.installed).toMatch(/kN|±0/);
+  });
+
   it('never shows a relaxed requirement costing more power at the optimum', () => {
     for (const cost of costs.costs) {
       if (cost.relaxed.optimum) expect(cost.relaxed.loadingChange).toBeLessThanOrEqual(1e-9);
