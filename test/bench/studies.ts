@@ -1,7 +1,7 @@
 /**
  * Trade-study speed on the business-jet demo with a range on every assumption
- * that may carry one: boundary bands and the tornado (target under 50 ms
- * each), and the Monte Carlo of 10,000 samples on a 200 x 200 probability
+ * that may carry one: boundary bands, the tornado and the requirement costs
+ * (target under 50 ms each, as for anything redrawn when the concept changes), and the Monte Carlo of 10,000 samples on a 200 x 200 probability
  * grid (target under 1 s on one core). Median of several runs after a warm-up;
  * wall-clock and process CPU time both printed, since the machine may be
  * shared. Measures only: exits 0.
@@ -15,6 +15,7 @@ import {
   defaultProbabilityGrid,
   plotRangeOf,
   probabilityMap,
+  requirementCosts,
   resolveUncertainty,
   tornado,
   typicalUncertainty,
@@ -67,6 +68,7 @@ console.log(`business-jet demo: ${design.requirements.length} requirements, ${pa
 const rows: Array<[string, { wall: number; cpu: number; first: number }, number]> = [
   [`bands (${wingLoadings.length} wing loadings)`, measure(() => boundaryBands(design, parameters, wingLoadings)), 50],
   [`tornado (${parameters.length} assumptions x 2 ends)`, measure(() => tornado(design, parameters)), 50],
+  [`requirement costs (${design.requirements.length} x relaxed, tightened)`, measure(() => requirementCosts(design, { step: 0.1 })), 50],
   [
     'Monte Carlo (10,000 samples, 200 x 200 grid)',
     measure(() => probabilityMap(design, parameters, { seed: block.seed, samples: 10000, grid })),
