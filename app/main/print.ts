@@ -15,6 +15,7 @@ import type { ServiceResult } from '../service/contract';
 import { checkPrintRequest } from '../shared/print-request';
 import { failure } from '../shared/transport';
 import { lockSession, lockWebContents } from './security';
+import { SECURE_PREFERENCES } from './window';
 
 /** The part of a BrowserWindow printing uses. */
 export interface PrintWindow {
@@ -40,19 +41,8 @@ export function printWindowOptions(partition: string) {
     show: false,
     width: 900,
     height: 1200,
-    webPreferences: {
-      javascript: false,
-      sandbox: true,
-      contextIsolation: true,
-      nodeIntegration: false,
-      nodeIntegrationInWorker: false,
-      nodeIntegrationInSubFrames: false,
-      webSecurity: true,
-      allowRunningInsecureContent: false,
-      webviewTag: false,
-      spellcheck: false,
-      partition,
-    },
+    // The designer window's locked-down settings, and no JavaScript at all.
+    webPreferences: { ...SECURE_PREFERENCES, javascript: false, partition },
   };
 }
 
