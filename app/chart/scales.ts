@@ -98,13 +98,20 @@ export function axisTitles(data: ChartData): { x: string; y: string } {
   return { x, y };
 }
 
-export function chartScales(data: ChartData, frame: ChartFrame): ChartScales {
-  const domains = chartDomains(data);
+export interface ScaleOptions {
+  /** Pixels between vertical-axis ticks, roughly. */
+  yTickSpacing?: number;
+  /** A title for the vertical axis other than the data's own (e.g. power loading). */
+  yTitle?: string;
+}
+
+/** Scales over given domains (the window's zoomed view); `chartScales` picks the domains from the data. */
+export function scalesOver(data: ChartData, frame: ChartFrame, domains: { x: [number, number]; y: [number, number] }, options: ScaleOptions = {}): ChartScales {
   const plot = plotArea(frame);
   const x = scaleLinear().domain(domains.x).range([plot.left, plot.right]);
   const y = scaleLinear().domain(domains.y).range([plot.bottom, plot.top]);
   const xCount = Math.max(2, Math.round(plot.width / 90));
-  const yCount = Math.max(2, Math.round(plot.height / 55));
+  const yCount = Math.max(2, Math.round(plot.height / (options.yTickSpacing ?? 55)));
   const titles = axisTitles(data);
   return {
     x,
@@ -115,6 +122,10 @@ export function chartScales(data: ChartData, frame: ChartFrame): ChartScales {
     formatX: x.tickFormat(xCount),
     formatY: y.tickFormat(yCount),
     xTitle: titles.x,
-    yTitle: titles.y,
+    yTitle: options.yTitle ?? titles.y,
   };
+}
+
+export function chartScales(data: ChartData, frame: ChartFrame): ChartScales {
+  return scalesOver(data, frame, chartDomains(data));
 }

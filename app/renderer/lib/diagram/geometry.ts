@@ -4,15 +4,13 @@
  * propeller aircraft, may show power loading W/P (the inverse of P/W) on the
  * vertical axis. Pure: data in, scales, paths and labels out.
  */
-import { line } from 'd3';
-import { scaleLinear } from 'd3';
+import { line, scaleLinear } from 'd3';
 import {
-  axisTitles,
   chartDomains,
   clipToBand,
   feasibleRegion,
   placeLabels,
-  plotArea,
+  scalesOver,
   type ChartData,
   type ChartFrame,
   type ChartScales,
@@ -122,24 +120,8 @@ function region(source: ChartData, plotted: ChartData, powerLoading: boolean, do
 }
 
 export function scalesFor(data: ChartData, frame: ChartFrame, domains: Domains): ChartScales {
-  const plot = plotArea(frame);
-  const x = scaleLinear().domain(domains.x).range([plot.left, plot.right]);
-  const y = scaleLinear().domain(domains.y).range([plot.bottom, plot.top]);
-  const xCount = Math.max(2, Math.round(plot.width / 90));
-  const yCount = Math.max(2, Math.round(plot.height / 50));
-  const titles = axisTitles(data);
-  const yTitle = data.units.loading === powerLoadingUnit(data.system) && data.axis === 'powerToWeight' ? `Power loading W/P [${data.units.loading}]` : titles.y;
-  return {
-    x,
-    y,
-    plot,
-    xTicks: x.ticks(xCount),
-    yTicks: y.ticks(yCount),
-    formatX: x.tickFormat(xCount),
-    formatY: y.tickFormat(yCount),
-    xTitle: titles.x,
-    yTitle,
-  };
+  const powerLoading = data.units.loading === powerLoadingUnit(data.system) && data.axis === 'powerToWeight';
+  return scalesOver(data, frame, domains, { yTickSpacing: 50, ...(powerLoading ? { yTitle: `Power loading W/P [${data.units.loading}]` } : {}) });
 }
 
 export function diagramGeometry(source: ChartData, size: { width: number; height: number }, view: Domains | null, askPowerLoading: boolean): Geometry {
