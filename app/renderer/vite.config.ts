@@ -32,6 +32,8 @@ export const rendererConfig: UserConfig = {
     target: 'chrome120',
     sourcemap: false,
     reportCompressedSize: false,
+    // The page loads from the local disk or 127.0.0.1, never over a network: one ~0.6 MB bundle is fine.
+    chunkSizeWarningLimit: 1024,
   },
   // Pure core code runs in the page; nothing from Node is bundled.
   resolve: { conditions: ['browser'] },
