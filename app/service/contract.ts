@@ -312,6 +312,12 @@ export interface StartConceptRequest {
   /** The version to start from; the new concept's first version has it as parent. */
   fromVersion: number;
   name: string;
+  /**
+   * The `name` written into the copied concept JSON of the first version (the
+   * title on the diagram and in reports); absent: the concept JSON is copied
+   * byte for byte.
+   */
+  title?: string;
   note?: string;
   author?: string;
 }

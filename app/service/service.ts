@@ -56,6 +56,13 @@ export type ServiceHandlers = {
 
 const FALLBACK_CONCEPT_NAME = 'Untitled concept';
 
+/** A stored concept JSON with its `name` replaced, the rest unchanged (written with two-space indents, as demos are). */
+function retitled(conceptJson: string, title: string): string {
+  const concept: unknown = JSON.parse(conceptJson);
+  if (typeof concept !== 'object' || concept === null || Array.isArray(concept)) return conceptJson;
+  return `${JSON.stringify({ ...concept, name: title }, null, 2)}\n`;
+}
+
 export class ProjectService implements ServiceHandlers {
   #store: ProjectStore | null = null;
   readonly #author: string;
@@ -295,7 +302,8 @@ export class ProjectService implements ServiceHandlers {
     if (store.conceptByName(name)) {
       throw new ServiceFailure('name-taken', `${store.file}: a concept "${name}" already exists`, { file: store.file, field: 'name' });
     }
-    const checked = checkAndEvaluateText(source.conceptJson, `version ${source.number}`);
+    const conceptJson = request.title === undefined ? source.conceptJson : retitled(source.conceptJson, cleanName(request.title, 'title'));
+    const checked = checkAndEvaluateText(conceptJson, `version ${source.number}`);
     const createdAt = this.#time();
     const number = store.write(() => {
       if (store.conceptByName(name)) {
@@ -304,7 +312,7 @@ export class ProjectService implements ServiceHandlers {
       return store.insertVersion({
         conceptId: store.insertConcept(name, createdAt),
         parent: source.number,
-        conceptJson: source.conceptJson,
+        conceptJson,
         evaluationJson: JSON.stringify(checked.summary),
         note: request.note ?? `Started from version ${source.number} of "${source.conceptName}".`,
         author: request.author?.trim() || this.#author,

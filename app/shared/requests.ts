@@ -40,7 +40,7 @@ export const REQUEST_SCHEMAS: Schemas = {
     parent: version.nullable().optional(),
   }),
   compareVersions: z.strictObject({ a: version, b: version }),
-  startConcept: z.strictObject({ fromVersion: version, name, note: text(100_000).optional(), author: text(200).optional() }),
+  startConcept: z.strictObject({ fromVersion: version, name, title: name.optional(), note: text(100_000).optional(), author: text(200).optional() }),
   tagVersion: z.strictObject({ version, tag: name }),
   untagVersion: z.strictObject({ version, tag: name }),
   exportProject: empty,

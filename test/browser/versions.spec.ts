@@ -68,3 +68,39 @@ test('save a version with a note, reload, reopen the older version and compare t
   await expect(window.byTest('status-message')).toContainText(`Continuing from version ${newest}`);
   await window.expectNoNaN();
 });
+
+test('a saved version starts a new concept, a design alternative that keeps the old one as it was', async ({ window }) => {
+  await window.selectConcept('LP-2 two-seat trainer');
+  await window.byTest('tab-history').click();
+  const list = window.byTest('version-list');
+  const source = Number((await list.locator('li').first().getAttribute('data-testid'))!.replace('version-', ''));
+  const conceptsBefore = await window.byTest('concept-select').locator('option').count();
+
+  await window.byTest(`version-${source}`).getByTestId('version-open').click();
+  await window.byTest('new-concept-from-version').click();
+  await expect(window.byTest('new-concept-name')).toBeFocused();
+  // A name already in use is refused before anything is written.
+  await window.byTest('new-concept-name').fill('LP-2 two-seat trainer');
+  await expect(window.byTest('new-concept-problem')).toContainText('already exists');
+  await expect(window.byTest('new-concept-start')).toBeDisabled();
+  await window.byTest('new-concept-name').fill('LP-2 high-wing variant');
+  await window.byTest('new-concept-note').fill('Try a high wing for grass-strip clearance');
+  await window.shot('new-concept-form');
+  await window.byTest('new-concept-start').click();
+
+  await expect(window.byTest('viewing-banner')).toHaveCount(0);
+  await expect(window.byTest('concept-select')).toHaveValue('LP-2 high-wing variant');
+  await expect(window.byTest('concept-title')).toHaveText('LP-2 high-wing variant');
+  await expect(window.byTest('concept-select').locator('option')).toHaveCount(conceptsBefore + 1);
+  await expect(window.byTest('status-message')).toContainText(`from version ${source}`);
+  // Its one version has the source version as parent and carries the note.
+  await expect(list.locator('li')).toHaveCount(1);
+  await expect(list.locator('li').first().getByTestId('version-note-text')).toHaveText('Try a high wing for grass-strip clearance');
+  await expect(window.byTest('unsaved')).toHaveCount(0);
+  await window.shot('new-concept-started');
+
+  // The original concept is untouched.
+  await window.selectConcept('LP-2 two-seat trainer');
+  await expect(window.byTest(`version-${source}`)).toBeVisible();
+  await window.expectNoNaN();
+});

@@ -154,6 +154,22 @@ describe('startConcept, tags and names', () => {
     service.closeProject({});
   });
 
+  it('can give the new concept its own title; everything else in the concept stays as it was', () => {
+    const { service } = serviceWithProject({ demo: true });
+    const { version } = service.startConcept({ fromVersion: 1, name: 'High-wing variant', title: 'LP-2H high-wing trainer', note: 'grass clearance' });
+    const copied = JSON.parse(service.getVersion({ version: version.number }).conceptText) as Record<string, unknown>;
+    const source = JSON.parse(service.getVersion({ version: 1 }).conceptText) as Record<string, unknown>;
+    expect(copied.name).toBe('LP-2H high-wing trainer');
+    expect({ ...copied, name: source.name }).toEqual(source);
+    expect(Object.keys(copied)).toEqual(Object.keys(source));
+    expect(version.note).toBe('grass clearance');
+    // The comparison names the title as the one change.
+    const comparison = service.compareVersions({ a: 1, b: version.number });
+    expect(JSON.stringify(comparison)).toContain('LP-2H high-wing trainer');
+    expect(failure(() => service.startConcept({ fromVersion: 1, name: 'Another', title: '  ' })).field).toBe('title');
+    service.closeProject({});
+  });
+
   it('tags and untags versions without touching them', () => {
     const { service } = serviceWithProject({ demo: true });
     expect(service.tagVersion({ version: 1, tag: 'sent to customer' }).tags).toEqual(['sent to customer']);

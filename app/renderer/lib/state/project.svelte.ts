@@ -96,6 +96,11 @@ export class ProjectState {
     return this.#service !== null && this.project !== null;
   }
 
+  /** A project is open and its file may be written (saving may still wait for a viewed version to be left). */
+  get writable(): boolean {
+    return this.#canWrite();
+  }
+
   #canWrite(): boolean {
     return this.#service !== null && this.project !== null && !this.project.readonly;
   }
@@ -247,6 +252,34 @@ export class ProjectState {
     this.saved = document;
     this.workspace.load(document, this.project?.readonly === true);
     this.status = { kind: 'info', text: `Continuing from version ${viewing.number}; the next save will have it as parent.` };
+  }
+
+  /**
+   * Starts a new concept (a design alternative) whose first version copies
+   * `fromVersion`, with that version as its parent, and switches to it.
+   * The name is checked by the service; a taken name leaves everything as it was.
+   */
+  async startConceptFrom(fromVersion: number, name: string, note?: string): Promise<boolean> {
+    const service = this.#service;
+    if (!service || !this.#canWrite()) return false;
+    this.busy = true;
+    try {
+      // The concept's title on the diagram and in reports follows its name in the project, as for the demos.
+      const result = await service.startConcept({ fromVersion, name: name.trim(), title: name.trim(), ...(note?.trim() ? { note: note.trim() } : {}) });
+      if (!result.ok) {
+        this.#fail(result.error);
+        return false;
+      }
+      this.viewing = null;
+      this.comparison = null;
+      this.#stashed = null;
+      await this.refreshConcepts();
+      await this.selectConcept(result.value.version.conceptName);
+      this.status = { kind: 'info', text: `Started concept "${result.value.version.conceptName}" from version ${fromVersion} (its version ${result.value.version.number}).` };
+      return true;
+    } finally {
+      this.busy = false;
+    }
   }
 
   /** Compares two versions: the newer one shown read-only, the older drawn faintly behind. */
