@@ -140,6 +140,31 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     );
 
   project
+    .command('branch')
+    .description('Start a new concept (a design alternative) from a stored version; prints only its first version number.')
+    .argument('<file>', 'the project file')
+    .argument('<version>', 'the version to start from (the new concept\'s first version has it as parent)')
+    .requiredOption('--name <name>', 'the new concept\'s name in the project')
+    .option('--title <title>', 'write this as the concept\'s own name (its title on diagrams and reports); default: copy the concept unchanged')
+    .option('--note <text>', 'why this alternative exists (default: "Started from version N of ...")')
+    .option('--author <name>', 'author (default: $LOFTPOINT_AUTHOR or your user name)')
+    .action((file: string, version: string, options: { name: string; title?: string; note?: string; author?: string }) =>
+      run(io, setExitCode, (service) => {
+        const fromVersion = versionNumber(version, 'VERSION');
+        service.openProject({ file });
+        const started = service.startConcept({
+          fromVersion,
+          name: options.name,
+          ...(options.title !== undefined ? { title: options.title } : {}),
+          ...(options.note !== undefined ? { note: options.note } : {}),
+          ...(options.author !== undefined ? { author: options.author } : {}),
+        });
+        for (const warning of started.warnings) io.err(`loftpoint: warning: ${file}: ${warning}\n`);
+        io.out(`${started.version.number}\n`);
+      })(),
+    );
+
+  project
     .command('versions')
     .description('List every version: number, concept, parent, time, author, optimum, note.')
     .argument('<file>', 'the project file')

@@ -55,6 +55,35 @@ describe('loftpoint project create', () => {
   });
 });
 
+describe('loftpoint project branch', () => {
+  it('starts a new concept from a version, prints only its version number, and leaves the source as it was', async () => {
+    const { file } = await demoProject();
+    const before = (await cli('project', 'show', file, '1')).out;
+    const branched = await cli('project', 'branch', file, '1', '--name', 'High-wing trainer', '--title', 'LP-2H high-wing trainer', '--note', 'grass clearance');
+    expect(branched.code).toBe(0);
+    expect(branched.out).toBe(`${DEMO_CONCEPTS.length + 1}\n`);
+    const shown = JSON.parse((await cli('project', 'show', file, branched.out.trim())).out) as { name: string };
+    expect(shown.name).toBe('LP-2H high-wing trainer');
+    expect((await cli('project', 'show', file, '1')).out).toBe(before);
+    const versions = JSON.parse((await cli('project', 'versions', file, '--json')).out) as Array<{ number: number; parent: number | null; conceptName: string; note: string }>;
+    expect(versions.find((v) => v.number === DEMO_CONCEPTS.length + 1)).toMatchObject({ parent: 1, conceptName: 'High-wing trainer', note: 'grass clearance' });
+  });
+
+  it('refuses a name in use or a missing version: exit 2, one line, nothing written', async () => {
+    const { file } = await demoProject();
+    const taken = await cli('project', 'branch', file, '1', '--name', DEMO_CONCEPTS[1].concept.name as string);
+    expect(taken.code).toBe(2);
+    expect(taken.err).toContain('already exists');
+    expectOneLineError(taken.err);
+    const missing = await cli('project', 'branch', file, '99', '--name', 'Other');
+    expect(missing.code).toBe(2);
+    expect(missing.err).toContain('version 99 does not exist');
+    expectOneLineError(missing.err);
+    const versions = JSON.parse((await cli('project', 'versions', file, '--json')).out) as unknown[];
+    expect(versions).toHaveLength(DEMO_CONCEPTS.length);
+  });
+});
+
 describe('loftpoint project save', () => {
   it('prints only the new version number', async () => {
     const { folder, file } = await demoProject();
