@@ -66,3 +66,34 @@ export function bandHasWidth(band: BandSeries): boolean {
   if (band.type === 'limit') return band.range[1] > band.range[0];
   return band.points.some(([, lower, upper]) => lower !== null && (upper === null || upper > lower));
 }
+
+/** A point of a curve band as drawn: wing loading, lower and upper edge. */
+export type BandPoint = [number, number, number];
+
+/**
+ * A curve band split into runs of two or more points where it is defined
+ * (a null lower edge ends a run), each point placed by `place`, which may
+ * also drop a point by returning null. Shared by the SVG and the window.
+ */
+export function curveBandRuns(band: CurveBandSeries, place: (lower: number, upper: number | null) => [number, number] | null): BandPoint[][] {
+  const runs: BandPoint[][] = [];
+  let run: BandPoint[] = [];
+  for (const [x, lower, upper] of band.points) {
+    if (lower === null) {
+      if (run.length > 1) runs.push(run);
+      run = [];
+      continue;
+    }
+    const placed = place(lower, upper);
+    if (placed) run.push([x, placed[0], placed[1]]);
+  }
+  if (run.length > 1) runs.push(run);
+  return runs;
+}
+
+/** A plotted value kept within a tenth of the view's span beyond it, so paths stay short; the clip hides the rest. */
+export function clampToView(y: number, domain: readonly number[]): number {
+  const [lo, hi] = domain;
+  const span = hi - lo;
+  return Math.min(Math.max(y, lo - 0.1 * span), hi + 0.1 * span);
+}

@@ -3,7 +3,7 @@
  * behind their nominal lines), probability contours (above them), contour
  * labels placed on their lines clear of the other words, and legend rows.
  */
-import type { BandSeries, CurveBandSeries } from './bands';
+import { clampToView, curveBandRuns, type BandSeries, type CurveBandSeries } from './bands';
 import { boxesOverlap, boxInside, textWidth, type Box } from './boxes';
 import type { XY } from './clip';
 import { levelText, type ContourSeries } from './contours';
@@ -28,26 +28,10 @@ export function contourStyle(index: number): { dash: string; width: number } {
   return CONTOUR_STYLES[Math.min(index, CONTOUR_STYLES.length - 1)];
 }
 
-/** A band's drawn numbers stay within a margin of the plot, so paths stay short; the clip hides the rest. */
-function clampY(y: number, scales: ChartScales): number {
-  const [lo, hi] = scales.y.domain();
-  const span = hi - lo;
-  return Math.min(Math.max(y, lo - 0.1 * span), hi + 0.1 * span);
-}
-
 function curveBandShapes(band: CurveBandSeries, scales: ChartScales): string[] {
   const top = scales.y.domain()[1] * 1.2;
-  const runs: Array<Array<[number, number, number]>> = [];
-  let run: Array<[number, number, number]> = [];
-  for (const [x, lower, upper] of band.points) {
-    if (lower === null) {
-      if (run.length > 1) runs.push(run);
-      run = [];
-      continue;
-    }
-    run.push([x, clampY(lower, scales), clampY(upper ?? top, scales)]);
-  }
-  if (run.length > 1) runs.push(run);
+  const clamp = (y: number) => clampToView(y, scales.y.domain());
+  const runs = curveBandRuns(band, (lower, upper) => [clamp(lower), clamp(upper ?? top)]);
   return runs.flatMap((points) => {
     const upperEdge = points.map(([x, , upper]) => `${n(scales.x(x))},${n(scales.y(upper))}`);
     const lowerEdge = points.map(([x, lower]) => `${n(scales.x(x))},${n(scales.y(lower))}`);
@@ -84,7 +68,7 @@ export function bandLayer(bands: readonly BandSeries[], scales: ChartScales): st
 function ringPath(rings: XY[][], scales: ChartScales): string {
   return rings
     .filter((ring) => ring.length > 2)
-    .map((ring) => `M${ring.map(([x, y]) => `${n(scales.x(x))},${n(scales.y(clampY(y, scales)))}`).join('L')}Z`)
+    .map((ring) => `M${ring.map(([x, y]) => `${n(scales.x(x))},${n(scales.y(clampToView(y, scales.y.domain())))}`).join('L')}Z`)
     .join('');
 }
 

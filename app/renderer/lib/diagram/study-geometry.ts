@@ -6,7 +6,7 @@
  * T/W) and, for the power-loading view, shows them as W/P. Pure.
  */
 import { boxesOverlap, boxInside, textWidth, type Box, type ChartScales, type Labels, type XY } from '../../../chart';
-import type { BandSeries, CurveBandSeries } from '../../../chart/bands';
+import { clampToView, curveBandRuns, type BandPoint, type BandSeries, type CurveBandSeries } from '../../../chart/bands';
 import { levelText, type ContourSeries } from '../../../chart/contours';
 import { contourStyle } from '../../../chart/svg-study';
 
@@ -38,13 +38,6 @@ export interface ContourLabel {
 
 const f = (v: number) => (Math.round(v * 10) / 10).toString();
 
-/** A plotted value kept within a margin of the view, so paths stay short; the clip hides the rest. */
-function clampY(y: number, scales: ChartScales): number {
-  const [lo, hi] = scales.y.domain();
-  const span = hi - lo;
-  return Math.min(Math.max(y, lo - 0.1 * span), hi + 0.1 * span);
-}
-
 /** A displayed loading as plotted; +Infinity stands for "above everything", null for nothing to draw. */
 function plotted(y: number | null, view: LoadingView): number | null {
   if (y === null || !Number.isFinite(y)) return y === Infinity ? Infinity : null;
@@ -53,22 +46,12 @@ function plotted(y: number | null, view: LoadingView): number | null {
 }
 
 /** A curve band's [x, low, high] in plotted values; an open top (some combination cannot meet it) reaches the view's far edge. */
-function curveBandRuns(band: CurveBandSeries, view: LoadingView): Array<Array<[number, number, number]>> {
-  const runs: Array<Array<[number, number, number]>> = [];
-  let run: Array<[number, number, number]> = [];
-  for (const [x, lower, upper] of band.points) {
-    if (lower === null) {
-      if (run.length > 1) runs.push(run);
-      run = [];
-      continue;
-    }
+function plottedBandRuns(band: CurveBandSeries, view: LoadingView): BandPoint[][] {
+  return curveBandRuns(band, (lower, upper) => {
     const a = plotted(lower, view);
     const b = view.powerLoading ? (upper === null ? 0 : plotted(upper, view)) : upper === null ? Infinity : plotted(upper, view);
-    if (a === null || b === null) continue;
-    run.push([x, Math.min(a, b), Math.max(a, b)]);
-  }
-  if (run.length > 1) runs.push(run);
-  return runs;
+    return a === null || b === null ? null : [Math.min(a, b), Math.max(a, b)];
+  });
 }
 
 export function bandShapes(bands: readonly BandSeries[], scales: ChartScales, view: LoadingView): BandShape[] {
@@ -87,13 +70,13 @@ export function bandShapes(bands: readonly BandSeries[], scales: ChartScales, vi
       });
       continue;
     }
-    const runs = curveBandRuns(band, view);
+    const runs = plottedBandRuns(band, view);
     if (runs.length === 0) continue;
     let area = '';
     let edges = '';
     for (const points of runs) {
-      const high = points.map(([x, , hi]) => `${f(scales.x(x))},${f(scales.y(clampY(hi, scales)))}`);
-      const low = points.map(([x, lo]) => `${f(scales.x(x))},${f(scales.y(clampY(lo, scales)))}`);
+      const high = points.map(([x, , hi]) => `${f(scales.x(x))},${f(scales.y(clampToView(hi, scales.y.domain())))}`);
+      const low = points.map(([x, lo]) => `${f(scales.x(x))},${f(scales.y(clampToView(lo, scales.y.domain())))}`);
       area += `M${high.join('L')}L${[...low].reverse().join('L')}Z`;
       edges += `M${high.join('L')}M${low.join('L')}`;
     }
@@ -110,7 +93,7 @@ function ringPath(rings: readonly XY[][], scales: ChartScales, view: LoadingView
     for (const [x, y] of ring) {
       const shown = plotted(y, view);
       if (shown === null) continue;
-      points.push(`${f(scales.x(x))},${f(scales.y(clampY(shown, scales)))}`);
+      points.push(`${f(scales.x(x))},${f(scales.y(clampToView(shown, scales.y.domain())))}`);
     }
     if (points.length > 2) d += `M${points.join('L')}Z`;
   }
