@@ -70,14 +70,18 @@ export function fromDisplay(value: number, quantity: DisplayQuantity, system: Un
 }
 
 /**
- * "812 N/m²", "16.9 lb/ft²"; never "NaN": a value that is not finite reads "—".
+ * "812 N/m²", "16.9 lb/ft²", at least two significant figures ("0.80 kW");
+ * never "NaN": a value that is not finite reads "—".
  */
 export function formatQuantity(value: number | null | undefined, quantity: DisplayQuantity, system: UnitSystem): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';
   const { unit, fromSi, digits } = DISPLAY[system][quantity];
-  const shown = (value * fromSi).toLocaleString('en-US', {
-    minimumFractionDigits: digits,
-    maximumFractionDigits: digits,
+  const number = value * fromSi;
+  // At least two significant figures, so a small aircraft's 1.07 hp reads "1.1 hp", not "1 hp".
+  const decimals = number === 0 ? digits : Math.min(6, Math.max(digits, 1 - Math.floor(Math.log10(Math.abs(number)))));
+  const shown = number.toLocaleString('en-US', {
+    minimumFractionDigits: decimals,
+    maximumFractionDigits: decimals,
   });
   return unit ? `${shown} ${unit}` : shown;
 }

@@ -85,3 +85,15 @@ describe('display conversions', () => {
     expect(formatMargin(0)).toBe('0.0 %');
   });
 });
+
+describe('formatQuantity on small values', () => {
+  it('keeps two significant figures where the usual decimals would leave one', () => {
+    // NIST SP 811: 1 hp (550 ft·lbf/s) = 745.6999 W, so 800 W is 1.0728 hp.
+    expect(formatQuantity(800, 'power', 'us')).toBe('1.1 hp');
+    expect(formatQuantity(800, 'power', 'si')).toBe('0.80 kW');
+    // Values with two or more significant figures keep their usual decimals.
+    expect(formatQuantity(80_900, 'power', 'si')).toBe('80.9 kW');
+    expect(formatQuantity(84.2, 'wingLoading', 'si')).toBe('84 N/m²');
+    expect(formatQuantity(0, 'power', 'si')).toBe('0.0 kW');
+  });
+});
