@@ -6,7 +6,6 @@
  * file), then hands back the bytes. The page itself cannot print to PDF.
  */
 import { BrowserWindow, type PrintToPDFOptions } from 'electron';
-import { randomUUID } from 'node:crypto';
 import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -21,8 +20,16 @@ import { SECURE_PREFERENCES } from './window';
 export interface PrintWindow {
   loadFile(file: string): Promise<void>;
   webContents: { printToPDF(options: PrintToPDFOptions): Promise<Buffer> };
-  destroy(): void;
+  /** Closes the window and empties its session, so nothing of a print outlives it. */
+  destroy(): void | Promise<void>;
 }
+
+/**
+ * Every print shares one in-memory session (never on disk), emptied after
+ * each print: a session per print would stay in memory until the app quits,
+ * as Electron keeps every session it made.
+ */
+export const PRINT_PARTITION = 'loftpoint-print';
 
 export interface PrintDeps {
   /** A hidden window that may show only `page`. */
@@ -47,12 +54,29 @@ export function printWindowOptions(partition: string) {
 }
 
 export function hiddenPrintWindow(page: string): PrintWindow {
-  // A session of its own (in memory, never on disk), locked to the one page.
-  const window = new BrowserWindow(printWindowOptions(`loftpoint-print-${randomUUID()}`));
+  // The print session (in memory, never on disk), locked to the one page.
+  const window = new BrowserWindow(printWindowOptions(PRINT_PARTITION));
+  const session = window.webContents.session;
   const url = pathToFileURL(page).href;
   lockWebContents(window.webContents, url);
-  lockSession(window.webContents.session, url);
-  return window;
+  lockSession(session, url);
+  return {
+    loadFile: (file) => window.loadFile(file),
+    webContents: window.webContents,
+    async destroy() {
+      window.destroy();
+      await Promise.all([session.clearStorageData(), session.clearCache()]).catch(() => undefined);
+    },
+  };
+}
+
+let queue: Promise<unknown> = Promise.resolve();
+
+/** One print at a time: they share the print session, which is locked to one page. */
+export function printInTurn<T>(work: () => Promise<T>): Promise<T> {
+  const next = queue.then(work, work);
+  queue = next.catch(() => undefined);
+  return next;
 }
 
 function withTimeout<T>(work: Promise<T>, ms: number): Promise<T> {
@@ -86,7 +110,7 @@ export async function printReportPdf(payload: unknown, deps: PrintDeps): Promise
   } catch (error) {
     return failure('io', `The report could not be printed to PDF: ${error instanceof Error ? error.message.split('\n')[0] : String(error)}`);
   } finally {
-    window?.destroy();
+    await window?.destroy();
     if (folder) await rm(folder, { recursive: true, force: true });
   }
 }

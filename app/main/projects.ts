@@ -21,6 +21,8 @@ export interface ProjectShellDeps {
   showError(title: string, message: string): void;
   /** Called with the new list whenever it changes (the menu is rebuilt). */
   recentChanged(list: readonly string[]): void;
+  /** Called with the file of each project opened or created (the window title follows). */
+  projectOpened?(file: string): void;
 }
 
 export interface ProjectShell {
@@ -38,6 +40,7 @@ export function projectShell(deps: ProjectShellDeps): ProjectShell {
     const list = withRecent(readRecent(deps.recentFile), file);
     writeRecent(deps.recentFile, list);
     deps.recentChanged(list);
+    deps.projectOpened?.(file);
   };
 
   const opened = (info: ProjectInfo) => {

@@ -4,12 +4,16 @@
  */
 import type { Session, WebContents } from 'electron';
 
-/** Pages the window may show: the built page itself (file://), or the dev server during development. */
+/** Our own scheme (loftpoint://app/): a URL origin that Node leaves "null", so compared by scheme and host. */
+const ownScheme = (url: URL) => url.protocol !== 'file:' && url.protocol !== 'http:' && url.protocol !== 'https:';
+
+/** Pages the window may show: the built page itself (loftpoint://app/, or a file), or the dev server during development. */
 export function isOwnPage(url: string, pageUrl: string): boolean {
   try {
     const target = new URL(url);
     const own = new URL(pageUrl);
     if (own.protocol === 'file:') return target.protocol === 'file:' && target.pathname === own.pathname;
+    if (ownScheme(own)) return target.protocol === own.protocol && target.host === own.host && target.pathname === own.pathname;
     return target.origin === own.origin;
   } catch {
     return false;
@@ -26,6 +30,7 @@ export function isAllowedRequest(url: string, pageUrl: string): boolean {
       const folder = own.pathname.slice(0, own.pathname.lastIndexOf('/') + 1);
       return target.protocol === 'file:' && target.pathname.startsWith(folder);
     }
+    if (ownScheme(own)) return target.protocol === own.protocol && target.host === own.host;
     return target.origin === own.origin;
   } catch {
     return false;

@@ -3,8 +3,9 @@
  * own built page only, and a preload that exposes the service API.
  */
 import { BrowserWindow } from 'electron';
-import { pathToFileURL } from 'node:url';
+import { PAGE_URL } from './page-protocol';
 import { lockSession, lockWebContents } from './security';
+import { DEFAULT_SIZE, MIN_SIZE, type WindowPlacement } from './window-state';
 
 export interface WindowFiles {
   /** out/renderer/index.html */
@@ -15,9 +16,9 @@ export interface WindowFiles {
   devUrl?: string;
 }
 
-/** The page URL the window shows, for navigation and sender checks. */
+/** The page URL the window shows, for navigation and sender checks: our own protocol, never file://. */
 export function pageUrl(files: WindowFiles): string {
-  return files.devUrl ?? pathToFileURL(files.page).href;
+  return files.devUrl ?? PAGE_URL;
 }
 
 export const SECURE_PREFERENCES = {
@@ -33,12 +34,11 @@ export const SECURE_PREFERENCES = {
   navigateOnDragDrop: false,
 } as const;
 
-export function createDesignerWindow(files: WindowFiles): BrowserWindow {
+export function createDesignerWindow(files: WindowFiles, placement: WindowPlacement | null = null): BrowserWindow {
   const window = new BrowserWindow({
-    width: 1440,
-    height: 900,
-    minWidth: 1000,
-    minHeight: 620,
+    ...(placement ? placement.bounds : DEFAULT_SIZE),
+    minWidth: MIN_SIZE.width,
+    minHeight: MIN_SIZE.height,
     show: false,
     title: 'Loftpoint',
     backgroundColor: '#eceee9',
@@ -47,7 +47,10 @@ export function createDesignerWindow(files: WindowFiles): BrowserWindow {
   const url = pageUrl(files);
   lockWebContents(window.webContents, url);
   lockSession(window.webContents.session, url);
-  window.once('ready-to-show', () => window.show());
-  void (files.devUrl ? window.loadURL(files.devUrl) : window.loadFile(files.page));
+  window.once('ready-to-show', () => {
+    if (placement?.maximized) window.maximize();
+    window.show();
+  });
+  void window.loadURL(url);
   return window;
 }

@@ -63,9 +63,24 @@ export interface PrintPdfRequest {
   html: string;
 }
 
+/** What the page tells the shell so its menu and title follow the page. */
+export interface WindowStateReport {
+  units: 'si' | 'us';
+  /** The concept in view has changes not saved as a version. */
+  dirty: boolean;
+}
+
+export function isWindowStateReport(value: unknown): value is WindowStateReport {
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) return false;
+  const { units, dirty, ...rest } = value as Record<string, unknown>;
+  return Object.keys(rest).length === 0 && (units === 'si' || units === 'us') && typeof dirty === 'boolean';
+}
+
 export interface DesktopApi extends RemoteService {
   onCommand(listener: (command: WindowCommand) => void): () => void;
   exportFile(request: ExportFileRequest): Promise<ServiceResult<ExportFileResponse>>;
   /** The PDF's bytes, printed by the shell with scripts off. */
   printPdf(request: PrintPdfRequest): Promise<ServiceResult<Uint8Array>>;
+  /** Tells the shell the page's units and unsaved state (menu radio, window title). */
+  reportWindowState(state: WindowStateReport): void;
 }

@@ -26,3 +26,5 @@ export const COMMAND_CHANNEL = 'loftpoint:command';
 export const EXPORT_CHANNEL = 'loftpoint:export';
 /** Channel on which the page asks main to print a report's HTML to PDF. */
 export const PRINT_CHANNEL = 'loftpoint:print-pdf';
+/** Channel on which the page tells main what the menu and title show: its units and unsaved changes. */
+export const WINDOW_STATE_CHANNEL = 'loftpoint:window-state';

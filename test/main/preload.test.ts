@@ -3,7 +3,7 @@
  */
 import { describe, expect, it, vi } from 'vitest';
 import { SERVICE_METHODS } from '../../app/service/contract';
-import { COMMAND_CHANNEL, EXPORT_CHANNEL, PRINT_CHANNEL, serviceChannel } from '../../app/shared/transport';
+import { COMMAND_CHANNEL, EXPORT_CHANNEL, PRINT_CHANNEL, serviceChannel, WINDOW_STATE_CHANNEL } from '../../app/shared/transport';
 
 const exposed: Record<string, unknown> = {};
 vi.mock('electron', () => ({
@@ -18,6 +18,7 @@ function fakeRenderer() {
   return {
     listeners,
     invoke: vi.fn(async (channel: string, payload: unknown) => ({ channel, payload })),
+    send: vi.fn(),
     on: vi.fn((channel: string, listener: (event: unknown, value: unknown) => void) => void listeners.set(channel, listener)),
     off: vi.fn((channel: string) => void listeners.delete(channel)),
   };
@@ -26,7 +27,7 @@ function fakeRenderer() {
 describe('preload', () => {
   it('exposes exactly the service methods, menu commands, export and printing as window.api', () => {
     expect(Object.keys(exposed)).toEqual(['api']);
-    expect(Object.keys(exposed.api as object).sort()).toEqual([...SERVICE_METHODS, 'exportFile', 'onCommand', 'printPdf'].sort());
+    expect(Object.keys(exposed.api as object).sort()).toEqual([...SERVICE_METHODS, 'exportFile', 'onCommand', 'printPdf', 'reportWindowState'].sort());
   });
 
   it('sends each method on its own channel with the request as given', async () => {
@@ -52,5 +53,14 @@ describe('preload', () => {
     expect(heard).toEqual(['undo', 'project-changed']);
     stop();
     expect(renderer.listeners.has(COMMAND_CHANNEL)).toBe(false);
+  });
+
+  it('tells main the page’s units and unsaved state, and nothing else', () => {
+    const renderer = fakeRenderer();
+    const api = desktopApi(renderer as never);
+    api.reportWindowState({ units: 'us', dirty: true });
+    api.reportWindowState({ units: 'metric', dirty: true } as never);
+    api.reportWindowState({ units: 'si', dirty: false, extra: 'x' } as never);
+    expect(renderer.send.mock.calls).toEqual([[WINDOW_STATE_CHANNEL, { units: 'us', dirty: true }]]);
   });
 });

@@ -3,23 +3,34 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it, vi } from 'vitest';
 
-const created: Array<{ options: Record<string, unknown>; contents: Record<string, unknown> }> = [];
+const created: Array<{ options: Record<string, unknown>; contents: Record<string, unknown>; window: { destroyed: boolean } }> = [];
 
 vi.mock('electron', () => {
   class BrowserWindow {
     webContents = {
       on: vi.fn(),
       setWindowOpenHandler: vi.fn(),
-      session: { setPermissionRequestHandler: vi.fn(), setPermissionCheckHandler: vi.fn(), webRequest: { onBeforeRequest: vi.fn() } },
+      session: {
+        setPermissionRequestHandler: vi.fn(),
+        setPermissionCheckHandler: vi.fn(),
+        webRequest: { onBeforeRequest: vi.fn() },
+        clearStorageData: vi.fn(async () => {}),
+        clearCache: vi.fn(async () => {}),
+      },
     };
+    destroyed = false;
     constructor(options: Record<string, unknown>) {
-      created.push({ options, contents: this.webContents });
+      created.push({ options, contents: this.webContents, window: this });
+    }
+    loadFile = vi.fn(async () => {});
+    destroy() {
+      this.destroyed = true;
     }
   }
   return { BrowserWindow };
 });
 
-const { hiddenPrintWindow, PDF_OPTIONS, printReportPdf } = await import('../../app/main/print');
+const { hiddenPrintWindow, PDF_OPTIONS, printInTurn, printReportPdf } = await import('../../app/main/print');
 const { PRINT_POLICY } = await import('../../app/shared/print-request');
 
 const REPORT = '<!DOCTYPE html>\n<html lang="en">\n<head>\n<meta charset="utf-8">\n<title>r</title>\n</head>\n<body><p>Preliminary sizing</p></body>\n</html>\n';
@@ -104,7 +115,7 @@ describe('printReportPdf', () => {
 });
 
 describe('hiddenPrintWindow', () => {
-  it('is never shown, runs no script, has no Node and a session of its own, and is locked to its page', () => {
+  it('is never shown, runs no script, has no Node, uses the one in-memory print session, and is locked to its page', () => {
     hiddenPrintWindow('/tmp/loftpoint-print-x/report.html');
     const { options, contents } = created[0];
     expect(options.show).toBe(false);
@@ -113,10 +124,11 @@ describe('hiddenPrintWindow', () => {
     expect(options.webPreferences).toMatchObject({ javascript: false, sandbox: true, contextIsolation: true, nodeIntegration: false, webSecurity: true, webviewTag: false });
     const partition = (options.webPreferences as { partition: string }).partition;
     // Without the "persist:" prefix a partition lives in memory only (Electron session docs).
-    expect(partition).toMatch(/^loftpoint-print-/);
+    expect(partition).toBe('loftpoint-print');
     expect(partition.startsWith('persist:')).toBe(false);
+    // Electron keeps every session it made until the app quits: one per print would pile up.
     hiddenPrintWindow('/tmp/loftpoint-print-y/report.html');
-    expect((created[1].options.webPreferences as { partition: string }).partition).not.toBe(partition);
+    expect((created[1].options.webPreferences as { partition: string }).partition).toBe(partition);
     const webContents = contents as { on: ReturnType<typeof vi.fn>; setWindowOpenHandler: ReturnType<typeof vi.fn>; session: { webRequest: { onBeforeRequest: ReturnType<typeof vi.fn> } } };
     expect(webContents.on.mock.calls.map(([event]) => event)).toContain('will-navigate');
     expect(webContents.setWindowOpenHandler).toHaveBeenCalled();
@@ -129,5 +141,34 @@ describe('hiddenPrintWindow', () => {
     expect(answer('file:///tmp/loftpoint-print-x/report.html')).toBe(false);
     expect(answer('file:///home/ada/.ssh/id_rsa')).toBe(true);
     expect(answer('https://example.com/')).toBe(true);
+  });
+});
+
+describe('print sessions', () => {
+  it('are emptied when the print window is released, so no print leaves anything behind', async () => {
+    const before = created.length;
+    const window = hiddenPrintWindow('/tmp/loftpoint-print-z/report.html');
+    const record = created[before];
+    const session = record.contents.session as { clearStorageData: ReturnType<typeof vi.fn>; clearCache: ReturnType<typeof vi.fn> };
+    await window.destroy();
+    expect(record.window.destroyed).toBe(true);
+    expect(session.clearStorageData).toHaveBeenCalledTimes(1);
+    expect(session.clearCache).toHaveBeenCalledTimes(1);
+  });
+
+  it('run one at a time, since they share the one print session', async () => {
+    const order: string[] = [];
+    let release!: () => void;
+    const first = printInTurn(async () => {
+      order.push('first starts');
+      await new Promise<void>((resolve) => (release = resolve));
+      order.push('first ends');
+    });
+    const second = printInTurn(async () => void order.push('second starts'));
+    await new Promise((resolve) => setTimeout(resolve, 10));
+    expect(order).toEqual(['first starts']);
+    release();
+    await Promise.all([first, second]);
+    expect(order).toEqual(['first starts', 'first ends', 'second starts']);
   });
 });

@@ -75,3 +75,27 @@ describe('lockSession', () => {
     expect(answers).toEqual([true, false]);
   });
 });
+
+describe('the page on its own protocol', () => {
+  const own = 'loftpoint://app/index.html';
+  it.each([
+    ['loftpoint://app/index.html', true],
+    ['loftpoint://app/index.html#history', true],
+    ['loftpoint://app/other.html', false],
+    ['loftpoint://evil/index.html', false],
+    ['file:///opt/loftpoint/out/renderer/index.html', false],
+    ['https://example.com/index.html', false],
+  ])('isOwnPage(%s) is %s', (url, allowed) => {
+    expect(isOwnPage(url, own)).toBe(allowed);
+  });
+
+  it.each([
+    ['loftpoint://app/assets/index-1.js', true],
+    ['loftpoint://app/favicon.svg', true],
+    ['loftpoint://evil/x.js', false],
+    ['file:///etc/passwd', false],
+    ['http://127.0.0.1:8080/', false],
+  ])('isAllowedRequest(%s) is %s', (url, allowed) => {
+    expect(isAllowedRequest(url, own)).toBe(allowed);
+  });
+});

@@ -40,11 +40,12 @@ describe('createDesignerWindow', () => {
       webviewTag: false,
       preload: '/opt/lp/out/preload/index.cjs',
     });
-    expect(created[0].loaded).toEqual(['/opt/lp/out/renderer/index.html']);
+    // The page comes through our own protocol, never file:// (Electron security checklist, item 18).
+    expect(created[0].loaded).toEqual(['loftpoint://app/index.html']);
   });
 
-  it('names the built page by its file URL', () => {
-    expect(pageUrl({ page: '/opt/lp/out/renderer/index.html', preload: '' })).toBe('file:///opt/lp/out/renderer/index.html');
+  it('names the built page by its own protocol', () => {
+    expect(pageUrl({ page: '/opt/lp/out/renderer/index.html', preload: '' })).toBe('loftpoint://app/index.html');
     expect(pageUrl({ page: '', preload: '', devUrl: 'http://localhost:5173/' })).toBe('http://localhost:5173/');
   });
 });

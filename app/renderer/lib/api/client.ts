@@ -4,7 +4,7 @@
  * the same typed methods and the same result values.
  */
 import { SERVICE_METHODS, type RemoteService, type ServiceMethod, type ServiceResult } from '../../../service/contract';
-import type { DesktopApi, ExportFileRequest, WindowCommand } from '../../../shared/desktop-api';
+import type { DesktopApi, ExportFileRequest, WindowCommand, WindowStateReport } from '../../../shared/desktop-api';
 import { EXPORT_KINDS } from '../../../shared/desktop-api';
 import { PRINT_PDF_PATH } from '../../../shared/print-request';
 import { base64ToBytes } from '../export/base64';
@@ -22,6 +22,8 @@ export interface Connection {
   exportFile(request: ExportFileRequest): Promise<string | null>;
   /** A design-review report's HTML printed to PDF by the shell; throws an Error with a message to show. */
   printPdf(html: string): Promise<Uint8Array>;
+  /** Tells the desktop shell the page's units and unsaved state; nothing to tell elsewhere. */
+  reportWindowState?(state: WindowStateReport): void;
 }
 
 declare global {
@@ -126,6 +128,7 @@ export function connect(): Connection {
       mode: 'desktop',
       service: desktop,
       onCommand: (listener) => desktop.onCommand(listener),
+      reportWindowState: (state) => desktop.reportWindowState?.(state),
       exportFile: async (request) => {
         const result = await desktop.exportFile(request);
         if (!result.ok) throw new Error(result.error.message);
@@ -142,7 +145,7 @@ export function connect(): Connection {
   const noPrinter = async (): Promise<Uint8Array> => {
     throw new Error('PDF needs the Loftpoint desktop window or `loftpoint serve`; export the HTML report and print it from the browser instead');
   };
-  const local = { onCommand: () => () => {}, exportFile: async (request: ExportFileRequest) => download(request), printPdf: noPrinter };
+  const local = { onCommand: () => () => {}, reportWindowState: () => {}, exportFile: async (request: ExportFileRequest) => download(request), printPdf: noPrinter };
   if (location.protocol !== 'http:') {
     return { mode: 'offline', service: null, problem: 'No project is open: this page was opened without its server.', ...local };
   }

@@ -372,6 +372,12 @@ export class ProjectState {
     this.#stashed = null;
     this.conceptName = null;
     this.saved = null;
+    // Nothing of the previous project may stay listed: its versions are not in the new file.
+    this.project = null;
+    this.concepts = [];
+    this.versions = [];
+    this.parent = null;
+    this.status = null;
     await this.start();
   }
 }
