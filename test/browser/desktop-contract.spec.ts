@@ -10,7 +10,7 @@
  */
 import { expect, test, type Browser, type Page } from '@playwright/test';
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import { register } from 'node:module';
 import { tmpdir } from 'node:os';
@@ -232,6 +232,20 @@ test.describe('desktop contract with a stand-in for Electron (NOT Electron): bui
     mkdirSync(join(root, 'test/browser/screenshots'), { recursive: true });
     await page.screenshot({ path: join(root, 'test/browser/screenshots/desktop-contract-boot.png') });
     expect(pageErrors).toEqual([]);
+  });
+
+  test('the built main process needs only Electron and the production dependencies a packaged app carries', async () => {
+    const pkg = JSON.parse(readFileSync(join(root, 'package.json'), 'utf8'));
+    const files = [join(built, 'main', 'index.js'), ...readdirSync(join(built, 'main', 'chunks')).map((name) => join(built, 'main', 'chunks', name))];
+    const bare = new Set<string>();
+    for (const file of files) {
+      for (const match of readFileSync(file, 'utf8').matchAll(/(?:^|\n)import[^;'"]*?from\s*"([^"./][^"]*)"|\bimport\("([^"./][^"]*)"\)/g)) {
+        const name = (match[1] ?? match[2]).split('/').slice(0, (match[1] ?? match[2]).startsWith('@') ? 2 : 1).join('/');
+        if (!name.startsWith('node:')) bare.add(name);
+      }
+    }
+    expect(bare.has('electron')).toBe(true);
+    for (const name of bare) if (name !== 'electron') expect(Object.keys(pkg.dependencies), `${name} is imported by the built main process`).toContain(name);
   });
 
   test('menus carry the usual accelerators, and the page leaves those keys to them', async () => {
