@@ -381,4 +381,11 @@ test.describe('desktop contract with a stand-in for Electron (NOT Electron): bui
     expect(missed).toEqual([]);
     expect(pageErrors).toEqual([]);
   });
+
+  test('closing the window keeps its place for the next start', async () => {
+    const designer = recorder.windows[0] as StandInWindow & { emit(event: string): void };
+    designer.emit('close');
+    const kept = JSON.parse(readFileSync(join(folder, 'data', 'window-state.json'), 'utf8'));
+    expect(kept).toEqual({ bounds: { x: 0, y: 0, width: 1440, height: 900 }, maximized: false });
+  });
 });
