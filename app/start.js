@@ -61,7 +61,7 @@ if (electron) {
     run(bin('vite'), ['build', '--config', 'app/renderer/vite.config.ts', '--logLevel', 'error'], { VITE_CONFIG_NATIVE_IGNORE_WARNING: 'true' });
   }
   console.error('No Electron binary here: starting browser mode.');
-  const child = spawn(bin('tsx'), [join(root, 'app', 'server', 'start.ts'), ...args], { cwd: root, stdio: 'inherit' });
+  const child = spawn(bin('tsx'), [join(root, 'app', 'cli', 'serve-start.ts'), ...args], { cwd: root, stdio: 'inherit' });
   const forward = (signal) => child.kill(signal);
   process.on('SIGINT', forward);
   process.on('SIGTERM', forward);

@@ -8,7 +8,7 @@
 import type { Command } from 'commander';
 import { evaluateDesign, type Evaluation, type UnitSystem } from '../../core';
 import { constraintDiagramSvg } from '../chart/svg';
-import type { SetExitCode } from './commands';
+import type { SetExitCode } from './io';
 import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
 import { evaluationCsv } from './evaluate-csv';

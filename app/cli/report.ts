@@ -15,7 +15,7 @@ import { ChromiumFailed, ChromiumUnavailable, findChromium, printPdf, svgToPng }
 import { STUDY_DIAGRAM_SIZE } from '../report/section-results';
 import { reportDiagramSvg } from '../report/section-studies';
 import { runStudies, type StudyOptions } from '../report/studies';
-import type { SetExitCode } from './commands';
+import type { SetExitCode } from './io';
 import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
 import { evaluationCsv } from './evaluate-csv';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';

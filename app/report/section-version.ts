@@ -6,7 +6,7 @@
  */
 import { formatMargin, formatQuantity, toDisplay, type UnitSystem } from '../../core';
 import { signedChange } from '../chart/change-text';
-import type { FieldChange, MarginChange, PointMove, VersionComparison } from '../service/contract';
+import type { FieldChange, MarginChange, PointMove, VersionComparison } from '../shared/contract';
 import { cell, facts, paragraph, section, table, text } from './html';
 import { shortTime, type ReportVersion } from './section-overview';
 

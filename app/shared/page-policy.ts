@@ -3,7 +3,7 @@
  * files (the shell's dialogs and the command line do that), and it cannot
  * close the project it is showing.
  */
-import type { ServiceError } from '../service/contract';
+import type { ServiceError } from './contract';
 import type { CallPolicy } from './dispatch';
 import { FILE_METHODS } from './requests';
 

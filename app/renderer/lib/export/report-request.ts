@@ -8,7 +8,7 @@
 import { evaluateDesign, parseConcept, type UnitSystem } from '../../../../core';
 import { buildReport } from '../../../report/report';
 import type { ReportVersion } from '../../../report/section-overview';
-import type { VersionComparison } from '../../../service/contract';
+import type { VersionComparison } from '../../../shared/contract';
 
 /** The command line's default step for the requirement costs (`--step 10%`). */
 export const REPORT_STEP = 0.1;

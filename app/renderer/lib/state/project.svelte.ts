@@ -12,7 +12,7 @@ import type {
   VersionComparison,
   VersionDetail,
   VersionSummary,
-} from '../../../service/contract';
+} from '../../../shared/contract';
 import type { Connection } from '../api/client';
 import type { ConceptDocument } from '../concept/edit';
 import type { Workspace } from './workspace.svelte';
