@@ -8,6 +8,7 @@ import { constraintDiagramSvg } from '../../../chart';
 import { evaluationCsv } from '../../../chart/boundaries-csv';
 import type { ExportFileRequest, WindowCommand } from '../../../shared/desktop-api';
 import type { Connection } from '../api/client';
+import type { DiagramView } from '../diagram/view.svelte';
 import type { Preferences } from '../state/preferences.svelte';
 import type { ProjectState } from '../state/project.svelte';
 import type { Workspace } from '../state/workspace.svelte';
@@ -60,6 +61,8 @@ export interface ExporterParts {
   workspace: Workspace;
   project: ProjectState;
   preferences: Preferences;
+  /** The diagram's zoom and pan, so the exported diagram shows what the window shows. */
+  view?: DiagramView;
 }
 
 export class Exporter {
@@ -106,7 +109,14 @@ export class Exporter {
     const { evaluation } = this.#resolved();
     const older = project.comparison;
     const overlays = older?.olderEvaluation ? [{ name: `Version ${older.older.number}`, evaluation: older.olderEvaluation }] : [];
-    return constraintDiagramSvg(evaluation, { system: preferences.units, title: String(workspace.document.name ?? ''), overlays });
+    // The window's view of the diagram: units, the loading axis (P/W or W/P), zoom and pan, and the older version drawn behind.
+    return constraintDiagramSvg(evaluation, {
+      system: preferences.units,
+      title: String(workspace.document.name ?? ''),
+      overlays,
+      powerLoading: preferences.powerLoading,
+      view: this.#parts.view?.current ?? null,
+    });
   }
 
   async #request(what: ExportWhat): Promise<ExportFileRequest> {
