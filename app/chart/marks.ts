@@ -116,11 +116,13 @@ function axisMarks({ scales, fontSize }: Geometry): Mark[] {
     part('line', { x1: px(plot.left - 5), y1: px(scales.y(t)), x2: px(plot.left), y2: px(scales.y(t)) }),
     part('text', { x: px(plot.left - 8), y: px(scales.y(t) + 4), 'text-anchor': 'end', ...words }, scales.formatY(t)),
   ]);
+  const ticks = { stroke: ink, 'stroke-width': 1, 'font-variant-numeric': 'tabular-nums' };
   const title = { 'text-anchor': 'middle', 'font-size': fontSize + 1, 'font-weight': 600, fill: CHART_INKS.text };
   const yMid = plot.top + plot.height / 2;
   return [
     { tag: 'rect', role: 'frame', attrs: { x: px(plot.left), y: px(plot.top), width: px(plot.width), height: px(plot.height), fill: 'none', stroke: CHART_INKS.plotFrame, 'stroke-width': 1 } },
-    { tag: 'g', role: 'ticks', attrs: { stroke: ink, 'stroke-width': 1, 'font-variant-numeric': 'tabular-nums' }, children: [...x, ...y] },
+    { tag: 'g', role: 'ticks', attrs: { 'data-axis': 'x', ...ticks }, children: x },
+    { tag: 'g', role: 'ticks', attrs: { 'data-axis': 'y', ...ticks }, children: y },
     { tag: 'text', role: 'axis-title', attrs: { 'data-axis': 'x', x: px(plot.left + plot.width / 2), y: px(plot.bottom + 36), ...title }, text: scales.xTitle },
     {
       tag: 'text',

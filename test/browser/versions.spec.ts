@@ -54,7 +54,7 @@ test('save a version with a note, reload, reopen the older version and compare t
   await window.byTest(`version-${newest}`).getByTestId('version-select').check();
   await window.byTest('compare-selected').click();
   await expect(window.byTest('viewing-banner')).toContainText('Comparing');
-  await expect(window.byTest('overlay').locator('path')).not.toHaveCount(0);
+  await expect(window.byTest('diagram').locator('[data-role="overlay"]')).not.toHaveCount(0);
   const changes = window.byTest('changes');
   await expect(changes).toContainText(`Version ${newestBefore} → version ${newest}`);
   await expect(changes.getByTestId('change-requirement')).toContainText('cruise.speed');
