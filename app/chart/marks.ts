@@ -11,7 +11,7 @@ import type { LabelPlacement } from './labels';
 import { CHART_INKS } from './palette';
 import type { CurveSeries, LimitSeries } from './series-types';
 
-export type MarkTag = 'g' | 'path' | 'line' | 'circle' | 'rect' | 'text' | 'tspan' | 'title';
+export type MarkTag = 'g' | 'path' | 'line' | 'circle' | 'rect' | 'text' | 'tspan' | 'title' | 'defs' | 'clipPath';
 
 /** What a mark stands for; written as data-role, so tests and readers can count the diagram's parts. */
 export type MarkRole =
@@ -30,6 +30,9 @@ export type MarkRole =
   | 'label'
   | 'note'
   | 'leader'
+  | 'band'
+  | 'contour'
+  | 'contour-label'
   | 'part';
 
 export interface Mark {

@@ -6,8 +6,8 @@
 import type { Evaluation } from '../../core/evaluation';
 import { SIZING_CAUTION } from './caution';
 import { chartData, type ChartData, type ChartDataOptions } from './data';
-import { diagramGeometry } from './geometry';
-import type { Labels, PointNote } from './labels';
+import { diagramGeometry, type Geometry } from './geometry';
+import type { PointNote } from './labels';
 import { legendRows, type LegendRow } from './legend';
 import { markSvg, marksSvg } from './markup';
 import { diagramMarks } from './marks';
@@ -29,14 +29,14 @@ export interface SvgOptions extends ChartDataOptions {
   layers?: SvgLayers;
 }
 
-/** Markup drawn into the diagram at fixed depths, given the diagram's data (as plotted), scales and placed labels. */
+/** Markup drawn into the diagram at fixed depths, given its geometry (data as plotted, scales, placed labels). */
 export interface SvgLayers {
   /** Inside the plot's clip, above the feasible region and below the boundaries. */
-  behind?: (data: ChartData, scales: ChartScales) => string;
+  behind?: (geometry: Geometry) => string;
   /** Inside the plot's clip, above the boundaries. */
-  above?: (data: ChartData, scales: ChartScales) => string;
+  above?: (geometry: Geometry) => string;
   /** Outside the clip, after every label; may steer clear of the labels already placed. */
-  top?: (data: ChartData, scales: ChartScales, labels: Labels) => string;
+  top?: (geometry: Geometry) => string;
   /** Rows added at the end of the legend. */
   legend?: (data: ChartData) => LegendRow[];
   /** Replaces the line under the title. */
@@ -60,7 +60,7 @@ export function constraintDiagramSvg(evaluation: Evaluation, options: SvgOptions
     { width, height, margin: { top: 74, right: LEGEND_WIDTH + 24, bottom: 96, left: 82 } },
     { view: options.view ?? null, powerLoading: options.powerLoading ?? false, fontSize: 12, notes: pointNotes },
   );
-  const { data, scales, labels } = geometry;
+  const { data, scales } = geometry;
   const marks = diagramMarks(geometry);
   const title = data.title.trim() || 'Untitled concept';
   const layers = options.layers ?? {};
@@ -76,17 +76,17 @@ export function constraintDiagramSvg(evaluation: Evaluation, options: SvgOptions
     marksSvg(marks.grid),
     `<g clip-path="url(#plot-area)">`,
     marksSvg(marks.behind),
-    layers.behind?.(data, scales) ?? '',
+    layers.behind?.(geometry) ?? '',
     marksSvg(marks.boundaries),
-    layers.above?.(data, scales) ?? '',
+    layers.above?.(geometry) ?? '',
     marksSvg(marks.markers),
     `</g>`,
     marksSvg(marks.axes),
     nothingFeasible(data, scales),
     marksSvg(marks.labels),
-    layers.top?.(data, scales, labels) ?? '',
+    layers.top?.(geometry) ?? '',
     point ? `<g transform="translate(${point.x} ${point.y})">${markSvg(point.mark)}</g>` : '',
-    legend([...legendRows(data), ...(layers.legend?.(data) ?? [])], scales, width),
+    legend([...legendRows(data, geometry.powerLoading), ...(layers.legend?.(data) ?? [])], scales, width),
     `<text x="${width / 2}" y="${height - 16}" text-anchor="middle" font-size="12" font-weight="600" fill="${CHART_INKS.caution}">${escapeXml(SIZING_CAUTION)}</text>`,
     `</svg>`,
   ];
