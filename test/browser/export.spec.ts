@@ -196,8 +196,10 @@ function census(root: ParentNode): MarkCensus {
   };
 }
 
-test('the exported diagram draws what the window draws: markers, boundaries, labels, the W/P view', async ({ window, page }) => {
+test('the exported diagram draws what the window draws: markers, boundaries, labels, bands, the W/P view', async ({ window, page }) => {
   await window.selectConcept('LP-2 two-seat trainer');
+  await window.byTest('toggle-bands').click();
+  await expect(window.byTest('bands').locator('path.band')).not.toHaveCount(0);
   for (const view of ['pw', 'wp'] as const) {
     await window.byTest(`axis-${view}`).click();
     await expect(window.byTest('y-title')).toContainText(view === 'wp' ? 'Power loading W/P' : 'Power-to-weight P/W');
@@ -225,9 +227,11 @@ test('the exported diagram draws what the window draws: markers, boundaries, lab
     expect(written.designPointRings).toBe(shown.designPointRings);
     expect(shown.counts.optimum).toBe(1);
     expect(shown.counts['design-point']).toBe(1);
+    expect(shown.counts.band).toBeGreaterThan(3);
     mkdirSync(SCREENSHOTS, { recursive: true });
     writeFileSync(join(SCREENSHOTS, `export-diagram-${view}.svg`), exported.bytes);
     await window.shot(`diagram-${view}`);
   }
   await window.byTest('axis-pw').click();
+  await window.byTest('toggle-bands').click();
 });
