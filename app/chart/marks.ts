@@ -70,7 +70,7 @@ function diamond(x: number, y: number, r: number): string {
 }
 
 /** The optimum: a filled diamond with a white edge. */
-export function optimumMark(x: number, y: number, title?: string): Mark {
+function optimumMark(x: number, y: number, title?: string): Mark {
   return {
     tag: 'path',
     role: 'optimum',

@@ -40,7 +40,7 @@ function marginRows(margins: readonly MarginChange[]): string[][] {
     });
 }
 
-export function changesHtml(comparison: VersionComparison, system: UnitSystem): string {
+function changesHtml(comparison: VersionComparison, system: UnitSystem): string {
   const parts: string[] = [];
   const { added, removed, changed } = comparison.requirements;
   const requirementRows = [

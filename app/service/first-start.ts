@@ -11,7 +11,7 @@ import type { ServiceHandlers } from './service';
 import { invokeService } from './invoke';
 
 export const PROJECT_EXTENSION = '.loftpoint';
-export const FIRST_PROJECT_NAME = 'Demo project';
+const FIRST_PROJECT_NAME = 'Demo project';
 
 /** The user's data folder: $LOFTPOINT_DATA_DIR, else the platform's usual place for application data. */
 export function userDataFolder(env: NodeJS.ProcessEnv = process.env, platform: NodeJS.Platform = process.platform, home = homedir()): string {

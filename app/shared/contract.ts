@@ -412,17 +412,6 @@ type AssertNever<T extends never> = T;
 /** Compile-time check that SERVICE_METHODS lists every method of ServiceMap. */
 export type AllMethodsListed = AssertNever<Exclude<ServiceMethod, (typeof SERVICE_METHODS)[number]>>;
 
-/** Methods that write to the project file (refused with 'read-only' on a read-only file). */
-export const WRITING_METHODS: readonly ServiceMethod[] = [
-  'updateProject',
-  'renameConcept',
-  'saveVersion',
-  'startConcept',
-  'tagVersion',
-  'untagVersion',
-  'importVersion',
-];
-
 /** True when `name` is a method of the service (for routing untrusted input). */
 export function isServiceMethod(name: unknown): name is ServiceMethod {
   return typeof name === 'string' && (SERVICE_METHODS as readonly string[]).includes(name);

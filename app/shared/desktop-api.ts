@@ -7,7 +7,7 @@
 import type { RemoteService, ServiceResult } from './contract';
 
 /** Menu items the page acts on (the shell handles New, Open and Quit itself). */
-export const WINDOW_COMMANDS = [
+const WINDOW_COMMANDS = [
   'save-version',
   'undo',
   'redo',

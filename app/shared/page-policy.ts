@@ -9,7 +9,7 @@ import { FILE_METHODS } from './requests';
 
 const PAGE_REFUSED: readonly string[] = [...FILE_METHODS, 'closeProject'];
 
-export function pageRefusal(method: string, how: string): ServiceError {
+function pageRefusal(method: string, how: string): ServiceError {
   return { code: 'bad-request', message: `${method} is not available from the window; ${how}`, field: 'method' };
 }
 

@@ -7,7 +7,7 @@ import { diagramGeometry as chartGeometry, type Geometry } from '../../../chart/
 import type { Domains } from '../../../chart/power-loading';
 import type { ChartData } from '../../../chart';
 
-export { defaultDomains, inverted, powerLoadingFactor, powerLoadingUnit, type Domains } from '../../../chart/power-loading';
+export { defaultDomains, powerLoadingFactor, powerLoadingUnit, type Domains } from '../../../chart/power-loading';
 export type { Geometry } from '../../../chart/geometry';
 
 const DIAGRAM_MARGIN = { top: 14, right: 18, bottom: 48, left: 70 };

@@ -45,7 +45,7 @@ function asDocument(value: unknown): ConceptDocument {
   return value && typeof value === 'object' && !Array.isArray(value) ? (value as ConceptDocument) : {};
 }
 
-export function errorText(error: ServiceError): string {
+function errorText(error: ServiceError): string {
   const first = error.issues?.[0];
   return first && !error.message.includes(first.message) ? `${error.message} (${first.path}: ${first.message})` : error.message;
 }
