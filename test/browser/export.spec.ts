@@ -13,22 +13,12 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { csvParse } from 'd3';
 import { PRELIMINARY_CAUTION } from '../../core/caution';
+import { expectSameDrawing, exportOne, fileCensus, windowCensus } from './diagram-census';
 import { expect, test, type DesignerWindow } from './window';
 
 const SCREENSHOTS = fileURLToPath(new URL('./screenshots', import.meta.url));
 const PNG_SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
 const words = (text: string) => text.replace(/\s+/g, ' ').trim();
-
-async function exportOne(window: DesignerWindow, testId: string): Promise<{ name: string; bytes: Buffer }> {
-  await expect(window.byTest('export')).toBeEnabled({ timeout: 60_000 });
-  await window.byTest('export').click();
-  const arriving = window.page.waitForEvent('download', { timeout: 90_000 });
-  await window.byTest(testId).click();
-  const download = await arriving;
-  const failure = await download.failure();
-  expect(failure, `download of ${testId}`).toBeNull();
-  return { name: download.suggestedFilename(), bytes: readFileSync((await download.path())!) };
-}
 
 /** The optimum as the Design point panel shows it. */
 async function optimumShown(window: DesignerWindow): Promise<{ wingLoading: string; loading: string }> {
@@ -168,34 +158,6 @@ test('an edited draft is reported as an unsaved draft, in the window’s units',
   await window.expectNoNaN();
 });
 
-/** The diagram's marks by role (data-role), with the ids of the boundaries and labels and the axis titles: what must match. */
-interface MarkCensus {
-  counts: Record<string, number>;
-  curves: string[];
-  limits: string[];
-  labels: string[];
-  titles: string[];
-  designPointRings: number;
-}
-
-function census(root: ParentNode): MarkCensus {
-  const all = [...root.querySelectorAll('[data-role]')];
-  const counts: Record<string, number> = {};
-  for (const mark of all) {
-    const role = mark.getAttribute('data-role')!;
-    counts[role] = (counts[role] ?? 0) + 1;
-  }
-  const ids = (role: string) => [...root.querySelectorAll(`[data-role="${role}"]`)].map((mark) => mark.getAttribute('data-id') ?? '').sort();
-  return {
-    counts,
-    curves: ids('curve'),
-    limits: ids('limit'),
-    labels: ids('label'),
-    titles: [...root.querySelectorAll('[data-role="axis-title"]')].map((mark) => mark.textContent ?? ''),
-    designPointRings: root.querySelectorAll('[data-role="design-point"] circle').length,
-  };
-}
-
 test('the exported diagram draws what the window draws: markers, boundaries, labels, bands, the W/P view', async ({ window, page }) => {
   await window.selectConcept('LP-2 two-seat trainer');
   await window.byTest('toggle-bands').click();
@@ -203,28 +165,10 @@ test('the exported diagram draws what the window draws: markers, boundaries, lab
   for (const view of ['pw', 'wp'] as const) {
     await window.byTest(`axis-${view}`).click();
     await expect(window.byTest('y-title')).toContainText(view === 'wp' ? 'Power loading W/P' : 'Power-to-weight P/W');
-    const shown = await window.byTest('diagram').locator('svg').first().evaluate(census);
+    const shown = await windowCensus(window);
     const exported = await exportOne(window, 'export-svg');
-    // The written file, parsed by the browser's XML parser and counted the same way.
-    await page.evaluate((text) => {
-      const parsed = new DOMParser().parseFromString(text, 'image/svg+xml');
-      const holder = document.createElement('div');
-      holder.id = 'exported-copy';
-      holder.hidden = true;
-      holder.append(document.adoptNode(parsed.documentElement));
-      document.body.append(holder);
-    }, exported.bytes.toString('utf8'));
-    const written = await page.locator('#exported-copy').evaluate(census);
-    await page.evaluate(() => document.getElementById('exported-copy')?.remove());
-    // The window draws no notes beside its points (its panels say the same) and the export has no pointer; everything else is counted alike.
-    const { note: _note, leader: _leader, ...writtenCounts } = written.counts;
-    expect(written.counts.note).toBe(2);
-    expect(writtenCounts).toEqual(shown.counts);
-    expect(written.curves).toEqual(shown.curves);
-    expect(written.limits).toEqual(shown.limits);
-    expect(written.labels).toEqual(shown.labels);
-    expect(written.titles).toEqual(shown.titles);
-    expect(written.designPointRings).toBe(shown.designPointRings);
+    const written = await fileCensus(window, exported.bytes.toString('utf8'));
+    expectSameDrawing(written, shown);
     expect(shown.counts.optimum).toBe(1);
     expect(shown.counts['design-point']).toBe(1);
     expect(shown.counts.band).toBeGreaterThan(3);

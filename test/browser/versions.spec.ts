@@ -1,3 +1,4 @@
+import { expectSameDrawing, exportOne, fileCensus, windowCensus } from './diagram-census';
 import { expect, test } from './window';
 
 const NOTE = 'Faster cruise <b>asked</b> by sales & "marketing"';
@@ -60,6 +61,11 @@ test('save a version with a note, reload, reopen the older version and compare t
   await expect(changes.getByTestId('change-requirement')).toContainText('cruise.speed');
   await expect(changes.getByTestId('change-requirement')).toContainText('250 kt');
   await window.shot('compare');
+  // The exported diagram draws the older version behind as the window does: its boundaries and its optimum's open diamond.
+  const shown = await windowCensus(window);
+  expect(shown.counts['overlay-optimum']).toBe(1);
+  const exported = await exportOne(window, 'export-svg');
+  expectSameDrawing(await fileCensus(window, exported.bytes.toString('utf8')), shown);
 
   // Continue from the older version: it becomes the draft, editable again.
   await window.byTest('continue-from-version').click();
