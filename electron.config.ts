@@ -12,7 +12,7 @@ export default defineConfig({
     build: {
       outDir: 'out/main',
       rolldownOptions: {
-        input: { index: resolve('app/main/index.ts'), server: resolve('app/server/start.ts') },
+        input: { index: resolve('app/main/index.ts'), server: resolve('app/cli/serve-start.ts') },
         // The native SQLite module is loaded at run time, never bundled; the build tools that
         // browser mode uses to build a missing page from source are not part of a built app.
         external: ['better-sqlite3', 'vite', /^@sveltejs\//, /renderer\/vite\.config$/],

@@ -186,5 +186,5 @@ export function startBrowserMode(deps, args, start = spawn) {
     const status = deps.run(bin(deps.root, 'vite'), ['build', '--config', 'app/renderer/vite.config.ts', '--logLevel', 'error'], { env: { ...deps.env, VITE_CONFIG_NATIVE_IGNORE_WARNING: 'true' } });
     if (status !== 0) process.exit(status);
   }
-  return start(bin(deps.root, 'tsx'), [join(deps.root, 'app', 'server', 'start.ts'), ...args], { cwd: deps.root, stdio: 'inherit', env: deps.env });
+  return start(bin(deps.root, 'tsx'), [join(deps.root, 'app', 'cli', 'serve-start.ts'), ...args], { cwd: deps.root, stdio: 'inherit', env: deps.env });
 }

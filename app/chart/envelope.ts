@@ -3,7 +3,7 @@
  * every curve requirement (METHODS.md section 7, E(w) = max_i y_i(w)).
  */
 import { isDefinedPoint, valueAt, type Samples } from './clip';
-import type { CurveSeries } from './data';
+import type { CurveSeries } from './series-types';
 
 /** max over curves of the required loading at each sample of the first curve's grid; null where any curve is. */
 export function upperEnvelope(curves: readonly CurveSeries[], range: readonly [number, number]): Array<[number, number | null]> {

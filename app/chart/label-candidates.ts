@@ -5,7 +5,7 @@
  * that breaks ties in favour of the usual spot.
  */
 import type { XY } from './clip';
-import type { LabelPlacement, PointNote } from './labels';
+import type { LabelPlacement, PointNote } from './placement';
 import type { ChartScales, PlotArea } from './scales';
 import { GAP, PAD, textWidth, type Box } from './boxes';
 

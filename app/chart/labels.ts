@@ -4,7 +4,7 @@
  * inside the plot and clear of one another and, where possible, of the lines.
  * Pixel space; text width is estimated, so it works without a DOM.
  */
-import type { ChartData, MarkedPoint } from './data';
+import type { ChartData } from './series-types';
 import type { ChartScales, PlotArea } from './scales';
 import { clipToBand, type XY } from './clip';
 import { boxesOverlap, boxInside, segmentHitsBox, type Box } from './boxes';
@@ -13,29 +13,8 @@ import { shorten } from './text';
 
 export { boxesOverlap, boxInside, segmentHitsBox, textWidth, type Box } from './boxes';
 
-export interface LabelPlacement {
-  id: string;
-  /** One or more lines of text, drawn top to bottom. */
-  lines: string[];
-  colour: string;
-  /** Anchor of the first line's baseline, px. */
-  x: number;
-  y: number;
-  anchor: 'start' | 'middle' | 'end';
-  /** 0, or -90 for a label that reads upwards along a wing-loading limit. */
-  rotate: 0 | -90;
-  /** The space the text takes, px, for hit tests and collision checks. */
-  box: Box;
-  /** False when the boundary has no visible part on the plot; the legend still names it. */
-  onPlot: boolean;
-}
-
-export interface PointNote {
-  id: string;
-  lines: string[];
-  colour: string;
-  at: MarkedPoint;
-}
+import type { LabelPlacement, PointNote } from './placement';
+export type { LabelPlacement, PointNote } from './placement';
 
 export interface LabelOptions {
   fontSize?: number;

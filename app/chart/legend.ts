@@ -23,7 +23,8 @@ export interface LegendRow {
 /** Characters per legend detail line. */
 export const LEGEND_LINE_CHARS = 36;
 
-export function legendRows(data: ChartData): LegendRow[] {
+/** The key of `data` as plotted; `powerLoading` when the vertical axis is W/P (the optimum is then the highest W/P). */
+export function legendRows(data: ChartData, powerLoading = false): LegendRow[] {
   const [lo, hi] = data.wingLoadingRange;
   const rows: LegendRow[] = data.boundaries.map((series) => {
     const notes = [series.kindTitle];
@@ -44,7 +45,7 @@ export function legendRows(data: ChartData): LegendRow[] {
   const plain = { dash: '', bold: false };
   rows.push({ id: 'feasible', swatch: 'area', colour: CHART_INKS.feasibleFill, ...plain, title: 'Feasible region', details: ['meets every requirement'] });
   if (data.optimum) {
-    rows.push({ id: 'optimum', swatch: 'diamond', colour: CHART_INKS.optimum, ...plain, title: 'Optimum', details: [`least ${data.axis === 'thrustToWeight' ? 'thrust' : 'power'}-to-weight that meets all`] });
+    rows.push({ id: 'optimum', swatch: 'diamond', colour: CHART_INKS.optimum, ...plain, title: 'Optimum', details: [powerLoading ? 'highest power loading that meets all' : `least ${data.axis === 'thrustToWeight' ? 'thrust' : 'power'}-to-weight that meets all`] });
   }
   if (data.designPoint) {
     rows.push({

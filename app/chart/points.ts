@@ -5,7 +5,7 @@
 import type { Evaluation } from '../../core/evaluation';
 import type { LoadingAxis } from '../../core/model';
 import { toDisplay, type UnitSystem } from '../../core/units/display';
-import type { ChartData } from './data';
+import type { ChartData } from './series-types';
 
 function axisValue(point: { powerToWeight?: number; thrustToWeight?: number }, axis: LoadingAxis): number | undefined {
   const value = point[axis];

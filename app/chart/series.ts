@@ -6,7 +6,7 @@
 import type { BoundaryJson, Evaluation } from '../../core/evaluation';
 import type { LoadingAxis } from '../../core/model';
 import { toDisplay, type UnitSystem } from '../../core/units/display';
-import type { BoundarySeries, CurveSeries, LimitSeries, OverlaySeries, SeriesCommon } from './data';
+import type { BoundarySeries, CurveSeries, LimitSeries, OverlaySeries, SeriesCommon } from './series-types';
 import { optimumPoint } from './points';
 import { kindColour, kindDash, kindTitle } from './palette';
 

@@ -3,14 +3,12 @@
  * input throws InputError; main turns it into one line and exit status 2.
  */
 import type { Command } from 'commander';
-import type { CliIO } from './io';
+import type { CliIO, SetExitCode } from './io';
 import { registerDemo } from './demo';
 import { registerEvaluate } from './evaluate';
 import { registerProject } from './project';
 import { registerReport } from './report';
 import { registerServe } from './serve';
-
-export type SetExitCode = (code: number) => void;
 
 export function registerCommands(program: Command, io: CliIO, setExitCode: SetExitCode): void {
   registerEvaluate(program, io, setExitCode);

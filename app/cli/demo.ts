@@ -9,7 +9,7 @@ import type { Command } from 'commander';
 import { DEMO_CONCEPTS, type DemoConcept } from '../../core';
 import { SIZING_CAUTION } from '../chart/caution';
 import { wrapText } from '../chart/text';
-import type { SetExitCode } from './commands';
+import type { SetExitCode } from './io';
 import { EXIT_OK, InputError } from './errors';
 import type { CliIO } from './io';
 

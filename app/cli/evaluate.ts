@@ -8,7 +8,7 @@
 import type { Command } from 'commander';
 import { evaluateDesign, type Evaluation, type UnitSystem } from '../../core';
 import { constraintDiagramSvg } from '../chart/svg';
-import type { SetExitCode } from './commands';
+import type { SetExitCode } from './io';
 import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
 import { evaluationCsv } from './evaluate-csv';
@@ -50,7 +50,7 @@ export function registerEvaluate(program: Command, io: CliIO, setExitCode: SetEx
 }
 
 /** Everything `evaluate` prints, built in full; throws InputError on bad input. */
-export async function runEvaluate(file: string, options: EvaluateOptions): Promise<string> {
+async function runEvaluate(file: string, options: EvaluateOptions): Promise<string> {
   const modes = (['json', 'csv', 'svg'] as const).filter((mode) => options[mode] !== undefined && options[mode] !== false);
   if (modes.length > 1) {
     throw new InputError(`choose one output: ${modes.map((mode) => `--${mode}`).join(' and ')} cannot be used together`, file, `--${modes[1]}`);

@@ -4,6 +4,9 @@ export interface CliIO {
   err(text: string): void;
 }
 
+/** How a verb sets the process's exit status. */
+export type SetExitCode = (code: number) => void;
+
 export const processIO: CliIO = {
   out: (text) => void process.stdout.write(text),
   err: (text) => void process.stderr.write(text),

@@ -19,7 +19,7 @@ import {
 } from '../service';
 import { EXIT_FAILURE, InputError } from './errors';
 import type { CliIO } from './io';
-import type { SetExitCode } from './commands';
+import type { SetExitCode } from './io';
 
 /** Errors that are not the user's input: reported in one line with exit status 1. */
 const NOT_INPUT = new Set(['busy', 'io', 'internal']);

@@ -15,7 +15,7 @@ import { ChromiumFailed, ChromiumUnavailable, findChromium, printPdf, svgToPng }
 import { STUDY_DIAGRAM_SIZE } from '../report/section-results';
 import { reportDiagramSvg } from '../report/section-studies';
 import { runStudies, type StudyOptions } from '../report/studies';
-import type { SetExitCode } from './commands';
+import type { SetExitCode } from './io';
 import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
 import { evaluationCsv } from './evaluate-csv';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
@@ -96,7 +96,7 @@ function unitSystem(file: string, units: string | undefined): UnitSystem {
 }
 
 /** "10%", "12.5 %" or a fraction "0.1"; strictly between 0 and 100 %. */
-export function parseStep(file: string, step: string | undefined): number {
+function parseStep(file: string, step: string | undefined): number {
   const text = (step ?? '10%').trim();
   const percent = /^(\d+(?:\.\d+)?)\s*%$/.exec(text);
   const fraction = percent ? Number(percent[1]) / 100 : /^\d*\.\d+$|^0$/.test(text) ? Number(text) : NaN;
@@ -128,7 +128,7 @@ async function versionInfo(file: string, number: number) {
 }
 
 /** Build and write the output; returns what to print. Throws InputError on bad input. */
-export async function runReport(file: string, options: ReportOptions): Promise<string> {
+async function runReport(file: string, options: ReportOptions): Promise<string> {
   const output = outputKind(file, options.out);
   const extension = extname(output.target).toLowerCase();
   const system = unitSystem(file, options.units);

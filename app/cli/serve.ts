@@ -6,7 +6,7 @@
 import type { Command } from 'commander';
 import { PRELIMINARY_CAUTION } from '../service/contract';
 import { LaunchError, launchBrowserMode, type BrowserMode } from '../server/launch';
-import type { SetExitCode } from './commands';
+import type { SetExitCode } from './io';
 import { EXIT_OK, InputError } from './errors';
 import type { CliIO } from './io';
 
@@ -33,7 +33,7 @@ export async function runServe(options: ServeOptions, io: CliIO, until: Promise<
   const port = parsePort(options.port);
   let mode: BrowserMode;
   try {
-    mode = await launchBrowserMode({ port, project: options.project, rendererDir: options.rendererDir, note: (line) => io.err(`${line}\n`) });
+    mode = await launchBrowserMode({ port, project: options.project, rendererDir: options.rendererDir });
   } catch (error) {
     if (error instanceof LaunchError) throw new InputError(error.message, undefined, error.field);
     throw error;

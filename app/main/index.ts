@@ -12,7 +12,7 @@ import { isWindowStateReport, type WindowCommand } from '../shared/desktop-api';
 import { createDispatch } from '../shared/dispatch';
 import { pagePolicy } from '../shared/page-policy';
 import { COMMAND_CHANNEL, WINDOW_STATE_CHANNEL } from '../shared/transport';
-import { PROJECT_EXTENSION, userDataFolder } from '../server/first-start';
+import { PROJECT_EXTENSION, userDataFolder } from '../service/first-start';
 import { projectArgument } from './arguments';
 import { exportFile } from './exports';
 import { ipcHandlers, registerIpc, senderCheck } from './ipc';

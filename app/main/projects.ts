@@ -8,7 +8,7 @@ import { basename, extname } from 'node:path';
 import { invokeService, type ServiceHandlers } from '../service';
 import type { ProjectInfo } from '../service/contract';
 import type { WindowCommand } from '../shared/desktop-api';
-import { openOrCreateProject } from '../server/first-start';
+import { openOrCreateProject } from '../service/first-start';
 import { readRecent, withRecent, writeRecent } from './recent';
 
 export interface ProjectShellDeps {

@@ -8,7 +8,7 @@
  * (a value that is not defined reads "—").
  */
 import type { ConceptUncertainty, Design, Evaluation, UnitSystem, WarningJson } from '../../core';
-import type { VersionComparison } from '../service/contract';
+import type { VersionComparison } from '../shared/contract';
 import { reportContext } from './context';
 import { paragraph, section, text } from './html';
 import { assumptionsSection } from './section-assumptions';

@@ -28,7 +28,7 @@ export function reportDiagramSvg(input: { design: Design; evaluation: Evaluation
   return studyDiagram(reportContext(input.design, input.evaluation, input.system), input.studies);
 }
 
-export function studyDiagram(ctx: ReportContext, studies: ReportStudies): string {
+function studyDiagram(ctx: ReportContext, studies: ReportStudies): string {
   return studyDiagramSvg(ctx.evaluation, {
     title: ctx.design.name,
     system: ctx.system,

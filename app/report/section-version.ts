@@ -6,7 +6,7 @@
  */
 import { formatMargin, formatQuantity, toDisplay, type UnitSystem } from '../../core';
 import { signedChange } from '../chart/change-text';
-import type { FieldChange, MarginChange, PointMove, VersionComparison } from '../service/contract';
+import type { FieldChange, MarginChange, PointMove, VersionComparison } from '../shared/contract';
 import { cell, facts, paragraph, section, table, text } from './html';
 import { shortTime, type ReportVersion } from './section-overview';
 
@@ -40,7 +40,7 @@ function marginRows(margins: readonly MarginChange[]): string[][] {
     });
 }
 
-export function changesHtml(comparison: VersionComparison, system: UnitSystem): string {
+function changesHtml(comparison: VersionComparison, system: UnitSystem): string {
   const parts: string[] = [];
   const { added, removed, changed } = comparison.requirements;
   const requirementRows = [

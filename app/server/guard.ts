@@ -29,7 +29,7 @@ export interface Refusal {
 }
 
 /** Host names a page on this machine may use to reach us. */
-export function allowedHosts(port: number): string[] {
+function allowedHosts(port: number): string[] {
   return [`127.0.0.1:${port}`, `localhost:${port}`];
 }
 

@@ -1,15 +1,15 @@
 /**
- * Starting browser mode: open (or on first start create) the project, make
- * sure the page is built, and serve both on 127.0.0.1 with a fresh token.
+ * Starting browser mode: open (or on first start create) the project, find
+ * the page built ahead, and serve both on 127.0.0.1 with a fresh token.
  */
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { createService, invokeService, type ProjectService } from '../service';
-import type { ProjectInfo, ServiceError } from '../service/contract';
+import type { ProjectInfo, ServiceError } from '../shared/contract';
 import { createDispatch } from '../shared/dispatch';
 import { pagePolicy } from '../shared/page-policy';
-import { openOrCreateProject, userDataFolder } from './first-start';
+import { openOrCreateProject, userDataFolder } from '../service/first-start';
 import { chromiumPrinter } from './print';
 import { startBrowserServer, type BrowserServer } from './server';
 import { rendererFolders } from './static-files';
@@ -23,8 +23,6 @@ export interface LaunchOptions {
   project?: string;
   /** Folder of the built page; default out/renderer (or dist/renderer). */
   rendererDir?: string;
-  /** Where progress notes go (never stdout, whose first line is the address). */
-  note?: (line: string) => void;
 }
 
 export interface BrowserMode {
@@ -44,28 +42,15 @@ export class LaunchError extends Error {
   }
 }
 
-function builtPage(rendererDir: string | undefined): string | null {
-  const folders = rendererDir ? [rendererDir] : rendererFolders(PROJECT_ROOT);
-  return folders.find((folder) => existsSync(join(folder, 'index.html'))) ?? null;
-}
+/** The command that builds the page ahead (`npm install` and `npm start` run it too). */
+export const BUILD_PAGE_COMMAND = 'npm run build:renderer';
 
-/** Builds the page with Vite when it has not been built yet (a fresh clone). */
-async function ensurePage(rendererDir: string | undefined, note: (line: string) => void): Promise<string> {
-  const found = builtPage(rendererDir);
+/** The built page's folder, `rendererDir` or else the first of `folders` holding one; the server never builds it (no build tool at run time). */
+export function findPage(rendererDir: string | undefined, folders: readonly string[] = rendererFolders(PROJECT_ROOT)): string {
+  const found = (rendererDir ? [rendererDir] : folders).find((folder) => existsSync(join(folder, 'index.html')));
   if (found) return found;
   if (rendererDir) throw new LaunchError(`no built page in ${rendererDir} (index.html is missing)`, '--renderer');
-  note('Building the window for the first time (a few seconds)...');
-  try {
-    const { build } = await import('vite');
-    const { rendererConfig } = await import('../renderer/vite.config');
-    await build({ ...rendererConfig, configFile: false, logLevel: 'error' });
-  } catch (error) {
-    const reason = error instanceof Error ? error.message.split('\n')[0] : String(error);
-    throw new LaunchError(`the window could not be built (${reason}); run \`npm run build\` and try again`);
-  }
-  const built = builtPage(undefined);
-  if (!built) throw new LaunchError('the window was built but out/renderer/index.html is missing');
-  return built;
+  throw new LaunchError(`the window's page is not built yet (out/renderer/index.html is missing); run \`${BUILD_PAGE_COMMAND}\` in ${PROJECT_ROOT} and try again`);
 }
 
 function projectProblem(error: ServiceError): LaunchError {
@@ -73,13 +58,12 @@ function projectProblem(error: ServiceError): LaunchError {
 }
 
 export async function launchBrowserMode(options: LaunchOptions): Promise<BrowserMode> {
-  const note = options.note ?? (() => {});
   const service: ProjectService = createService();
   const opened = await openOrCreateProject(service, options.project, userDataFolder());
   if (!opened.ok) throw projectProblem(opened.error);
   let server: BrowserServer;
   try {
-    const rendererDir = await ensurePage(options.rendererDir, note);
+    const rendererDir = findPage(options.rendererDir);
     const dispatch = createDispatch(
       (method, request) => invokeService(service, method, request),
       pagePolicy('start `loftpoint serve --project FILE` to work on another project'),

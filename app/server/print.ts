@@ -5,7 +5,7 @@
  * exception.
  */
 import { ChromiumUnavailable, findChromium, printPdf } from '../report/chromium';
-import type { ServiceResult } from '../service/contract';
+import type { ServiceResult } from '../shared/contract';
 import { failure } from '../shared/transport';
 
 /** The PDF of a report's HTML, already checked by checkPrintRequest. */

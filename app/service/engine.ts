@@ -52,7 +52,7 @@ function finish(parsed: ParsedConcept, source: string): CheckedConcept {
   };
 }
 
-export function invalidConcept(issues: readonly ConceptIssue[], source: string): ServiceFailure {
+function invalidConcept(issues: readonly ConceptIssue[], source: string): ServiceFailure {
   const first = issues[0];
   const firstLine = first ? (first.path ? `${first.path}: ${first.message}` : first.message) : 'is not a valid concept';
   const more = issues.length > 1 ? ` (and ${issues.length - 1} more issue${issues.length > 2 ? 's' : ''})` : '';

@@ -1,7 +1,7 @@
 /**
  * The project service: one typed API for the command line, the Electron
  * window (IPC) and browser mode (HTTP). The contract (types, method names)
- * is in ./contract, which the page may import on its own.
+ * is in app/shared/contract (re-exported here), which the page and the store import on their own.
  */
 export * from './contract';
 export { ProjectService, createService, type ServiceOptions, type ServiceHandlers } from './service';

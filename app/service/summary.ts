@@ -8,7 +8,7 @@ import type { EvaluationSummary, MarginValue } from './contract';
 const MAX_WARNINGS = 20;
 
 /** A finite number or null: NaN and infinities never reach JSON or a screen. */
-export function finiteOrNull(value: unknown): number | null {
+function finiteOrNull(value: unknown): number | null {
   return typeof value === 'number' && Number.isFinite(value) ? value : null;
 }
 

@@ -4,10 +4,10 @@
  * can do for the page: tell it about menu commands, write a file the person
  * picks in a save dialog, and print a report to PDF.
  */
-import type { RemoteService, ServiceResult } from '../service/contract';
+import type { RemoteService, ServiceResult } from './contract';
 
 /** Menu items the page acts on (the shell handles New, Open and Quit itself). */
-export const WINDOW_COMMANDS = [
+const WINDOW_COMMANDS = [
   'save-version',
   'undo',
   'redo',

@@ -3,7 +3,7 @@
  * (an HTTP body, an IPC message) become a checked request to the service, and
  * whatever happens comes back as a ServiceResult, never as an exception.
  */
-import { isServiceMethod, type ServiceError, type ServiceMethod, type ServiceRequest, type ServiceResponse, type ServiceResult } from '../service/contract';
+import { isServiceMethod, type ServiceError, type ServiceMethod, type ServiceRequest, type ServiceResponse, type ServiceResult } from './contract';
 import { checkRequest } from './requests';
 import { failure, type Dispatch } from './transport';
 

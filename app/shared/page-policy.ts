@@ -3,13 +3,13 @@
  * files (the shell's dialogs and the command line do that), and it cannot
  * close the project it is showing.
  */
-import type { ServiceError } from '../service/contract';
+import type { ServiceError } from './contract';
 import type { CallPolicy } from './dispatch';
 import { FILE_METHODS } from './requests';
 
 const PAGE_REFUSED: readonly string[] = [...FILE_METHODS, 'closeProject'];
 
-export function pageRefusal(method: string, how: string): ServiceError {
+function pageRefusal(method: string, how: string): ServiceError {
   return { code: 'bad-request', message: `${method} is not available from the window; ${how}`, field: 'method' };
 }
 

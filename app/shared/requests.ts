@@ -4,7 +4,7 @@
  * change there that is not made here fails the type check.
  */
 import { z } from 'zod';
-import type { ServiceMethod, ServiceRequest } from '../service/contract';
+import type { ServiceMethod, ServiceRequest } from './contract';
 
 const units = z.enum(['si', 'us']);
 const file = z.string().min(1).max(4096);

@@ -4,7 +4,7 @@
  * payload, and a ServiceResult that is either the answer or a typed error the
  * page can show. Nothing throws across the boundary.
  */
-import type { ServiceError, ServiceErrorCode, ServiceResult } from '../service/contract';
+import type { ServiceError, ServiceErrorCode, ServiceResult } from './contract';
 
 export type { ServiceError, ServiceResult };
 

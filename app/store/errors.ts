@@ -2,7 +2,7 @@
  * Errors of the project file, carrying the service's error codes so every
  * front end can say what happened and what to do, naming the file.
  */
-import type { ServiceErrorCode } from '../service/contract';
+import type { ServiceErrorCode } from '../shared/contract';
 
 export class StoreError extends Error {
   constructor(

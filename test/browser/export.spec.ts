@@ -13,22 +13,12 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { csvParse } from 'd3';
 import { PRELIMINARY_CAUTION } from '../../core/caution';
+import { expectSameDrawing, exportOne, fileCensus, windowCensus } from './diagram-census';
 import { expect, test, type DesignerWindow } from './window';
 
 const SCREENSHOTS = fileURLToPath(new URL('./screenshots', import.meta.url));
 const PNG_SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
 const words = (text: string) => text.replace(/\s+/g, ' ').trim();
-
-async function exportOne(window: DesignerWindow, testId: string): Promise<{ name: string; bytes: Buffer }> {
-  await expect(window.byTest('export')).toBeEnabled({ timeout: 60_000 });
-  await window.byTest('export').click();
-  const arriving = window.page.waitForEvent('download', { timeout: 90_000 });
-  await window.byTest(testId).click();
-  const download = await arriving;
-  const failure = await download.failure();
-  expect(failure, `download of ${testId}`).toBeNull();
-  return { name: download.suggestedFilename(), bytes: readFileSync((await download.path())!) };
-}
 
 /** The optimum as the Design point panel shows it. */
 async function optimumShown(window: DesignerWindow): Promise<{ wingLoading: string; loading: string }> {
@@ -166,4 +156,26 @@ test('an edited draft is reported as an unsaved draft, in the window’s units',
 
   await window.shot('draft-report-exported');
   await window.expectNoNaN();
+});
+
+test('the exported diagram draws what the window draws: markers, boundaries, labels, bands, the W/P view', async ({ window, page }) => {
+  await window.selectConcept('LP-2 two-seat trainer');
+  await window.byTest('toggle-bands').click();
+  await expect(window.byTest('bands').locator('path.band')).not.toHaveCount(0);
+  for (const view of ['pw', 'wp'] as const) {
+    await window.byTest(`axis-${view}`).click();
+    await expect(window.byTest('y-title')).toContainText(view === 'wp' ? 'Power loading W/P' : 'Power-to-weight P/W');
+    const shown = await windowCensus(window);
+    const exported = await exportOne(window, 'export-svg');
+    const written = await fileCensus(window, exported.bytes.toString('utf8'));
+    expectSameDrawing(written, shown);
+    expect(shown.counts.optimum).toBe(1);
+    expect(shown.counts['design-point']).toBe(1);
+    expect(shown.counts.band).toBeGreaterThan(3);
+    mkdirSync(SCREENSHOTS, { recursive: true });
+    writeFileSync(join(SCREENSHOTS, `export-diagram-${view}.svg`), exported.bytes);
+    await window.shot(`diagram-${view}`);
+  }
+  await window.byTest('axis-pw').click();
+  await window.byTest('toggle-bands').click();
 });

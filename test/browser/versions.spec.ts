@@ -1,3 +1,4 @@
+import { expectSameDrawing, exportOne, fileCensus, windowCensus } from './diagram-census';
 import { expect, test } from './window';
 
 const NOTE = 'Faster cruise <b>asked</b> by sales & "marketing"';
@@ -54,12 +55,17 @@ test('save a version with a note, reload, reopen the older version and compare t
   await window.byTest(`version-${newest}`).getByTestId('version-select').check();
   await window.byTest('compare-selected').click();
   await expect(window.byTest('viewing-banner')).toContainText('Comparing');
-  await expect(window.byTest('overlay').locator('path')).not.toHaveCount(0);
+  await expect(window.byTest('diagram').locator('[data-role="overlay"]')).not.toHaveCount(0);
   const changes = window.byTest('changes');
   await expect(changes).toContainText(`Version ${newestBefore} → version ${newest}`);
   await expect(changes.getByTestId('change-requirement')).toContainText('cruise.speed');
   await expect(changes.getByTestId('change-requirement')).toContainText('250 kt');
   await window.shot('compare');
+  // The exported diagram draws the older version behind as the window does: its boundaries and its optimum's open diamond.
+  const shown = await windowCensus(window);
+  expect(shown.counts['overlay-optimum']).toBe(1);
+  const exported = await exportOne(window, 'export-svg');
+  expectSameDrawing(await fileCensus(window, exported.bytes.toString('utf8')), shown);
 
   // Continue from the older version: it becomes the draft, editable again.
   await window.byTest('continue-from-version').click();

@@ -31,14 +31,14 @@ describe('studyDiagramSvg', () => {
 
   it('is a well-formed SVG with a band for every ranged boundary and contour paths for 50, 90 and 95 %', () => {
     const doc = parse(studyDiagramSvg(trainer.s.evaluation, { title: 'Trainer', bands: trainer.bands, map: trainer.map, runNote: 'Monte Carlo: 2,000 samples, seed 1' }));
-    const banded = [...doc.querySelectorAll('g.band')].map((g) => g.getAttribute('data-id'));
+    const banded = [...doc.querySelectorAll('[data-role="band"]')].map((g) => g.getAttribute('data-id'));
     const ranged = trainer.bands.filter((band) => band.fields.length > 0).map((band) => band.id);
     expect(ranged.length).toBeGreaterThan(3);
     expect(banded.sort()).toEqual([...ranged].sort());
-    const levels = [...doc.querySelectorAll('path.contour')].map((path) => path.getAttribute('data-level'));
+    const levels = [...doc.querySelectorAll('[data-role="contour"]')].map((path) => path.getAttribute('data-level'));
     expect(levels).toEqual(['0.5', '0.9', '0.95']);
-    for (const path of doc.querySelectorAll('path.contour')) expect(path.getAttribute('d')).toMatch(/^M[\d.-]+,[\d.-]+(L[\d.-]+,[\d.-]+)+Z/);
-    const labels = [...doc.querySelectorAll('text.contour-label')].map((t) => t.textContent);
+    for (const path of doc.querySelectorAll('[data-role="contour"]')) expect(path.getAttribute('d')).toMatch(/^M[\d.-]+,[\d.-]+(L[\d.-]+,[\d.-]+)+Z/);
+    const labels = [...doc.querySelectorAll('[data-role="contour-label"]')].map((t) => t.textContent);
     expect(labels.length).toBeGreaterThan(0);
     for (const label of labels) expect(['50 %', '90 %', '95 %']).toContain(label);
     const legend = [...doc.querySelectorAll('g.legend text')].map((t) => t.textContent ?? '');
@@ -52,8 +52,8 @@ describe('studyDiagramSvg', () => {
   it('draws the bands behind the boundaries and the contours above them', () => {
     const svg = studyDiagramSvg(trainer.s.evaluation, { bands: trainer.bands, map: trainer.map });
     const band = svg.indexOf('class="band"');
-    const boundary = svg.indexOf('data-id="cruise" d=');
-    const contour = svg.indexOf('class="contour"');
+    const boundary = svg.indexOf('data-role="curve" data-id="cruise"');
+    const contour = svg.indexOf('data-role="contour"');
     expect(band).toBeGreaterThan(0);
     expect(band).toBeLessThan(boundary);
     expect(contour).toBeGreaterThan(boundary);
@@ -62,19 +62,19 @@ describe('studyDiagramSvg', () => {
   it('leaves out the band of a boundary that no range moves', () => {
     const only = bandsAndMap(stallAndCruise(1.8, 2.3, 500), 500);
     const doc = parse(studyDiagramSvg(only.s.evaluation, { bands: only.bands, map: only.map }));
-    expect([...doc.querySelectorAll('g.band')].map((g) => g.getAttribute('data-id'))).toEqual(['stall']);
+    expect([...doc.querySelectorAll('[data-role="band"]')].map((g) => g.getAttribute('data-id'))).toEqual(['stall']);
   });
 
   it('escapes the title and draws no study layer when given none', () => {
     const doc = parse(studyDiagramSvg(trainer.s.evaluation, { title: '<script>x</script> & Co' }));
     expect(doc.getElementsByTagName('script')).toHaveLength(0);
     expect(doc.querySelector('title')?.textContent).toContain('<script>x</script> & Co');
-    expect(doc.querySelectorAll('g.band, path.contour')).toHaveLength(0);
+    expect(doc.querySelectorAll('[data-role="band"], [data-role="contour"]')).toHaveLength(0);
   });
 
   it('leaves the plain diagram exactly as it was when no layers are given', () => {
     const plain = constraintDiagramSvg(trainer.s.evaluation, { title: 'T' });
     expect(constraintDiagramSvg(trainer.s.evaluation, { title: 'T', layers: {} })).toBe(plain);
-    expect(plain).not.toMatch(/class="band"|class="contour"/);
+    expect(plain).not.toMatch(/data-role="band"|data-role="contour"/);
   });
 });

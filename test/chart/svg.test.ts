@@ -25,7 +25,7 @@ describe('constraintDiagramSvg', () => {
   it('labels every boundary on the plot and names it in the legend', () => {
     const evaluation = trainerEvaluation();
     const doc = parse(constraintDiagramSvg(evaluation, { title: 'T' }));
-    const labelled = [...doc.querySelectorAll('text.label.boundary')].map((node) => node.getAttribute('data-id'));
+    const labelled = [...doc.querySelectorAll('text[data-role="label"]')].map((node) => node.getAttribute('data-id'));
     expect(labelled.sort()).toEqual(evaluation.boundaries.map((b) => b.id).sort());
     const all = texts(doc).join('\n');
     for (const boundary of evaluation.boundaries) expect(all).toContain(boundary.label ?? boundary.id);
@@ -34,17 +34,17 @@ describe('constraintDiagramSvg', () => {
   it('draws each curve as a path and each limit as a line', () => {
     const evaluation = trainerEvaluation();
     const doc = parse(constraintDiagramSvg(evaluation));
-    expect(doc.querySelectorAll('path[data-id]')).toHaveLength(3);
-    expect(doc.querySelectorAll('line[data-id]')).toHaveLength(1);
-    for (const path of doc.querySelectorAll('path[data-id]')) expect(path.getAttribute('d')).toMatch(/^M[\d.]+,[\d.]+(L[\d.]+,[\d.]+)+$/);
+    expect(doc.querySelectorAll('path[data-role="curve"]')).toHaveLength(3);
+    expect(doc.querySelectorAll('line[data-role="limit"]')).toHaveLength(1);
+    for (const path of doc.querySelectorAll('path[data-role="curve"]')) expect(path.getAttribute('d')).toMatch(/^M-?[\d.]+,-?[\d.]+(L-?[\d.]+,-?[\d.]+)+$/);
   });
 
   it('shades the feasible region and marks the optimum and the design point with their values', () => {
     const doc = parse(constraintDiagramSvg(trainerEvaluation()));
-    expect(doc.querySelectorAll('polygon.feasible').length).toBeGreaterThan(0);
-    expect(doc.querySelectorAll('.optimum')).toHaveLength(1);
-    expect(doc.querySelectorAll('.design-point')).toHaveLength(1);
-    const notes = [...doc.querySelectorAll('text.note')].map((node) => node.textContent);
+    expect(doc.querySelectorAll('[data-role="region"]').length).toBeGreaterThan(0);
+    expect(doc.querySelectorAll('[data-role="optimum"]')).toHaveLength(1);
+    expect(doc.querySelectorAll('[data-role="design-point"]')).toHaveLength(1);
+    const notes = [...doc.querySelectorAll('text[data-role="note"]')].map((node) => node.textContent);
     expect(notes.some((text) => text?.startsWith('Optimum'))).toBe(true);
     expect(notes.some((text) => text?.includes('1,000 N/m² · 12.00 W/N'))).toBe(true);
   });
@@ -81,11 +81,29 @@ describe('constraintDiagramSvg', () => {
     evaluation.boundaries[0] = { id: 'stall', kind: 'stall', wingLoadingMax: 150 };
     const doc = parse(constraintDiagramSvg(evaluation));
     expect(texts(doc)).toContain('Nothing on the diagram meets every requirement');
-    expect(doc.querySelectorAll('polygon.feasible')).toHaveLength(0);
+    expect(doc.querySelectorAll('[data-role="region"]')).toHaveLength(0);
   });
 
   it('draws an earlier version behind, named in the legend', () => {
     const doc = parse(constraintDiagramSvg(trainerEvaluation(), { overlays: [{ name: 'Version 1', evaluation: jetEvaluation() }, { name: 'Version 2', evaluation: trainerEvaluation() }] }));
     expect(texts(doc)).toContain('Version 2');
+    // An older version's optimum is the window's open diamond: one for version 2 (version 1, a jet, has no P/W to draw).
+    const older = [...doc.querySelectorAll('[data-role="overlay-optimum"]')];
+    expect(older).toHaveLength(1);
+    for (const mark of older) expect(mark.getAttribute('d')).toMatch(/^M[^Z]+L[^Z]+L[^Z]+L[^Z]+Z$/);
+    expect(doc.querySelectorAll('[data-role="overlay"]').length).toBeGreaterThan(0);
+  });
+
+  it('shows power loading W/P for a propeller aircraft when asked, feasible below the curves', () => {
+    const svg = constraintDiagramSvg(trainerEvaluation(), { powerLoading: true });
+    const doc = parse(svg);
+    expect(texts(doc)).toContain('Power loading W/P [N/kW]');
+    // 12.00 W/N at the design point is 1000/12 = 83.3 N/kW (W/P = 1/(P/W), common practice).
+    const notes = [...doc.querySelectorAll('text[data-role="note"]')].map((node) => node.textContent ?? '');
+    expect(notes.some((text) => text.includes('W/P 83.3 N/kW'))).toBe(true);
+    expect(doc.querySelectorAll('[data-role="region"]').length).toBeGreaterThan(0);
+    // A jet has no power loading: the thrust-to-weight view stays.
+    expect(texts(parse(constraintDiagramSvg(jetEvaluation(), { powerLoading: true })))).toContain('Thrust-to-weight T/W [–]');
+    expect(svg).not.toMatch(/NaN|undefined|Infinity/);
   });
 });

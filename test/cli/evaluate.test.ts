@@ -273,7 +273,7 @@ describe('loftpoint evaluate FILE --svg OUT', () => {
       const texts = [...doc.getElementsByTagName('text')].map((node) => node.textContent ?? '');
       expect(texts).toContain(demo.concept.name);
       const labelled = [...doc.getElementsByTagName('text')]
-        .filter((node) => (node.getAttribute('class') ?? '').includes('boundary'))
+        .filter((node) => node.getAttribute('data-role') === 'label')
         .map((node) => node.getAttribute('data-id'));
       for (const boundary of expectedEvaluation(demo.slug).boundaries) expect(labelled).toContain(boundary.id);
       expect(texts.join('\n')).toMatch(CAUTION);

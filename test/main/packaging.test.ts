@@ -7,7 +7,7 @@ import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { PROJECT_EXTENSION } from '../../app/server/first-start';
+import { PROJECT_EXTENSION } from '../../app/service/first-start';
 
 const root = join(import.meta.dirname, '..', '..');
 const config = JSON.parse(readFileSync(join(root, 'electron-builder.json'), 'utf8'));

@@ -1,6 +1,6 @@
 import { describe, expect, it, vi } from 'vitest';
 import { httpService, launchToken, TOKEN_HEADER } from '../../app/renderer/lib/api/client';
-import { SERVICE_METHODS } from '../../app/service/contract';
+import { SERVICE_METHODS } from '../../app/shared/contract';
 
 function memoryStorage(): Storage {
   const items = new Map<string, string>();

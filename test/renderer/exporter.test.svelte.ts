@@ -3,6 +3,7 @@ import { evaluationCsv } from '../../app/chart/boundaries-csv';
 import type { Connection } from '../../app/renderer/lib/api/client';
 import { setIn } from '../../app/renderer/lib/concept/edit';
 import { base64ToBytes } from '../../app/renderer/lib/export/base64';
+import { DiagramView } from '../../app/renderer/lib/diagram/view.svelte';
 import { EXPORT_MENU, Exporter, exportForCommand } from '../../app/renderer/lib/export/exporter.svelte';
 import { Preferences } from '../../app/renderer/lib/state/preferences.svelte';
 import { ProjectState } from '../../app/renderer/lib/state/project.svelte';
@@ -50,6 +51,23 @@ describe('Exporter', () => {
     expect(written).toEqual([{ kind: 'csv', suggestedName: 'LP-2-two-seat-trainer-boundaries.csv', content: evaluationCsv({ name: design.name, evaluation, system: 'us' }) }]);
     expect(written[0].content).toContain('lb/ft^2');
     expect(project.status).toEqual({ kind: 'info', text: 'Boundaries written to /home/ada/LP-2-two-seat-trainer-boundaries.csv.' });
+  });
+
+  it('writes the diagram as the window shows it: power loading W/P and the zoomed view', async () => {
+    const parts = await windowParts();
+    const view = new DiagramView();
+    const exporter = new Exporter({ ...parts, view });
+    const ticks = (svg: string) => [...svg.matchAll(/<g data-role="ticks" data-axis="x"[^>]*>(.*?)<\/g>/g)].flatMap((m) => [...m[1].matchAll(/>([^<]+)<\/text>/g)].map((t) => t[1]));
+    await exporter.run('diagram-svg');
+    expect(ticks(parts.written[0].content)).toContain('1,200');
+    parts.preferences.powerLoading = true;
+    view.pan({ x: [300, 900], y: [0, 200] }, 0, 0);
+    await exporter.run('diagram-svg');
+    const zoomed = parts.written[1].content;
+    // W/P = 1/(P/W), in N/kW (definition of power loading, common practice).
+    expect(zoomed).toContain('Power loading W/P [N/kW]');
+    expect(ticks(zoomed)[0]).toBe('300');
+    expect(ticks(zoomed).at(-1)).toBe('900');
   });
 
   it('refuses while the concept has a problem, naming the field, and writes nothing', async () => {

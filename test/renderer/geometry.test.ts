@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { chartData } from '../../app/chart';
-import { defaultDomains, diagramGeometry, inverted, powerLoadingFactor, powerLoadingUnit } from '../../app/renderer/lib/diagram/geometry';
+import { defaultDomains, inverted, powerLoadingFactor, powerLoadingUnit } from '../../app/chart/power-loading';
+import { diagramGeometry } from '../../app/renderer/lib/diagram/geometry';
 import { DEMO_CONCEPTS, evaluateDesign, parseConcept, type Evaluation } from '../../core';
 
 function evaluationOf(slug: string): Evaluation {

@@ -15,7 +15,7 @@ import { reportOrigin, type ReportSubject } from '../../app/renderer/lib/export/
 import { windowReportHtml } from '../../app/renderer/lib/export/report-request';
 import { buildReportOffThread, type WorkerLike } from '../../app/renderer/lib/export/run-report';
 import { invokeService, ProjectService } from '../../app/service';
-import { SERVICE_METHODS, type RemoteService } from '../../app/service/contract';
+import { SERVICE_METHODS, type RemoteService } from '../../app/shared/contract';
 import { PRELIMINARY_CAUTION } from '../../core';
 import { demoConcept } from '../service/helpers';
 

@@ -125,7 +125,7 @@ describe('buildReport', () => {
     const studies = trainer.querySelector('#studies')!.textContent!;
     expect(studies).toContain('Studies over the concept’s ranges');
     expect(studies).toMatch(/1,000 samples, seed 1\b/);
-    expect(trainer.querySelector('#studies .contour')).not.toBeNull();
+    expect(trainer.querySelector('#studies [data-role="contour"]')).not.toBeNull();
     expect(trainer.querySelector('#studies')!.textContent).toMatch(/Meets every requirement\s*[\d.]+ % ± [\d.]+ %/);
     const rows = [...trainer.querySelectorAll('#assumptions table')].pop()!.querySelectorAll('tbody tr');
     expect(rows.length).toBe(18);

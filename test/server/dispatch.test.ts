@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SERVICE_METHODS } from '../../app/service/contract';
+import { SERVICE_METHODS } from '../../app/shared/contract';
 import { createDispatch, type Invoke } from '../../app/shared/dispatch';
 import { pagePolicy } from '../../app/shared/page-policy';
 import { checkRequest, FILE_METHODS, REQUEST_SCHEMAS } from '../../app/shared/requests';

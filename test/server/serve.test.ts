@@ -1,11 +1,12 @@
-import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { bufferIO } from '../../app/cli/io';
 import { InputError } from '../../app/cli/errors';
 import { parsePort, runServe } from '../../app/cli/serve';
-import { firstProjectFile, userDataFolder } from '../../app/server/first-start';
+import { firstProjectFile, userDataFolder } from '../../app/service/first-start';
+import { BUILD_PAGE_COMMAND, findPage, LaunchError } from '../../app/server/launch';
 import { DEMO_CONCEPTS } from '../../core';
 
 const folder = mkdtempSync(join(tmpdir(), 'loftpoint-serve-'));
@@ -60,6 +61,20 @@ describe('loftpoint serve', () => {
     await withServe(project, async (_address, io) => {
       expect(io.stdout()).not.toContain('(new');
     });
+  });
+
+  it('serves the page built ahead, and names the command that builds it when there is none', () => {
+    const empty = join(folder, 'no-page');
+    mkdirSync(empty, { recursive: true });
+    expect(findPage(undefined, [empty, page])).toBe(page);
+    expect(() => findPage(undefined, [empty])).toThrow(LaunchError);
+    expect(() => findPage(undefined, [empty])).toThrow(BUILD_PAGE_COMMAND);
+    // The command named is one of package.json's scripts, and `npm install` runs it (prepare).
+    const scripts = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')).scripts as Record<string, string>;
+    const script = BUILD_PAGE_COMMAND.replace(/^npm run /, '');
+    expect(scripts[script]).toMatch(/vite build/);
+    expect(scripts.prepare).toBe(BUILD_PAGE_COMMAND);
+    expect(() => findPage(empty)).toThrow(/no built page in .*no-page/);
   });
 
   it('refuses a bad port with a message naming the option', () => {

@@ -3,7 +3,7 @@
  * (set by the preload), HTTP to the browser-mode server otherwise. Both give
  * the same typed methods and the same result values.
  */
-import { SERVICE_METHODS, type RemoteService, type ServiceMethod, type ServiceResult } from '../../../service/contract';
+import { SERVICE_METHODS, type RemoteService, type ServiceMethod, type ServiceResult } from '../../../shared/contract';
 import type { DesktopApi, ExportFileRequest, WindowCommand, WindowStateReport } from '../../../shared/desktop-api';
 import { EXPORT_KINDS } from '../../../shared/desktop-api';
 import { PRINT_PDF_PATH } from '../../../shared/print-request';

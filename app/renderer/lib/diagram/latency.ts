@@ -5,9 +5,9 @@
  */
 import { tick } from 'svelte';
 
-export const DRAG_MEASURE = 'loftpoint:drag';
+const DRAG_MEASURE = 'loftpoint:drag';
 /** The page's own share: from the handler starting to the laid-out DOM (no input queueing). */
-export const DRAG_WORK_MEASURE = 'loftpoint:drag-work';
+const DRAG_WORK_MEASURE = 'loftpoint:drag-work';
 const KEEP = 2000;
 
 export function measureDrag(eventTime: number, handlerStart: number, settle: () => void): void {

@@ -4,10 +4,13 @@
  * CSV and the concept JSON. One export at a time; while a report is being
  * prepared the status line says so and the window keeps answering.
  */
-import { constraintDiagramSvg } from '../../../chart';
+import { STALE_CONTOUR_INK } from '../../../chart/study-style';
+import { studyDiagramSvg } from '../../../chart/study-svg';
 import { evaluationCsv } from '../../../chart/boundaries-csv';
 import type { ExportFileRequest, WindowCommand } from '../../../shared/desktop-api';
 import type { Connection } from '../api/client';
+import type { DiagramView } from '../diagram/view.svelte';
+import type { WindowStudies } from '../studies/window-studies.svelte';
 import type { Preferences } from '../state/preferences.svelte';
 import type { ProjectState } from '../state/project.svelte';
 import type { Workspace } from '../state/workspace.svelte';
@@ -60,6 +63,10 @@ export interface ExporterParts {
   workspace: Workspace;
   project: ProjectState;
   preferences: Preferences;
+  /** The diagram's zoom and pan, so the exported diagram shows what the window shows. */
+  view?: DiagramView;
+  /** The study layers the diagram shows (bands, contours), so the export shows them too. */
+  studies?: WindowStudies;
 }
 
 export class Exporter {
@@ -106,7 +113,19 @@ export class Exporter {
     const { evaluation } = this.#resolved();
     const older = project.comparison;
     const overlays = older?.olderEvaluation ? [{ name: `Version ${older.older.number}`, evaluation: older.olderEvaluation }] : [];
-    return constraintDiagramSvg(evaluation, { system: preferences.units, title: String(workspace.document.name ?? ''), overlays });
+    // The window's view of the diagram: units, the loading axis (P/W or W/P), zoom and pan, the older version drawn behind and the study layers shown.
+    const studies = this.#parts.studies;
+    const bands = studies?.showBands && studies.bands?.ok ? studies.bands.bands : [];
+    const result = studies?.showContours ? studies.result : null;
+    return studyDiagramSvg(evaluation, {
+      system: preferences.units,
+      title: String(workspace.document.name ?? ''),
+      overlays,
+      powerLoading: preferences.powerLoading,
+      view: this.#parts.view?.current ?? null,
+      bands,
+      ...(result ? { map: result.map, ...(studies?.stale ? { contourInk: STALE_CONTOUR_INK } : {}) } : {}),
+    });
   }
 
   async #request(what: ExportWhat): Promise<ExportFileRequest> {

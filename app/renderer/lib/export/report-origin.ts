@@ -4,7 +4,7 @@
  * from (number, note, author, date, and what changed since its parent), or
  * else an unsaved draft, said as such.
  */
-import type { ProjectInfo, RemoteService, VersionDetail } from '../../../service/contract';
+import type { ProjectInfo, RemoteService, VersionDetail } from '../../../shared/contract';
 import type { WindowReportRequest } from './report-request';
 
 /** The parts of the window's project state a report reads. */

@@ -8,10 +8,10 @@
 import { evaluateDesign, parseConcept, type UnitSystem } from '../../../../core';
 import { buildReport } from '../../../report/report';
 import type { ReportVersion } from '../../../report/section-overview';
-import type { VersionComparison } from '../../../service/contract';
+import type { VersionComparison } from '../../../shared/contract';
 
 /** The command line's default step for the requirement costs (`--step 10%`). */
-export const REPORT_STEP = 0.1;
+const REPORT_STEP = 0.1;
 
 /** Everything the report needs, as plain data that can be posted to a worker. */
 export interface WindowReportRequest {

@@ -12,7 +12,7 @@ import type {
   VersionComparison,
   VersionDetail,
   VersionSummary,
-} from '../../../service/contract';
+} from '../../../shared/contract';
 import type { Connection } from '../api/client';
 import type { ConceptDocument } from '../concept/edit';
 import type { Workspace } from './workspace.svelte';
@@ -45,7 +45,7 @@ function asDocument(value: unknown): ConceptDocument {
   return value && typeof value === 'object' && !Array.isArray(value) ? (value as ConceptDocument) : {};
 }
 
-export function errorText(error: ServiceError): string {
+function errorText(error: ServiceError): string {
   const first = error.issues?.[0];
   return first && !error.message.includes(first.message) ? `${error.message} (${first.path}: ${first.message})` : error.message;
 }

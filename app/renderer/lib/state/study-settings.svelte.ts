@@ -5,7 +5,7 @@
  */
 import type { TornadoMeasure } from '../studies/tornado-chart';
 
-export const DEFAULT_COST_STEP = 0.1;
+const DEFAULT_COST_STEP = 0.1;
 
 export class StudySettings {
   measure = $state<TornadoMeasure>('wingLoading');

@@ -14,7 +14,7 @@ export type Prepared =
   | { ok: false; message: string };
 
 /** The run for a concept document, or what stops it, naming the field. */
-export function prepareStudy(concept: unknown, grid: ProbabilityGrid): Prepared {
+function prepareStudy(concept: unknown, grid: ProbabilityGrid): Prepared {
   const parsed = parseConcept(concept);
   if (!parsed.ok) {
     const first = parsed.issues[0];

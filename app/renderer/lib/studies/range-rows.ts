@@ -57,7 +57,7 @@ const REQUIREMENT_TITLES = {
 } as const;
 
 /** A configuration's name as the Assumptions panel shows it. */
-export function configurationTitle(name: string): string {
+function configurationTitle(name: string): string {
   return name === 'clean' ? 'Clean' : name === 'takeoff' ? 'Take-off flaps' : name === 'landing' ? 'Landing flaps' : name;
 }
 

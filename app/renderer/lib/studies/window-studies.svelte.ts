@@ -23,7 +23,7 @@ export function bandWingLoadings(evaluation: Evaluation): number[] {
 
 export type WindowBands = { ok: true; whose: 'concept' | 'typical'; bands: BoundaryBand[] } | { ok: false; path: string; message: string };
 
-export function bandsOf(document: Record<string, unknown>, design: Design, evaluation: Evaluation): WindowBands {
+function bandsOf(document: Record<string, unknown>, design: Design, evaluation: Evaluation): WindowBands {
   const ranges = studyParameters(document, design);
   if (!ranges.ok) return ranges;
   return { ok: true, whose: ranges.whose, bands: boundaryBands(design, ranges.parameters, bandWingLoadings(evaluation)) };

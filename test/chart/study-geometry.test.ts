@@ -3,7 +3,7 @@ import { scaleLinear } from 'd3';
 import type { ChartScales, Labels } from '../../app/chart';
 import type { BandSeries } from '../../app/chart/bands';
 import type { ContourSeries } from '../../app/chart/contours';
-import { bandShapes, contourLabels, contourShapes, mapBox } from '../../app/renderer/lib/diagram/study-geometry';
+import { bandShapes, contourLabels, contourShapes, mapBox } from '../../app/chart/study-geometry';
 
 /** A plot 600 px wide from x = 100 to 700, 400 px tall from y = 20 to 420; wing loading 0-1200, loading 0-30. */
 function scales(yDomain: [number, number] = [0, 30]): ChartScales {

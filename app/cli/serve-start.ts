@@ -4,9 +4,9 @@
  * bad input prints one line and exits 2.
  */
 import { Command, CommanderError } from 'commander';
-import { InputError, EXIT_FAILURE, EXIT_INPUT } from '../cli/errors';
-import { processIO } from '../cli/io';
-import { registerServe } from '../cli/serve';
+import { InputError, EXIT_FAILURE, EXIT_INPUT } from './errors';
+import { processIO } from './io';
+import { registerServe } from './serve';
 
 const program = new Command('loftpoint')
   .exitOverride()

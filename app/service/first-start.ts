@@ -6,12 +6,12 @@
 import { existsSync, mkdirSync } from 'node:fs';
 import { homedir } from 'node:os';
 import { basename, extname, join, resolve } from 'node:path';
-import type { ProjectInfo, ServiceResult } from '../service/contract';
-import type { ServiceHandlers } from '../service';
-import { invokeService } from '../service';
+import type { ProjectInfo, ServiceResult } from '../shared/contract';
+import type { ServiceHandlers } from './service';
+import { invokeService } from './invoke';
 
 export const PROJECT_EXTENSION = '.loftpoint';
-export const FIRST_PROJECT_NAME = 'Demo project';
+const FIRST_PROJECT_NAME = 'Demo project';
 
 /** The user's data folder: $LOFTPOINT_DATA_DIR, else the platform's usual place for application data. */
 export function userDataFolder(env: NodeJS.ProcessEnv = process.env, platform: NodeJS.Platform = process.platform, home = homedir()): string {

@@ -1,14 +1,17 @@
 /**
- * The ranges studies in the window's pixels: boundary bands as filled
+ * The ranges studies in the diagram's pixels (window and SVG writer alike): boundary bands as filled
  * shapes with thin edges, probability contours as outlines, and a place for
  * each contour's label on its line clear of the boundary labels. Takes the
  * shared series (app/chart bands.ts and contours.ts, display units of P/W or
  * T/W) and, for the power-loading view, shows them as W/P. Pure.
  */
-import { boxesOverlap, boxInside, textWidth, type Box, type ChartScales, type Labels, type XY } from '../../../chart';
-import { clampToView, curveBandRuns, type BandPoint, type BandSeries, type CurveBandSeries } from '../../../chart/bands';
-import { levelText, type ContourSeries } from '../../../chart/contours';
-import { contourStyle } from '../../../chart/svg-study';
+import { clampToView, curveBandRuns, type BandPoint, type BandSeries, type CurveBandSeries } from './bands';
+import { boxesOverlap, boxInside, textWidth, type Box } from './boxes';
+import type { XY } from './clip';
+import { levelText, type ContourSeries } from './contours';
+import type { Labels } from './labels';
+import type { ChartScales } from './scales';
+import { contourStyle } from './study-style';
 
 /** How the plotted loading is read from a displayed P/W (or T/W): itself, or W/P = k / (P/W). */
 export type LoadingView = { powerLoading: false } | { powerLoading: true; factor: number };
