@@ -22,7 +22,7 @@ import type { CliIO } from './io';
 import type { SetExitCode } from './commands';
 
 /** Errors that are not the user's input: reported in one line with exit status 1. */
-const NOT_INPUT = new Set(['busy', 'io', 'internal']);
+const NOT_INPUT = new Set(['busy', 'io', 'disk-full', 'internal']);
 
 function versionNumber(text: string, argument: string): number {
   if (!/^\d+$/.test(text.trim()) || Number(text) < 1) {
