@@ -25,7 +25,7 @@ function npx(bin) {
 }
 
 /**
- * Debian's Chromium (browser tests, PDF reports) and poppler-utils (pdftotext,
+ * Debian's Chromium (browser tests, PDF reports), strace (fault injection) and poppler-utils (pdftotext,
  * to read reports back). Installed when we may (root with apt), else the
  * caller prints a one-line instruction.
  */
