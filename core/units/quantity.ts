@@ -81,6 +81,24 @@ export const EXAMPLE: Record<Dimension, string> = {
 
 export type ParsedQuantity = { ok: true; value: number } | { ok: false; message: string };
 
+/**
+ * Magnitudes (in SI) the methods can compute with: squares, cubes and
+ * products of such values stay finite in double precision (largest about
+ * 1.8e308, smallest normal about 2.2e-308, IEEE 754). Anything outside is
+ * refused as input rather than overflowing to Infinity later.
+ */
+export const LARGEST_MAGNITUDE = 1e60;
+export const SMALLEST_MAGNITUDE = 1e-60;
+
+function outOfRange(value: number): boolean {
+  const size = Math.abs(value);
+  return size > LARGEST_MAGNITUDE || (size !== 0 && size < SMALLEST_MAGNITUDE);
+}
+
+function rangeMessage(written: string, dimension: Dimension): string {
+  return `${written} is too ${Math.abs(Number.parseFloat(written.replace(/^"/, ''))) < 1 ? 'small' : 'large'} a number to compute with (magnitudes from 1e-60 to 1e60 in SI units); write a realistic value, e.g. "${EXAMPLE[dimension]}"`;
+}
+
 const NUMBER = /^\s*([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*?)\s*$/;
 
 /** Spellings that mean the same unit. */
@@ -118,6 +136,7 @@ export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuant
   const dimensionless = dimension === 'fraction' || dimension === 'thrustToWeight';
   if (typeof input === 'number') {
     if (!Number.isFinite(input)) return { ok: false, message: `is ${input}; give a finite number` };
+    if (dimensionless && outOfRange(input)) return { ok: false, message: rangeMessage(String(input), dimension) };
     if (dimensionless) return { ok: true, value: input };
     return {
       ok: false,
@@ -141,6 +160,7 @@ export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuant
   }
   const unit = Object.hasOwn(ALIASES, written) ? ALIASES[written] : written;
   if (unit === '') {
+    if (dimensionless && outOfRange(magnitude)) return { ok: false, message: rangeMessage(`"${input}"`, dimension) };
     if (dimensionless) return { ok: true, value: magnitude };
     return {
       ok: false,
@@ -149,7 +169,9 @@ export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuant
   }
   // Own keys only: "45 constructor" must not find Object.prototype.constructor.
   if (!Object.hasOwn(UNITS[dimension], unit)) return { ok: false, message: unknownUnitMessage(input, unit, dimension) };
-  return { ok: true, value: magnitude * UNITS[dimension][unit] };
+  const value = magnitude * UNITS[dimension][unit];
+  if (outOfRange(value)) return { ok: false, message: rangeMessage(`"${input}"`, dimension) };
+  return { ok: true, value };
 }
 
 /** Say what the unit is if it belongs elsewhere, and what to write instead. */

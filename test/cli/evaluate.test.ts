@@ -331,6 +331,13 @@ describe('loftpoint evaluate FILE --svg OUT', () => {
     expect(readFileSync(locked, 'utf8')).toBe(before);
   });
 
+  it('refuses a take-off mass of 1e308 lb as input (its weight overflows double precision), naming the field', async () => {
+    const file = variant('huge-mass', (concept) => {
+      concept.aircraft.takeoffMass = '1e308 lb';
+    });
+    await expectInputError(['evaluate', file, '--json'], file, 'aircraft.takeoffMass', /too large a number to compute with/);
+  });
+
   it('refuses a folder that does not exist, writing nothing', async () => {
     const out = join(dir, 'no-such-folder', 'x.svg');
     const { code, stdout, stderr } = await run('evaluate', demoFile('trainer'), '--svg', out);
