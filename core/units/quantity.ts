@@ -16,6 +16,7 @@ import {
   PSF_PA,
   RANKINE_K,
 } from './factors';
+import { shortened } from '../shortened';
 
 export type Dimension =
   | 'mass'
@@ -146,31 +147,32 @@ export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuant
   if (typeof input !== 'string') {
     return { ok: false, message: `must be a string with a unit, e.g. "${EXAMPLE[dimension]}"` };
   }
+  const shown = shortened(input);
   const match = NUMBER.exec(input);
   if (!match) {
-    return { ok: false, message: `"${input}" is not a number with a unit, e.g. "${EXAMPLE[dimension]}"` };
+    return { ok: false, message: `"${shown}" is not a number with a unit, e.g. "${EXAMPLE[dimension]}"` };
   }
   const magnitude = Number(match[1]);
   if (!Number.isFinite(magnitude)) {
-    return { ok: false, message: `"${input}" is too large a number; write a finite value, e.g. "${EXAMPLE[dimension]}"` };
+    return { ok: false, message: `"${shown}" is too large a number; write a finite value, e.g. "${EXAMPLE[dimension]}"` };
   }
   const written = match[2];
   if (/^,\d/.test(written)) {
-    return { ok: false, message: `"${input}": write the number without thousands separators, e.g. "1500 ft"` };
+    return { ok: false, message: `"${shown}": write the number without thousands separators, e.g. "1500 ft"` };
   }
   const unit = Object.hasOwn(ALIASES, written) ? ALIASES[written] : written;
   if (unit === '') {
-    if (dimensionless && outOfRange(magnitude)) return { ok: false, message: rangeMessage(`"${input}"`, dimension) };
+    if (dimensionless && outOfRange(magnitude)) return { ok: false, message: rangeMessage(`"${shown}"`, dimension) };
     if (dimensionless) return { ok: true, value: magnitude };
     return {
       ok: false,
-      message: `"${input}" has no unit; write it with one, e.g. "${EXAMPLE[dimension]}" (units: ${listUnits(dimension)})`,
+      message: `"${shown}" has no unit; write it with one, e.g. "${EXAMPLE[dimension]}" (units: ${listUnits(dimension)})`,
     };
   }
   // Own keys only: "45 constructor" must not find Object.prototype.constructor.
-  if (!Object.hasOwn(UNITS[dimension], unit)) return { ok: false, message: unknownUnitMessage(input, unit, dimension) };
+  if (!Object.hasOwn(UNITS[dimension], unit)) return { ok: false, message: unknownUnitMessage(shown, shortened(unit, 30), dimension) };
   const value = magnitude * UNITS[dimension][unit];
-  if (outOfRange(value)) return { ok: false, message: rangeMessage(`"${input}"`, dimension) };
+  if (outOfRange(value)) return { ok: false, message: rangeMessage(`"${shown}"`, dimension) };
   return { ok: true, value };
 }
 
