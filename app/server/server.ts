@@ -57,22 +57,42 @@ function refuse(res: ServerResponse, status: number, code: string, message: stri
   sendJson(res, status, { ok: false, error: { code, message } });
 }
 
+/** A body this many times over the limit is not drained to its end: the connection is closed after the answer. */
+const DRAIN_FACTOR = 16;
+
+/**
+ * The body as text, or null when it is over `limit`. An oversized body is read
+ * to its end and thrown away (up to DRAIN_FACTOR times the limit), so the
+ * browser receives the "too large" answer instead of a dropped connection.
+ */
 function readBody(req: IncomingMessage, limit = MAX_BODY_BYTES): Promise<string | null> {
   return new Promise((resolveBody, reject) => {
     const chunks: Buffer[] = [];
     let size = 0;
+    let settled = false;
+    const settle = (value: string | null) => {
+      if (settled) return;
+      settled = true;
+      resolveBody(value);
+    };
     req.on('data', (chunk: Buffer) => {
       size += chunk.length;
       if (size > limit) {
-        resolveBody(null);
-        req.destroy();
+        chunks.length = 0;
+        // Far past the limit: answer now; the server closes the connection after the answer.
+        if (size > DRAIN_FACTOR * limit) settle(null);
         return;
       }
       chunks.push(chunk);
     });
-    req.on('end', () => resolveBody(Buffer.concat(chunks).toString('utf8')));
-    req.on('error', reject);
+    req.on('end', () => settle(size > limit ? null : Buffer.concat(chunks).toString('utf8')));
+    req.on('error', (error) => (settled ? undefined : reject(error)));
   });
+}
+
+/** Megabytes for messages: 2 MB. */
+function megabytes(bytes: number): string {
+  return `${Math.round((bytes / (1024 * 1024)) * 10) / 10} MB`;
 }
 
 /** The JSON body of an API call that passed the guard, or null once the refusal is sent. */
@@ -88,7 +108,8 @@ async function guardedJson(req: IncomingMessage, res: ServerResponse, options: B
   }
   const text = await readBody(req, limit);
   if (text === null) {
-    refuse(res, 413, 'too-large', `request body is over ${limit} bytes`);
+    res.setHeader('Connection', 'close');
+    refuse(res, 413, 'too-large', `The request is too large for browser mode (over ${megabytes(limit)}); nothing was saved. Shorten the notes or the concept and try again.`);
     return null;
   }
   try {
