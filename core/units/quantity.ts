@@ -91,7 +91,7 @@ export type ParsedQuantity = { ok: true; value: number } | { ok: false; message:
 export const LARGEST_MAGNITUDE = 1e60;
 export const SMALLEST_MAGNITUDE = 1e-60;
 
-function outOfRange(value: number): boolean {
+export function outOfRange(value: number): boolean {
   const size = Math.abs(value);
   return size > LARGEST_MAGNITUDE || (size !== 0 && size < SMALLEST_MAGNITUDE);
 }

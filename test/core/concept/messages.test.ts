@@ -50,3 +50,14 @@ describe('messages for hostile input', () => {
     expect(issues.find((entry) => entry.path === 'aircraft.propulsion.kind')?.message).toMatch(/…/);
   });
 });
+
+describe('plain numbers too large to compute with', () => {
+  it('refuses an aspect ratio of -1.34e154 (its square overflows double precision, max about 1.8e308), naming the field', () => {
+    expect((-1.3407807929942597e154) ** 2).toBe(Infinity);
+    const concept = trainer();
+    concept.aircraft.aero.aspectRatio = -1.3407807929942597e154;
+    const issues = issuesOf(JSON.stringify(concept));
+    expect(issues[0].path).toBe('aircraft.aero.aspectRatio');
+    expect(issues[0].message).toMatch(/too large a number to compute with/);
+  });
+});
