@@ -13,6 +13,7 @@ import type { Dispatch } from '../shared/transport';
 import { isAllowedHost, refuseApiRequest, type ApiRequestHeaders } from './guard';
 import type { PrintPdf } from './print';
 import { readStaticFile } from './static-files';
+import type { DraftStore } from './drafts';
 
 /** Concept documents are a few kilobytes; anything this large is not one. */
 export const MAX_BODY_BYTES = 2 * 1024 * 1024;
@@ -26,6 +27,8 @@ export interface BrowserServerOptions {
   dispatch: Dispatch;
   /** Prints a checked report to PDF; without it the print route says printing is not available. */
   printPdf?: PrintPdf;
+  /** Unsaved drafts of the open project, kept across restarts (POST /api/keptDrafts, /api/keepDrafts). */
+  drafts?: DraftStore;
 }
 
 export interface BrowserServer {
@@ -122,7 +125,26 @@ async function guardedJson(req: IncomingMessage, res: ServerResponse, options: B
 
 async function handleApi(req: IncomingMessage, res: ServerResponse, method: string, options: BrowserServerOptions, port: number): Promise<void> {
   const body = await guardedJson(req, res, options, port, MAX_BODY_BYTES);
-  if (body) sendJson(res, 200, await options.dispatch(method, body.payload));
+  if (!body) return;
+  if (options.drafts && (method === 'keptDrafts' || method === 'keepDrafts')) return sendJson(res, 200, draftCall(options.drafts, method, body.payload));
+  sendJson(res, 200, await options.dispatch(method, body.payload));
+}
+
+/** The page's drafts for the open project: read them, or replace them with `{ drafts: { name: draft } }`. */
+function draftCall(store: DraftStore, method: 'keptDrafts' | 'keepDrafts', payload: unknown): unknown {
+  if (method === 'keptDrafts') return { ok: true, value: store.load() };
+  const drafts = (payload as { drafts?: unknown } | undefined)?.drafts;
+  if (!drafts || typeof drafts !== 'object' || Array.isArray(drafts)) {
+    return { ok: false, error: { code: 'bad-request', message: 'drafts: must be an object of drafts by concept name', field: 'drafts' } };
+  }
+  try {
+    store.save(drafts as Record<string, unknown>);
+    return { ok: true, value: { kept: Object.keys(drafts).length } };
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    const reason = code === 'ENOSPC' ? 'the disk is full' : (code ?? (error instanceof Error ? error.message : String(error)));
+    return { ok: false, error: { code: code === 'ENOSPC' ? 'disk-full' : 'io', message: `the draft could not be kept on disk (${reason}); it stays in this page` } };
+  }
 }
 
 async function handlePrint(req: IncomingMessage, res: ServerResponse, options: BrowserServerOptions, port: number): Promise<void> {
