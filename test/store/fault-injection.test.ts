@@ -111,6 +111,8 @@ describe.skipIf(!canTrace)('a save interrupted at each disk write (strace fault 
   }, 120_000);
 });
 
-describe.runIf(!canTrace)('strace fault injection', () => {
-  it.skip(`skipped: strace is not installed or may not trace here (install it with apt-get install -y strace)`, () => {});
-});
+if (!canTrace) {
+  describe('strace fault injection', () => {
+    it.skip('skipped: strace is not installed or may not trace here (install it with apt-get install -y strace)', () => {});
+  });
+}
