@@ -25,7 +25,7 @@ function npx(bin) {
 }
 
 /**
- * Debian's Chromium (browser tests, PDF reports) and poppler-utils (pdftotext,
+ * Debian's Chromium (browser tests, PDF reports), strace (fault injection) and poppler-utils (pdftotext,
  * to read reports back). Installed when we may (root with apt), else the
  * caller prints a one-line instruction.
  */
@@ -35,6 +35,8 @@ function ensureDebianTools() {
   const missing = [];
   if (!findChromium()) missing.push('chromium');
   if (!existsSync('/usr/bin/pdftotext')) missing.push('poppler-utils');
+  // strace injects kills and a full disk at each write of a save (test/store/fault-injection.test.ts).
+  if (!existsSync('/usr/bin/strace')) missing.push('strace');
   const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
   if (missing.length > 0 && isRoot && existsSync('/usr/bin/apt-get')) {
     console.log(`\n== Installing Debian packages the tests need: ${missing.join(' ')}`);
@@ -66,6 +68,7 @@ const tools = ensureDebianTools();
 if (tools.chromium) process.env.CHROMIUM_PATH = tools.chromium;
 if (!tools.chromium) console.error('Browser tests and PDF reports need Chromium: install it with `apt-get install -y chromium` or set CHROMIUM_PATH.');
 if (!tools.pdftotext) console.error('Report tests read PDFs with pdftotext: install it with `apt-get install -y poppler-utils`.');
+if (!existsSync('/usr/bin/strace')) console.error('The fault-injection test needs strace and is skipped without it: install it with `apt-get install -y strace`.');
 
 run('Type check', npx('tsc'), ['--noEmit', '-p', 'tsconfig.json']);
 

@@ -8,6 +8,7 @@ import type { LoadingAxis } from '../../core/model';
 import { toDisplay, type UnitSystem } from '../../core/units/display';
 import type { BoundarySeries, CurveSeries, LimitSeries, OverlaySeries, SeriesCommon } from './series-types';
 import { optimumPoint } from './points';
+import { drawnIndices } from './drawn-samples';
 import { kindColour, kindDash, kindTitle } from './palette';
 
 /** Labels longer than this are written in the legend; the plot shows the id. */
@@ -23,6 +24,7 @@ export function boundarySeries(
   const curves: CurveSeries[] = [];
   const limits: LimitSeries[] = [];
   const ordered: BoundarySeries[] = [];
+  const drawn = drawnIndices(boundaries);
   for (const boundary of boundaries) {
     const nth = seenPerKind.get(boundary.kind) ?? 0;
     seenPerKind.set(boundary.kind, nth + 1);
@@ -47,7 +49,7 @@ export function boundarySeries(
       const curve: CurveSeries = {
         ...common,
         type: 'curve',
-        points: boundary.points.map(([w, y]) => [
+        points: (drawn ? drawn.flatMap((i) => (i < boundary.points.length ? [boundary.points[i]] : [])) : boundary.points).map(([w, y]) => [
           toDisplay(w, 'wingLoading', system),
           y === null || !Number.isFinite(y) ? null : toDisplay(y, axis, system),
         ]),

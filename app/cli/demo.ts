@@ -3,8 +3,7 @@
  * scenarios to start from. Without NAME, lists them; with NAME, prints that
  * concept's JSON (or writes it to FILE, never over an existing file).
  */
-import { existsSync, statSync, writeFileSync } from 'node:fs';
-import { dirname, resolve } from 'node:path';
+import { checkOutputTarget, writeWhole, type OutputTarget } from './output-file';
 import type { Command } from 'commander';
 import { DEMO_CONCEPTS, type DemoConcept } from '../../core';
 import { SIZING_CAUTION } from '../chart/caution';
@@ -15,6 +14,7 @@ import type { CliIO } from './io';
 
 export interface DemoOptions {
   out?: string;
+  force?: boolean;
 }
 
 export function registerDemo(program: Command, io: CliIO, setExitCode: SetExitCode): void {
@@ -22,7 +22,8 @@ export function registerDemo(program: Command, io: CliIO, setExitCode: SetExitCo
     .command('demo')
     .description('List the demo concepts, or print one as concept JSON to start from.')
     .argument('[name]', 'the demo to print (see the list)')
-    .option('--out <file>', 'write the concept JSON to this file instead (never overwrites)')
+    .option('--out <file>', 'write the concept JSON to this file instead (never replaces an existing file without --force)')
+    .option('--force', 'with --out: replace an existing file (never a read-only one)')
     .action((name: string | undefined, options: DemoOptions) => {
       io.out(runDemo(name, options));
       setExitCode(EXIT_OK);
@@ -38,7 +39,7 @@ export function runDemo(name: string | undefined, options: DemoOptions = {}): st
   const demo = findDemo(name);
   const json = `${JSON.stringify(demo.concept, null, 2)}\n`;
   if (options.out === undefined) return json;
-  const target = writeNew(options.out, json);
+  const target = writeNew(options.out, json, options.force === true);
   return [
     `Wrote the demo concept "${demo.title}" to ${target}; evaluate it with: loftpoint evaluate ${options.out}`,
     SIZING_CAUTION,
@@ -75,26 +76,10 @@ function firstSentence(text: string): string {
   return text.split(/(?<=\.)\s+(?=[A-Z])/)[0] ?? text;
 }
 
-/** Write a new file; an existing file is never replaced. */
-function writeNew(out: string, text: string): string {
-  const target = resolve(out);
-  if (existsSync(target)) {
-    const what = statSync(target).isDirectory() ? 'is a folder; give a file name' : 'already exists; choose another name (it was left as it was)';
-    throw new InputError(what, out, '--out');
-  }
-  try {
-    writeFileSync(target, text, { encoding: 'utf8', flag: 'wx' });
-  } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code;
-    const reason =
-      code === 'ENOENT'
-        ? `the folder ${dirname(target)} does not exist`
-        : code === 'EEXIST'
-          ? 'already exists; choose another name (it was left as it was)'
-          : code === 'EACCES' || code === 'EPERM' || code === 'EROFS'
-            ? 'cannot be written (permission denied)'
-            : `cannot be written (${code ?? String(error)})`;
-    throw new InputError(reason, out, '--out');
-  }
-  return target;
+/** Write the file; an existing file is replaced only with --force (a concept file may hold the user's own edits). */
+function writeNew(out: string, text: string, force: boolean): string {
+  const target: OutputTarget = { file: undefined, out, flag: '--out', extension: '.json', exampleName: 'concept.json', inputRole: '', force };
+  const path = checkOutputTarget(target);
+  writeWhole(target, path, text);
+  return path;
 }

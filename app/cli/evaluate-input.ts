@@ -17,7 +17,7 @@ export class ProjectReadFailure extends Error {
 }
 
 /** Service error codes that are not the user's input. */
-const NOT_INPUT = new Set(['busy', 'io', 'internal']);
+const NOT_INPUT = new Set(['busy', 'io', 'disk-full', 'internal']);
 
 export interface EvaluateInput {
   /** The file as the user named it. */

@@ -15,6 +15,7 @@ import { evaluationCsv } from './evaluate-csv';
 import { evaluationReport } from './evaluate-report';
 import type { CliIO } from './io';
 import { checkOutputTarget, oneLine, writeWhole, type OutputTarget } from './output-file';
+import { hasMark, markSvg } from './output-mark';
 
 export interface EvaluateOptions {
   version?: string;
@@ -22,6 +23,7 @@ export interface EvaluateOptions {
   csv?: boolean;
   svg?: string;
   units?: string;
+  force?: boolean;
 }
 
 export function registerEvaluate(program: Command, io: CliIO, setExitCode: SetExitCode): void {
@@ -37,6 +39,7 @@ export function registerEvaluate(program: Command, io: CliIO, setExitCode: SetEx
     .option('--csv', 'print the sampled boundaries as CSV')
     .option('--svg <out>', 'write the constraint diagram to an SVG file')
     .option('--units <system>', 'units of the report, CSV and SVG: si or us', 'si')
+    .option('--force', 'with --svg: replace an existing file even if Loftpoint did not write it (never a read-only one)')
     .action(async (file: string, options: EvaluateOptions) => {
       try {
         io.out(await runEvaluate(file, options));
@@ -63,7 +66,7 @@ async function runEvaluate(file: string, options: EvaluateOptions): Promise<stri
   if (options.json) return `${JSON.stringify(evaluation, null, 2)}\n`;
   if (options.csv) return evaluationCsv({ name, evaluation, system });
   if (options.svg !== undefined) {
-    const out = writeSvg(file, options.svg, evaluation, name, system);
+    const out = writeSvg(file, options.svg, evaluation, name, system, options.force === true);
     return `Wrote the constraint diagram of ${oneLine(name.trim() || input.source)} to ${out}\n`;
   }
   return evaluationReport({ source: input.source, design: input.design, evaluation, conceptWarnings: input.warnings, system });
@@ -75,10 +78,10 @@ function unitSystem(file: string, units: string | undefined): UnitSystem {
   throw new InputError(`must be si or us, not "${oneLine(units ?? '')}"`, file, '--units');
 }
 
-/** Writes the diagram; an existing file is replaced only when it is an SVG. */
-function writeSvg(file: string, out: string, evaluation: Evaluation, name: string, system: UnitSystem): string {
-  const target: OutputTarget = { file, out, flag: '--svg', extension: '.svg', exampleName: 'diagram.svg', inputRole: 'the file being evaluated', looksLike: (head) => /<svg[\s>]/.test(head.toString('utf8')) };
+/** Writes the diagram; an existing file is replaced only when Loftpoint wrote it as an SVG, or with --force. */
+function writeSvg(file: string, out: string, evaluation: Evaluation, name: string, system: UnitSystem, force: boolean): string {
+  const target: OutputTarget = { file, out, flag: '--svg', extension: '.svg', exampleName: 'diagram.svg', inputRole: 'the file being evaluated', isOurs: hasMark.svg, force };
   const path = checkOutputTarget(target);
-  writeWhole(target, path, constraintDiagramSvg(evaluation, { title: name, system }));
+  writeWhole(target, path, markSvg(constraintDiagramSvg(evaluation, { title: name, system })));
   return path;
 }

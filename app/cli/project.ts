@@ -6,6 +6,7 @@
  */
 import type { Command } from 'commander';
 import { readFileSync, writeFileSync, existsSync } from 'node:fs';
+import { checkOutputTarget, writeWhole, type OutputTarget } from './output-file';
 import { basename, extname } from 'node:path';
 import { StoreError } from '../store/errors';
 import {
@@ -22,7 +23,7 @@ import type { CliIO } from './io';
 import type { SetExitCode } from './io';
 
 /** Errors that are not the user's input: reported in one line with exit status 1. */
-const NOT_INPUT = new Set(['busy', 'io', 'internal']);
+const NOT_INPUT = new Set(['busy', 'io', 'disk-full', 'internal']);
 
 function versionNumber(text: string, argument: string): number {
   if (!/^\d+$/.test(text.trim()) || Number(text) < 1) {
@@ -216,8 +217,9 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .description('Export the whole project, or one version, as JSON (stdout, or --out FILE).')
     .argument('<file>', 'the project file')
     .option('--version <n>', 'export only this version')
-    .option('--out <file>', 'write to this new file instead of stdout (never overwrites)')
-    .action((file: string, options: { version?: string; out?: string }) =>
+    .option('--out <file>', 'write to this file instead of stdout (never replaces an existing file without --force)')
+    .option('--force', 'with --out: replace an existing file (never a read-only one)')
+    .action((file: string, options: { version?: string; out?: string; force?: boolean }) =>
       run(io, setExitCode, (service) => {
         const number = options.version === undefined ? undefined : versionNumber(options.version, '--version');
         service.openProject({ file, readonly: true });
@@ -227,8 +229,8 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
           io.out(text);
           return;
         }
-        if (existsSync(options.out)) throw new InputError('already exists; choose a new file name', options.out);
-        writeFileSync(options.out, text, { flag: 'wx' });
+        const target: OutputTarget = { file, out: options.out, flag: '--out', extension: '.json', exampleName: 'export.json', inputRole: 'the project file', force: options.force === true };
+        writeWhole(target, checkOutputTarget(target), text);
         io.out(`Exported ${number === undefined ? 'the project' : `version ${number}`} to ${options.out}.\n${PRELIMINARY_CAUTION}\n`);
       })(),
     );

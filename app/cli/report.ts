@@ -21,6 +21,7 @@ import { evaluationCsv } from './evaluate-csv';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
 import type { CliIO } from './io';
 import { checkOutputTarget, oneLine, writeWhole, type OutputTarget } from './output-file';
+import { hasMark, markCsv, markPdf, markPng, markSvg } from './output-mark';
 
 export interface ReportOptions {
   version?: string;
@@ -29,17 +30,18 @@ export interface ReportOptions {
   step?: string;
   samples?: string;
   seed?: string;
+  force?: boolean;
 }
 
 type OutputKind = 'html' | 'pdf' | 'svg' | 'png' | 'csv';
 
-const KINDS: Record<string, { kind: OutputKind; what: string; looksLike: (head: Buffer) => boolean }> = {
-  '.html': { kind: 'html', what: 'design-review report (HTML)', looksLike: (head) => /<!doctype html|<html[\s>]/i.test(head.toString('utf8')) },
-  '.htm': { kind: 'html', what: 'design-review report (HTML)', looksLike: (head) => /<!doctype html|<html[\s>]/i.test(head.toString('utf8')) },
-  '.pdf': { kind: 'pdf', what: 'design-review report (PDF)', looksLike: (head) => head.subarray(0, 5).toString('latin1') === '%PDF-' },
-  '.svg': { kind: 'svg', what: 'constraint diagram with bands and probability contours (SVG)', looksLike: (head) => /<svg[\s>]/.test(head.toString('utf8')) },
-  '.png': { kind: 'png', what: 'constraint diagram with bands and probability contours (PNG)', looksLike: (head) => head.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])) },
-  '.csv': { kind: 'csv', what: 'constraint boundaries (CSV)', looksLike: (head) => head.toString('utf8').startsWith('# ') },
+const KINDS: Record<string, { kind: OutputKind; what: string; isOurs: (head: Buffer, tail: Buffer) => boolean }> = {
+  '.html': { kind: 'html', what: 'design-review report (HTML)', isOurs: hasMark.html },
+  '.htm': { kind: 'html', what: 'design-review report (HTML)', isOurs: hasMark.html },
+  '.pdf': { kind: 'pdf', what: 'design-review report (PDF)', isOurs: hasMark.pdf },
+  '.svg': { kind: 'svg', what: 'constraint diagram with bands and probability contours (SVG)', isOurs: hasMark.svg },
+  '.png': { kind: 'png', what: 'constraint diagram with bands and probability contours (PNG)', isOurs: hasMark.png },
+  '.csv': { kind: 'csv', what: 'constraint boundaries (CSV)', isOurs: hasMark.csv },
 };
 
 export function registerReport(program: Command, io: CliIO, setExitCode: SetExitCode): void {
@@ -53,7 +55,8 @@ export function registerReport(program: Command, io: CliIO, setExitCode: SetExit
     )
     .argument('<file>', 'a concept JSON file, or a project file with --version')
     .option('--version <n>', 'the stored version to report (project files only)')
-    .option('--out <path>', 'the file to write: .html, .pdf, .svg, .png or .csv')
+    .option('--out <path>', 'the file to write: .html, .pdf, .svg, .png or .csv (replaces only an earlier Loftpoint output)')
+    .option('--force', 'replace an existing --out file even if Loftpoint did not write it (never a read-only one)')
     .option('--units <system>', 'units of the report: si or us', 'si')
     .option('--step <step>', 'how far each requirement is relaxed and tightened for its cost, e.g. 10%', '10%')
     .option('--samples <n>', 'Monte Carlo sample count (default: the concept’s, else 10000)')
@@ -78,7 +81,7 @@ export function registerReport(program: Command, io: CliIO, setExitCode: SetExit
     });
 }
 
-function outputKind(file: string, out: string | undefined): { target: string; kind: OutputKind; what: string; looksLike: (head: Buffer) => boolean } {
+function outputKind(file: string, out: string | undefined): { target: string; kind: OutputKind; what: string; isOurs: (head: Buffer, tail: Buffer) => boolean } {
   if (out === undefined || out.trim() === '') throw new InputError('needs the file to write, e.g. --out review.pdf (.html, .pdf, .svg, .png or .csv)', file, '--out');
   const extension = extname(out).toLowerCase();
   const known = KINDS[extension];
@@ -147,7 +150,7 @@ async function runReport(file: string, options: ReportOptions): Promise<string> 
     }
   }
   const input = await readEvaluateInput(file, options.version);
-  const target: OutputTarget = { file, out: options.out as string, flag: '--out', extension, exampleName: `review${extension}`, inputRole: 'the file being reported on', looksLike: output.looksLike };
+  const target: OutputTarget = { file, out: options.out as string, flag: '--out', extension, exampleName: `review${extension}`, inputRole: 'the file being reported on', isOurs: output.isOurs, force: options.force === true };
   checkOutputTarget(target);
   const { design } = input;
   const name = design.name.trim() || input.source;
@@ -155,14 +158,14 @@ async function runReport(file: string, options: ReportOptions): Promise<string> 
 
   let content: string | Buffer;
   if (output.kind === 'csv') {
-    content = evaluationCsv({ name, evaluation, system });
+    content = markCsv(evaluationCsv({ name, evaluation, system }));
   } else {
     const parsed = parseConcept(input.concept);
     const uncertainty = parsed.ok ? parsed.uncertainty : undefined;
     const studies = runStudies({ design, concept: input.concept, evaluation, system, ...(uncertainty ? { uncertainty } : {}), options: studyOptions });
     if (output.kind === 'svg' || output.kind === 'png') {
       const svg = reportDiagramSvg({ design, evaluation, system, studies });
-      content = output.kind === 'svg' ? svg : await svgToPng(svg, STUDY_DIAGRAM_SIZE, { binary: chromium as string });
+      content = output.kind === 'svg' ? markSvg(svg) : markPng(await svgToPng(svg, STUDY_DIAGRAM_SIZE, { binary: chromium as string }));
     } else {
       const version = options.version !== undefined ? await versionInfo(file, Number(options.version)) : undefined;
       const html = buildReport({
@@ -177,7 +180,7 @@ async function runReport(file: string, options: ReportOptions): Promise<string> 
         system,
         source: input.source,
       });
-      content = output.kind === 'html' ? html : await printPdf(html, { binary: chromium as string });
+      content = output.kind === 'html' ? html : markPdf(await printPdf(html, { binary: chromium as string }));
     }
   }
   writeWhole(target, output.target, content);

@@ -8,6 +8,7 @@ import { fileURLToPath } from 'node:url';
 import { createService, invokeService, type ProjectService } from '../service';
 import type { ProjectInfo, ServiceError } from '../shared/contract';
 import { createDispatch } from '../shared/dispatch';
+import { fileDraftStore } from './drafts';
 import { pagePolicy } from '../shared/page-policy';
 import { openOrCreateProject, userDataFolder } from '../service/first-start';
 import { chromiumPrinter } from './print';
@@ -68,7 +69,9 @@ export async function launchBrowserMode(options: LaunchOptions): Promise<Browser
       (method, request) => invokeService(service, method, request),
       pagePolicy('start `loftpoint serve --project FILE` to work on another project'),
     );
-    server = await startBrowserServer({ port: options.port, token: createLaunchToken(), rendererDir, dispatch, printPdf: chromiumPrinter() });
+    // Drafts are kept per project file in the data folder, so a restart on another port still offers them.
+    const drafts = fileDraftStore(userDataFolder(), opened.value.info.file);
+    server = await startBrowserServer({ port: options.port, token: createLaunchToken(), rendererDir, dispatch, printPdf: chromiumPrinter(), drafts });
   } catch (error) {
     await invokeService(service, 'closeProject', {});
     if (error instanceof LaunchError) throw error;

@@ -13,6 +13,7 @@ import type { Dispatch } from '../shared/transport';
 import { isAllowedHost, refuseApiRequest, type ApiRequestHeaders } from './guard';
 import type { PrintPdf } from './print';
 import { readStaticFile } from './static-files';
+import type { DraftStore } from './drafts';
 
 /** Concept documents are a few kilobytes; anything this large is not one. */
 export const MAX_BODY_BYTES = 2 * 1024 * 1024;
@@ -26,6 +27,8 @@ export interface BrowserServerOptions {
   dispatch: Dispatch;
   /** Prints a checked report to PDF; without it the print route says printing is not available. */
   printPdf?: PrintPdf;
+  /** Unsaved drafts of the open project, kept across restarts (POST /api/keptDrafts, /api/keepDrafts). */
+  drafts?: DraftStore;
 }
 
 export interface BrowserServer {
@@ -57,22 +60,42 @@ function refuse(res: ServerResponse, status: number, code: string, message: stri
   sendJson(res, status, { ok: false, error: { code, message } });
 }
 
+/** A body this many times over the limit is not drained to its end: the connection is closed after the answer. */
+const DRAIN_FACTOR = 16;
+
+/**
+ * The body as text, or null when it is over `limit`. An oversized body is read
+ * to its end and thrown away (up to DRAIN_FACTOR times the limit), so the
+ * browser receives the "too large" answer instead of a dropped connection.
+ */
 function readBody(req: IncomingMessage, limit = MAX_BODY_BYTES): Promise<string | null> {
   return new Promise((resolveBody, reject) => {
     const chunks: Buffer[] = [];
     let size = 0;
+    let settled = false;
+    const settle = (value: string | null) => {
+      if (settled) return;
+      settled = true;
+      resolveBody(value);
+    };
     req.on('data', (chunk: Buffer) => {
       size += chunk.length;
       if (size > limit) {
-        resolveBody(null);
-        req.destroy();
+        chunks.length = 0;
+        // Far past the limit: answer now; the server closes the connection after the answer.
+        if (size > DRAIN_FACTOR * limit) settle(null);
         return;
       }
       chunks.push(chunk);
     });
-    req.on('end', () => resolveBody(Buffer.concat(chunks).toString('utf8')));
-    req.on('error', reject);
+    req.on('end', () => settle(size > limit ? null : Buffer.concat(chunks).toString('utf8')));
+    req.on('error', (error) => (settled ? undefined : reject(error)));
   });
+}
+
+/** Megabytes for messages: 2 MB. */
+function megabytes(bytes: number): string {
+  return `${Math.round((bytes / (1024 * 1024)) * 10) / 10} MB`;
 }
 
 /** The JSON body of an API call that passed the guard, or null once the refusal is sent. */
@@ -88,7 +111,8 @@ async function guardedJson(req: IncomingMessage, res: ServerResponse, options: B
   }
   const text = await readBody(req, limit);
   if (text === null) {
-    refuse(res, 413, 'too-large', `request body is over ${limit} bytes`);
+    res.setHeader('Connection', 'close');
+    refuse(res, 413, 'too-large', `The request is too large for browser mode (over ${megabytes(limit)}); nothing was saved. Shorten the notes or the concept and try again.`);
     return null;
   }
   try {
@@ -101,7 +125,26 @@ async function guardedJson(req: IncomingMessage, res: ServerResponse, options: B
 
 async function handleApi(req: IncomingMessage, res: ServerResponse, method: string, options: BrowserServerOptions, port: number): Promise<void> {
   const body = await guardedJson(req, res, options, port, MAX_BODY_BYTES);
-  if (body) sendJson(res, 200, await options.dispatch(method, body.payload));
+  if (!body) return;
+  if (options.drafts && (method === 'keptDrafts' || method === 'keepDrafts')) return sendJson(res, 200, draftCall(options.drafts, method, body.payload));
+  sendJson(res, 200, await options.dispatch(method, body.payload));
+}
+
+/** The page's drafts for the open project: read them, or replace them with `{ drafts: { name: draft } }`. */
+function draftCall(store: DraftStore, method: 'keptDrafts' | 'keepDrafts', payload: unknown): unknown {
+  if (method === 'keptDrafts') return { ok: true, value: store.load() };
+  const drafts = (payload as { drafts?: unknown } | undefined)?.drafts;
+  if (!drafts || typeof drafts !== 'object' || Array.isArray(drafts)) {
+    return { ok: false, error: { code: 'bad-request', message: 'drafts: must be an object of drafts by concept name', field: 'drafts' } };
+  }
+  try {
+    store.save(drafts as Record<string, unknown>);
+    return { ok: true, value: { kept: Object.keys(drafts).length } };
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    const reason = code === 'ENOSPC' ? 'the disk is full' : (code ?? (error instanceof Error ? error.message : String(error)));
+    return { ok: false, error: { code: code === 'ENOSPC' ? 'disk-full' : 'io', message: `the draft could not be kept on disk (${reason}); it stays in this page` } };
+  }
 }
 
 async function handlePrint(req: IncomingMessage, res: ServerResponse, options: BrowserServerOptions, port: number): Promise<void> {

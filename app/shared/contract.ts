@@ -42,6 +42,8 @@ export type ServiceErrorCode =
   | 'name-taken'
   /** The file could not be read or written for a reason of the operating system (see message). */
   | 'io'
+  /** The disk (or the user's quota) is full: the save was not made; versions saved before are kept. */
+  | 'disk-full'
   /** A program fault; the message says what failed. Nothing already saved is lost. */
   | 'internal';
 

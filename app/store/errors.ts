@@ -45,7 +45,14 @@ export function fromSqliteError(error: unknown, file: string): unknown {
   if (code.startsWith('SQLITE_CORRUPT') || code === 'SQLITE_NOTADB') {
     return new StoreError('corrupt', `${file}: the project file is damaged (${error.message}); it was not changed`, file);
   }
-  if (code.startsWith('SQLITE_IOERR') || code.startsWith('SQLITE_CANTOPEN') || code === 'SQLITE_FULL' || code === 'SQLITE_PERM') {
+  if (code === 'SQLITE_FULL') {
+    return new StoreError(
+      'disk-full',
+      `${file}: the disk is full; this change was not saved, and every version saved before is kept in the project file; free some space and try again`,
+      file,
+    );
+  }
+  if (code.startsWith('SQLITE_IOERR') || code.startsWith('SQLITE_CANTOPEN') || code === 'SQLITE_PERM') {
     return new StoreError('io', `${file}: cannot read or write the project file (${error.message})`, file);
   }
   return new StoreError('internal', `${file}: ${error.message} (${code})`, file);

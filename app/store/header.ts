@@ -1,6 +1,6 @@
 /**
  * Recognises a project file from its first bytes, before SQLite touches it,
- * so an empty, truncated or foreign file is reported and never written to.
+ * so an empty or foreign file is reported and never written to.
  * Offsets from the SQLite file format description (sqlite.org/fileformat.html,
  * section 1.3 "The Database Header").
  */
@@ -40,13 +40,8 @@ export function inspectHeader(file: string, sizeBytes: number): HeaderVerdict {
   if (pageSize < 512 || (pageSize & (pageSize - 1)) !== 0) {
     return { kind: 'truncated', detail: `page size ${rawPageSize} in the header is not valid` };
   }
-  if (sizeBytes % pageSize !== 0) {
-    return { kind: 'truncated', detail: `${sizeBytes} bytes is not a whole number of ${pageSize}-byte pages` };
-  }
-  // The in-header page count is valid when the change counter matches "version-valid-for" (offsets 24 and 92).
-  const pageCount = header.readUInt32BE(28);
-  if (header.readUInt32BE(24) === header.readUInt32BE(92) && pageCount * pageSize > sizeBytes) {
-    return { kind: 'truncated', detail: `${sizeBytes} bytes where the header promises ${pageCount * pageSize}` };
-  }
+  // The file's length is not judged here: while a -wal file holds committed pages, a main file
+  // shorter than its in-header page count is a normal state SQLite recovers from
+  // (sqlite.org/wal.html, "Checkpointing"). SQLite's own checks judge damage after opening.
   return { kind: 'project', pageSize };
 }

@@ -66,11 +66,14 @@ export function openProjectFile(path: string, options: { readonly?: boolean } = 
     throw new StoreError('io', `${file}: cannot read the project file (${code ?? String(error)})`, file);
   }
 
+  // Only what the first bytes say for certain (empty, not SQLite, another program's) is judged
+  // before SQLite opens the file: a main file shorter than its header promises is normal while
+  // the -wal file beside it holds the pages, and SQLite's own checks judge damage after opening.
   const verdict = inspectHeader(file, size);
   if (verdict.kind === 'empty' || verdict.kind === 'not-sqlite' || verdict.kind === 'foreign') {
     throw describeForeign(file, verdict.kind);
   }
-  if (verdict.kind === 'truncated') {
+  if (verdict.kind === 'truncated' && !hasJournal(file)) {
     throw new StoreError('corrupt', `${file}: the project file is truncated or damaged (${verdict.detail}); it was not changed`, file);
   }
 
@@ -79,11 +82,7 @@ export function openProjectFile(path: string, options: { readonly?: boolean } = 
   let db: Connection | undefined;
   try {
     db = readonly ? connectReadOnly(file) : connect(file, { fileMustExist: true, timeout: BUSY_TIMEOUT_MS });
-    if (!readonly) {
-      db.pragma('journal_mode = WAL');
-      db.pragma('synchronous = FULL');
-    }
-    db.pragma('foreign_keys = ON');
+    // Accepted first, written to after: every check below only reads.
     verify(db, file);
     let schemaVersion = db.pragma('user_version', { simple: true }) as number;
     if (schemaVersion > SCHEMA_VERSION) {
@@ -93,6 +92,14 @@ export function openProjectFile(path: string, options: { readonly?: boolean } = 
         file,
       );
     }
+    if (schemaVersion < 1 || !hasTable(db, 'project')) {
+      throw new StoreError('corrupt', `${file}: carries the Loftpoint mark but holds no project tables (damaged or unfinished); it was not changed`, file);
+    }
+    if (!readonly) {
+      if (String(db.pragma('journal_mode', { simple: true })).toLowerCase() !== 'wal') db.pragma('journal_mode = WAL');
+      db.pragma('synchronous = FULL');
+    }
+    db.pragma('foreign_keys = ON');
     if (schemaVersion < SCHEMA_VERSION) {
       if (readonly) db = inMemoryCopy(db);
       schemaVersion = migrate(db);
@@ -102,6 +109,15 @@ export function openProjectFile(path: string, options: { readonly?: boolean } = 
     db?.close();
     throw fromSqliteError(error, file);
   }
+}
+
+/** Whether a -wal or -journal file with content lies beside `file` (SQLite reads it on opening). */
+function hasJournal(file: string): boolean {
+  return [`${file}-wal`, `${file}-journal`].some((path) => existsSync(path) && statSync(path).size > 0);
+}
+
+function hasTable(db: Connection, name: string): boolean {
+  return db.prepare("SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = ?").get(name) !== undefined;
 }
 
 /**

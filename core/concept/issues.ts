@@ -8,16 +8,17 @@ import { PROPULSION_KINDS, REQUIREMENT_KINDS } from '../model';
 import { fieldPath, type ConceptIssue } from './format';
 import { fieldsAt, kindsWithField } from './fields';
 import { closestName } from './suggest';
+import { shortened } from '../shortened';
 
 type ZodIssue = z.core.$ZodIssue;
 
-const show = (value: unknown): string => (typeof value === 'string' ? JSON.stringify(value) : String(value));
+const show = (value: unknown): string => shortened(typeof value === 'string' ? JSON.stringify(value) : String(value));
 
 function kindOf(value: unknown): string {
   if (value === null) return 'null';
   if (Array.isArray(value)) return 'a list';
   if (typeof value === 'object') return 'an object';
-  if (typeof value === 'string') return `a string (${JSON.stringify(value)})`;
+  if (typeof value === 'string') return `a string (${shortened(JSON.stringify(value))})`;
   return `${typeof value === 'number' ? 'a number' : typeof value === 'boolean' ? 'true/false' : typeof value} (${String(value)})`;
 }
 
@@ -88,6 +89,7 @@ function messageFor(issue: ZodIssue, path: readonly PropertyKey[]): string {
       return issue.discriminator === 'kind' ? discriminatorMessage(issue) : 'does not match any accepted form';
     case 'invalid_value': {
       const isPropulsion = path.join('/') === 'aircraft/propulsion/kind';
+      if (isPropulsion && issue.input === undefined) return `is missing; give the propulsion kind, one of ${issue.values.map((v) => String(v)).join(', ')}`;
       const guess = isPropulsion && typeof issue.input === 'string' ? closestName(issue.input, PROPULSION_KINDS) : undefined;
       const what = isPropulsion ? `unknown propulsion kind ${show(issue.input)}; expected` : `must be`;
       return `${what} one of ${issue.values.map((v) => String(v)).join(', ')}${guess ? ` (did you mean "${guess}"?)` : isPropulsion ? '' : ` (got ${show(issue.input)})`}`;

@@ -24,9 +24,16 @@ function describeAt(text: string, i: number): string {
   return `unexpected ${JSON.stringify(c)}`;
 }
 
+/** How deep objects and lists may nest; a concept needs fewer than ten levels. */
+export const MAX_NESTING = 256;
+
 /** Check the text's grammar; throws a Mistake at the first error. */
 function scan(text: string): void {
   let i = 0;
+  let depth = 0;
+  const enter = () => {
+    if (++depth > MAX_NESTING) fail(i, `objects and lists are nested more than ${MAX_NESTING} levels deep; a concept needs only a few levels`);
+  };
   const path: PropertyKey[] = [];
   const fail = (at: number, reason: string, where?: PropertyKey[]): never => {
     throw new Mistake(at, reason, where);
@@ -68,10 +75,11 @@ function scan(text: string): void {
     expect('a value');
   };
   const object = (): void => {
+    enter();
     i++;
     const keys = new Set<string>();
     space();
-    if (text[i] === '}') return void i++;
+    if (text[i] === '}') return void (depth--, i++);
     for (;;) {
       space();
       if (text[i] === '}') fail(i, 'a comma before "}" (trailing commas are not allowed in JSON)');
@@ -92,14 +100,15 @@ function scan(text: string): void {
       path.pop();
       space();
       if (text[i] === ',') i++;
-      else if (text[i] === '}') return void i++;
+      else if (text[i] === '}') return void (depth--, i++);
       else expect(`"," or "}" after the value of "${key}"`);
     }
   };
   const array = (): void => {
+    enter();
     i++;
     space();
-    if (text[i] === ']') return void i++;
+    if (text[i] === ']') return void (depth--, i++);
     for (let n = 0; ; n++) {
       space();
       if (text[i] === ']') fail(i, 'a comma before "]" (trailing commas are not allowed in JSON)');
@@ -108,7 +117,7 @@ function scan(text: string): void {
       path.pop();
       space();
       if (text[i] === ',') i++;
-      else if (text[i] === ']') return void i++;
+      else if (text[i] === ']') return void (depth--, i++);
       else expect('"," or "]" in a list');
     }
   };

@@ -12,6 +12,7 @@ import { parseJsonText } from './json-text';
 import { migrateConcept } from './migrate';
 import { resolveConcept } from './resolve';
 import { conceptSchema, type ConceptJson } from './schema';
+import { LARGEST_MAGNITUDE, SMALLEST_MAGNITUDE, outOfRange } from '../units/quantity';
 import { resolveUncertainty, type UncertainParameter } from '../studies/uncertainty-schema';
 
 /** The concept's `uncertainty` block resolved against its design. */
@@ -30,10 +31,34 @@ export type ParsedConcept =
  * document as written (after any format migration), with no defaults filled
  * in, so saving it back keeps the user's text.
  */
+/**
+ * Plain numbers too large or too small to compute with (the limits of
+ * parseQuantity), named by field before the schema looks at them: squares and
+ * products of them would overflow to Infinity.
+ */
+function extremeNumbers(document: unknown): ConceptIssue[] {
+  const issues: ConceptIssue[] = [];
+  const stack: Array<{ value: unknown; path: PropertyKey[] }> = [{ value: document, path: [] }];
+  while (stack.length > 0 && issues.length < 10) {
+    const { value, path } = stack.pop()!;
+    if (typeof value === 'number' && Number.isFinite(value) && outOfRange(value)) {
+      const size = Math.abs(value) > 1 ? 'large' : 'small';
+      issues.push({ path: fieldPath(path), message: `${value} is too ${size} a number to compute with (magnitudes from ${SMALLEST_MAGNITUDE} to ${LARGEST_MAGNITUDE}); write a realistic value` });
+    } else if (Array.isArray(value)) {
+      for (let i = value.length - 1; i >= 0; i--) stack.push({ value: value[i], path: [...path, i] });
+    } else if (value !== null && typeof value === 'object') {
+      for (const key of Object.keys(value).reverse()) stack.push({ value: (value as Record<string, unknown>)[key], path: [...path, key] });
+    }
+  }
+  return issues;
+}
+
 export function parseConcept(input: unknown): ParsedConcept {
   try {
     const migrated = migrateConcept(input);
     if (!migrated.ok) return migrated;
+    const extreme = extremeNumbers(migrated.concept);
+    if (extreme.length) return { ok: false, issues: extreme };
     const checked = conceptSchema.safeParse(migrated.concept, { reportInput: true });
     if (!checked.success) return { ok: false, issues: translateIssues(checked.error.issues, migrated.concept) };
     const issues = checkConcept(checked.data);

@@ -16,6 +16,7 @@ import {
   PSF_PA,
   RANKINE_K,
 } from './factors';
+import { shortened } from '../shortened';
 
 export type Dimension =
   | 'mass'
@@ -81,6 +82,24 @@ export const EXAMPLE: Record<Dimension, string> = {
 
 export type ParsedQuantity = { ok: true; value: number } | { ok: false; message: string };
 
+/**
+ * Magnitudes (in SI) the methods can compute with: squares, cubes and
+ * products of such values stay finite in double precision (largest about
+ * 1.8e308, smallest normal about 2.2e-308, IEEE 754). Anything outside is
+ * refused as input rather than overflowing to Infinity later.
+ */
+export const LARGEST_MAGNITUDE = 1e60;
+export const SMALLEST_MAGNITUDE = 1e-60;
+
+export function outOfRange(value: number): boolean {
+  const size = Math.abs(value);
+  return size > LARGEST_MAGNITUDE || (size !== 0 && size < SMALLEST_MAGNITUDE);
+}
+
+function rangeMessage(written: string, dimension: Dimension): string {
+  return `${written} is too ${Math.abs(Number.parseFloat(written.replace(/^"/, ''))) < 1 ? 'small' : 'large'} a number to compute with (magnitudes from 1e-60 to 1e60 in SI units); write a realistic value, e.g. "${EXAMPLE[dimension]}"`;
+}
+
 const NUMBER = /^\s*([+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)\s*(.*?)\s*$/;
 
 /** Spellings that mean the same unit. */
@@ -118,6 +137,7 @@ export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuant
   const dimensionless = dimension === 'fraction' || dimension === 'thrustToWeight';
   if (typeof input === 'number') {
     if (!Number.isFinite(input)) return { ok: false, message: `is ${input}; give a finite number` };
+    if (dimensionless && outOfRange(input)) return { ok: false, message: rangeMessage(String(input), dimension) };
     if (dimensionless) return { ok: true, value: input };
     return {
       ok: false,
@@ -127,29 +147,33 @@ export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuant
   if (typeof input !== 'string') {
     return { ok: false, message: `must be a string with a unit, e.g. "${EXAMPLE[dimension]}"` };
   }
+  const shown = shortened(input);
   const match = NUMBER.exec(input);
   if (!match) {
-    return { ok: false, message: `"${input}" is not a number with a unit, e.g. "${EXAMPLE[dimension]}"` };
+    return { ok: false, message: `"${shown}" is not a number with a unit, e.g. "${EXAMPLE[dimension]}"` };
   }
   const magnitude = Number(match[1]);
   if (!Number.isFinite(magnitude)) {
-    return { ok: false, message: `"${input}" is too large a number; write a finite value, e.g. "${EXAMPLE[dimension]}"` };
+    return { ok: false, message: `"${shown}" is too large a number; write a finite value, e.g. "${EXAMPLE[dimension]}"` };
   }
   const written = match[2];
   if (/^,\d/.test(written)) {
-    return { ok: false, message: `"${input}": write the number without thousands separators, e.g. "1500 ft"` };
+    return { ok: false, message: `"${shown}": write the number without thousands separators, e.g. "1500 ft"` };
   }
   const unit = Object.hasOwn(ALIASES, written) ? ALIASES[written] : written;
   if (unit === '') {
+    if (dimensionless && outOfRange(magnitude)) return { ok: false, message: rangeMessage(`"${shown}"`, dimension) };
     if (dimensionless) return { ok: true, value: magnitude };
     return {
       ok: false,
-      message: `"${input}" has no unit; write it with one, e.g. "${EXAMPLE[dimension]}" (units: ${listUnits(dimension)})`,
+      message: `"${shown}" has no unit; write it with one, e.g. "${EXAMPLE[dimension]}" (units: ${listUnits(dimension)})`,
     };
   }
   // Own keys only: "45 constructor" must not find Object.prototype.constructor.
-  if (!Object.hasOwn(UNITS[dimension], unit)) return { ok: false, message: unknownUnitMessage(input, unit, dimension) };
-  return { ok: true, value: magnitude * UNITS[dimension][unit] };
+  if (!Object.hasOwn(UNITS[dimension], unit)) return { ok: false, message: unknownUnitMessage(shown, shortened(unit, 30), dimension) };
+  const value = magnitude * UNITS[dimension][unit];
+  if (outOfRange(value)) return { ok: false, message: rangeMessage(`"${shown}"`, dimension) };
+  return { ok: true, value };
 }
 
 /** Say what the unit is if it belongs elsewhere, and what to write instead. */

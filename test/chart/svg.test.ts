@@ -107,3 +107,12 @@ describe('constraintDiagramSvg', () => {
     expect(svg).not.toMatch(/NaN|undefined|Infinity/);
   });
 });
+
+describe('SVG numbers', () => {
+  it('refuses a coordinate that is not finite rather than writing Infinity or NaN (not valid SVG lengths, SVG 1.1 §4.2 "number")', async () => {
+    const { n } = await import('../../app/chart/svg-number');
+    expect(n(12.345)).toBe('12.35');
+    expect(() => n(Infinity)).toThrow(/not a finite number/);
+    expect(() => n(Number.NaN)).toThrow(/not a finite number/);
+  });
+});

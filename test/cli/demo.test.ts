@@ -3,7 +3,7 @@
  * Each printed concept must read back through the concept parser and
  * evaluate, and a written file must never replace an existing one.
  */
-import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Command } from 'commander';
@@ -74,8 +74,21 @@ describe('runDemo', () => {
     expect(message).toMatch(CAUTION);
     expect(JSON.parse(readFileSync(out, 'utf8'))).toEqual(DEMO_CONCEPTS[1].concept);
     const error = inputError(() => runDemo(DEMO_CONCEPTS[0].slug, { out }));
-    expect(error.line()).toBe(`${out}: --out: already exists; choose another name (it was left as it was)`);
+    expect(error.line()).toBe(`--out: ${out} exists; it was left as it was (choose another name, or add --force to replace it)`);
     expect(JSON.parse(readFileSync(out, 'utf8'))).toEqual(DEMO_CONCEPTS[1].concept);
+    // --force replaces it; the folder holds no temporary file afterwards.
+    runDemo(DEMO_CONCEPTS[0].slug, { out, force: true });
+    expect(JSON.parse(readFileSync(out, 'utf8'))).toEqual(DEMO_CONCEPTS[0].concept);
+    expect(readdirSync(dir).filter((name) => name.endsWith('.tmp'))).toEqual([]);
+  });
+
+  it('never replaces a read-only file, even with --force, and says so', () => {
+    const out = join(dir, 'locked.json');
+    writeFileSync(out, '{"mine": true}\n');
+    chmodSync(out, 0o444);
+    const error = inputError(() => runDemo(DEMO_CONCEPTS[0].slug, { out, force: true }));
+    expect(error.line()).toMatch(/read-only; it was left as it was \(even --force never replaces a read-only file\)/);
+    expect(readFileSync(out, 'utf8')).toBe('{"mine": true}\n');
   });
 
   it('refuses --out into a folder that does not exist, and --out without a name', () => {
@@ -86,7 +99,7 @@ describe('runDemo', () => {
   });
 
   it('refuses --out naming a folder', () => {
-    expect(inputError(() => runDemo(DEMO_CONCEPTS[0].slug, { out: dir })).line()).toMatch(/--out: is a folder/);
+    expect(inputError(() => runDemo(DEMO_CONCEPTS[0].slug, { out: dir })).line()).toMatch(/--out: .* is a folder/);
   });
 });
 

@@ -5,7 +5,7 @@
  * DESIGN.md ("The evaluation"); unit factors from NIST SP 811.
  */
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { csvParse } from 'd3';
@@ -304,6 +304,38 @@ describe('loftpoint evaluate FILE --svg OUT', () => {
     writeFileSync(notes, 'design review notes');
     await expectInputError(['evaluate', demoFile('trainer'), '--svg', notes], demoFile('trainer'), '--svg', /not an SVG file written by Loftpoint; it was left as it was/);
     expect(readFileSync(notes, 'utf8')).toBe('design review notes');
+  });
+
+  it('never replaces a file Loftpoint did not write, even one holding <svg, nor a read-only earlier SVG; --force replaces only the former', async () => {
+    const page = join(dir, 'page.html');
+    const drawing = join(dir, 'drawing.svg');
+    const html = '<!doctype html><html><body><svg width="10"></svg></body></html>';
+    const svg = '<svg xmlns="http://www.w3.org/2000/svg"><rect width="5" height="5"/></svg>';
+    writeFileSync(page, html);
+    writeFileSync(drawing, svg);
+    await expectInputError(['evaluate', demoFile('trainer'), '--svg', page], demoFile('trainer'), '--svg', /not an SVG file written by Loftpoint; it was left as it was \(choose another name, or add --force to replace it\)/);
+    await expectInputError(['evaluate', demoFile('trainer'), '--svg', drawing], demoFile('trainer'), '--svg', /add --force to replace it/);
+    expect(readFileSync(page, 'utf8')).toBe(html);
+    expect(readFileSync(drawing, 'utf8')).toBe(svg);
+
+    expect((await run('evaluate', demoFile('trainer'), '--svg', drawing, '--force')).code).toBe(0);
+    expect(readFileSync(drawing, 'utf8')).toContain('Written by Loftpoint');
+
+    const locked = join(dir, 'locked.svg');
+    expect((await run('evaluate', demoFile('trainer'), '--svg', locked)).code).toBe(0);
+    const before = readFileSync(locked, 'utf8');
+    chmodSync(locked, 0o444);
+    for (const extra of [[], ['--force']]) {
+      await expectInputError(['evaluate', demoFile('survey-drone'), '--svg', locked, ...extra], demoFile('survey-drone'), '--svg', /read-only; it was left as it was \(even --force never replaces a read-only file\)/);
+    }
+    expect(readFileSync(locked, 'utf8')).toBe(before);
+  });
+
+  it('refuses a take-off mass of 1e308 lb as input (its weight overflows double precision), naming the field', async () => {
+    const file = variant('huge-mass', (concept) => {
+      concept.aircraft.takeoffMass = '1e308 lb';
+    });
+    await expectInputError(['evaluate', file, '--json'], file, 'aircraft.takeoffMass', /too large a number to compute with/);
   });
 
   it('refuses a folder that does not exist, writing nothing', async () => {

@@ -133,7 +133,8 @@ describe('loftpoint report FILE --out PATH', () => {
     expect(rows.columns[0]).toBe('wing loading [N/m^2]');
     expect(rows.columns).toContain('cruise [W/N]');
     const { stdout: evaluated } = await run('evaluate', trainer, '--csv');
-    expect(text).toBe(evaluated);
+    // The file carries Loftpoint's mark on its first line, then exactly what evaluate --csv prints.
+    expect(text).toBe(`# Written by Loftpoint\n${evaluated}`);
   });
 
   it('replaces its own earlier output, but nothing else', async () => {

@@ -82,9 +82,16 @@ describe('startBrowserServer', () => {
     expect(calls.length).toBe(before);
   });
 
-  it('refuses a body over the limit', async () => {
-    const answer = await call('/api/saveVersion', { method: 'POST', headers: api(), body: `"${'x'.repeat(MAX_BODY_BYTES + 10)}"` }).catch(() => ({ status: 413, headers: {}, body: '' }));
+  it('answers a body over the limit with "too large" (HTTP 413, RFC 9110 §15.5.14), not a dropped connection', async () => {
+    const before = calls.length;
+    const answer = await call('/api/saveVersion', { method: 'POST', headers: api(), body: `"${'x'.repeat(MAX_BODY_BYTES + 10)}"` });
     expect(answer.status).toBe(413);
+    const result = JSON.parse(answer.body);
+    expect(result).toMatchObject({ ok: false, error: { code: 'too-large' } });
+    expect(result.error.message).toMatch(/too large for browser mode \(over 2 MB\); nothing was saved/);
+    expect(calls.length).toBe(before);
+    // The server still answers afterwards.
+    expect((await call('/')).status).toBe(200);
   });
 
   it('refuses the page itself on a foreign Host (DNS rebinding)', async () => {

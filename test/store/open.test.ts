@@ -132,6 +132,35 @@ describe('openProjectFile on files that are not sound projects', () => {
     expect(fingerprint(file)).toBe(before);
   });
 
+  it('refuses a newer-schema file in rollback-journal mode without switching it to WAL (header bytes 18-19 stay 1)', () => {
+    const file = demoProject(freshFolder());
+    const db = new Database(file);
+    db.pragma('journal_mode = DELETE');
+    db.pragma(`user_version = ${SCHEMA_VERSION + 1}`);
+    db.close();
+    const before = fingerprint(file);
+    expect(openError(file).code).toBe('newer-schema');
+    expect(fingerprint(file)).toBe(before);
+    // File format version numbers at offsets 18 and 19: 1 = rollback journal, 2 = WAL (sqlite.org/fileformat.html, 1.3.3).
+    expect([...readFileSync(file).subarray(18, 20)]).toEqual([1, 1]);
+  });
+
+  it('refuses a SQLite file with the Loftpoint application id but no tables, and adds nothing to it', () => {
+    const file = join(freshFolder(), 'marked-empty.loftpoint');
+    const db = new Database(file);
+    db.pragma('journal_mode = DELETE');
+    db.pragma(`application_id = ${APPLICATION_ID}`);
+    db.close();
+    const before = fingerprint(file);
+    const error = openError(file);
+    expect(error.code).toBe('corrupt');
+    expect(error.message).toContain('no project tables');
+    expect(fingerprint(file)).toBe(before);
+    const check = new Database(file, { readonly: true });
+    expect(check.prepare("SELECT count(*) AS n FROM sqlite_master").get()).toEqual({ n: 0 });
+    check.close();
+  });
+
   it('keeps the service usable after a failed open (no crash, the previous project stays closed cleanly)', () => {
     const folder = freshFolder();
     const good = demoProject(folder);

@@ -24,6 +24,45 @@ export interface Connection {
   printPdf(html: string): Promise<Uint8Array>;
   /** Tells the desktop shell the page's units and unsaved state; nothing to tell elsewhere. */
   reportWindowState?(state: WindowStateReport): void;
+  /** Browser mode: unsaved drafts kept by the server per project file, so a restart on a new port still offers them. */
+  drafts?: DraftMirror;
+}
+
+export interface DraftMirror {
+  /** The drafts the server kept for the open project, by concept name; {} when none or unreachable. */
+  load(): Promise<Record<string, unknown>>;
+  /** Replaces them; failures are quiet (the draft stays in the page). */
+  save(drafts: Record<string, unknown>): Promise<void>;
+}
+
+export function httpDrafts(token: string, fetcher: typeof fetch = fetch): DraftMirror {
+  const post = async (method: string, body: unknown): Promise<unknown> => {
+    const response = await fetcher(`./api/${method}`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
+      body: JSON.stringify(body),
+      credentials: 'same-origin',
+      cache: 'no-store',
+    });
+    return response.json();
+  };
+  return {
+    async load() {
+      try {
+        const result = (await post('keptDrafts', {})) as { ok?: boolean; value?: unknown };
+        return result.ok && result.value && typeof result.value === 'object' ? (result.value as Record<string, unknown>) : {};
+      } catch {
+        return {};
+      }
+    },
+    async save(drafts) {
+      try {
+        await post('keepDrafts', { drafts });
+      } catch {
+        // The server is away: the draft stays in the page and its storage.
+      }
+    },
+  };
 }
 
 declare global {
@@ -158,5 +197,5 @@ export function connect(): Connection {
       ...local,
     };
   }
-  return { mode: 'browser', service: httpService(token), ...local, printPdf: httpPrinter(token) };
+  return { mode: 'browser', service: httpService(token), ...local, printPdf: httpPrinter(token), drafts: httpDrafts(token) };
 }

@@ -122,6 +122,7 @@ export class ProjectState {
       return;
     }
     this.project = project.value;
+    await this.#restoreKeptDrafts();
     await this.refreshConcepts();
     const remembered = this.#rememberedConcept();
     const first = this.concepts.find((concept) => concept.name === remembered) ?? this.concepts.find((concept) => concept.latestVersion !== null);
@@ -308,15 +309,43 @@ export class ProjectState {
     this.comparison = { result: result.value, older: older.value, newer: newer.value, olderEvaluation };
   }
 
+  /** Browser mode: drafts the server kept for this project file (a restart starts on a new origin with empty storage). */
+  async #restoreKeptDrafts(): Promise<void> {
+    const mirror = this.connection.drafts;
+    if (!mirror || !this.project) return;
+    const kept = await mirror.load();
+    try {
+      const all = JSON.parse(localStorage.getItem(DRAFT_KEY) ?? '{}') as Record<string, unknown>;
+      for (const [name, draft] of Object.entries(kept)) {
+        const key = `${this.project.file}\n${name}`;
+        if (!(key in all)) all[key] = draft;
+      }
+      localStorage.setItem(DRAFT_KEY, JSON.stringify(all));
+    } catch {
+      // Storage disabled: nothing to offer.
+    }
+  }
+
+  /** Sends this project's stored drafts to the server (browser mode), by concept name. */
+  #mirrorDrafts(all: Record<string, unknown>): void {
+    const mirror = this.connection.drafts;
+    if (!mirror || !this.project) return;
+    const prefix = `${this.project.file}\n`;
+    const mine = Object.fromEntries(Object.entries(all).filter(([key]) => key.startsWith(prefix)).map(([key, draft]) => [key.slice(prefix.length), draft]));
+    void mirror.save(mine);
+  }
+
   /** Keeps the draft in local storage so a reload does not lose unsaved work. */
   storeDraft(): void {
     if (this.viewing !== null || this.conceptName === null || !this.project) return;
     const key = `${this.project.file}\n${this.conceptName}`;
     try {
       const all = JSON.parse(localStorage.getItem(DRAFT_KEY) ?? '{}') as Record<string, unknown>;
+      const had = key in all;
       if (this.dirty) all[key] = { document: this.workspace.document, parent: this.parent };
       else delete all[key];
       localStorage.setItem(DRAFT_KEY, JSON.stringify(all));
+      if (this.dirty || had) this.#mirrorDrafts(all);
     } catch {
       // Storage full or disabled: the draft stays in the page.
     }
@@ -343,6 +372,7 @@ export class ProjectState {
       const all = JSON.parse(localStorage.getItem(DRAFT_KEY) ?? '{}') as Record<string, unknown>;
       delete all[`${this.project.file}\n${name}`];
       localStorage.setItem(DRAFT_KEY, JSON.stringify(all));
+      this.#mirrorDrafts(all);
     } catch {
       // Nothing to forget.
     }
