@@ -2,7 +2,7 @@
  * The parabolic drag polar with a linear term, C_D = C_D0 + K1 C_L + K C_L^2,
  * for one aerodynamic configuration.
  */
-import type { Aircraft } from '../model';
+import type { Aircraft } from '../aircraft';
 
 /** A configuration's polar with the induced-drag factor worked out. */
 export interface Polar {

@@ -4,9 +4,19 @@
  */
 import { stallSpeed } from '../aero/speeds';
 import { G0 } from '../units/factors';
-import type { Aircraft, Boundary, TakeoffGroundRollRequirement } from '../model';
+import type { Aircraft } from '../aircraft';
+import type { BoundaryOf } from '../boundary';
+import type { RequirementCommon } from '../requirements/common';
 import { shaftPowerLoading } from '../propulsion/propeller';
 import { flightCondition } from './flight-condition';
+
+export interface TakeoffGroundRollRequirement extends RequirementCommon {
+  kind: 'takeoff-ground-roll';
+  distanceM: number;
+  rollingFriction: number;
+  clGroundRun: number;
+  liftoffSpeedFactor: number;
+}
 
 /** Speed at which the mean forces are taken, as a fraction of V_LOF. */
 export const MEAN_ROLL_SPEED_FRACTION = 0.7;
@@ -17,7 +27,7 @@ export const MEAN_ROLL_SPEED_FRACTION = 0.7;
  * field density (Raymer ch. 17; METHODS.md section 6). Propellers: x 0.7 V_LOF / eta.
  * The jet boundary is linear in w since qbar/w is constant.
  */
-export function takeoffGroundRollBoundary(requirement: TakeoffGroundRollRequirement, aircraft: Aircraft): Boundary {
+export function takeoffGroundRollBoundary(requirement: TakeoffGroundRollRequirement, aircraft: Aircraft): BoundaryOf<'takeoff-ground-roll'> {
   const c = flightCondition(requirement, aircraft);
   const { polar } = c;
   const clg = requirement.clGroundRun;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { climbGradientBoundary, engineOutFactor } from '../../../core/constraints';
+import { engineOutFactor } from '../../../core/constraints';
+import { climbGradientBoundary } from '../../../core/constraints/climb-gradient';
 import { aircraft, climbGradient } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';
 import { curveOf } from './curve';

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { minimumPowerLiftCoefficient } from '../../../core/aero/lift-coefficients';
 import { speedForLiftCoefficient, stallSpeed } from '../../../core/aero/speeds';
-import { bestRateSpeed, climbRateBoundary, flightCondition, jetBestRateSpeed, loadingRequired } from '../../../core/constraints';
+import { bestRateSpeed, flightCondition, jetBestRateSpeed, loadingRequired } from '../../../core/constraints';
+import { climbRateBoundary } from '../../../core/constraints/climb-rate';
 import { aircraft, climbRate } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';
 import { curveOf } from './curve';

@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { minimumDragLiftCoefficient, maximumLiftToDrag } from '../../../core/aero/lift-coefficients';
 import { speedForLiftCoefficient } from '../../../core/aero/speeds';
-import { cruiseBoundary, flightCondition, sustainedTurnBoundary, thrustLoadingRequired } from '../../../core/constraints';
+import { flightCondition, thrustLoadingRequired } from '../../../core/constraints';
+import { cruiseBoundary } from '../../../core/constraints/cruise';
+import { sustainedTurnBoundary } from '../../../core/constraints/sustained-turn';
 import { aircraft, cruise, sustainedTurn } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';
 import { curveOf } from './curve';

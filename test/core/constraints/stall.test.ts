@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { RHO0 } from '../../../core/atmosphere';
-import { stallBoundary } from '../../../core/constraints';
+import { stallBoundary } from '../../../core/constraints/stall';
 import { KNOT_MPS, PSF_PA } from '../../../core/units/factors';
 import { aircraft, stall } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';

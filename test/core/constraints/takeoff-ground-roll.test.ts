@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { takeoffGroundRollBoundary } from '../../../core/constraints';
+import { takeoffGroundRollBoundary } from '../../../core/constraints/takeoff-ground-roll';
 import { G0 } from '../../../core/units/factors';
 import { aircraft, takeoffRoll } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { requirementCosts, STEPPED_FIELDS } from '../../../core/studies';
+import { requirementCosts } from '../../../core/studies';
+import { REQUIREMENT_DESCRIPTORS } from '../../../core/requirements';
 import { KNOT_MPS } from '../../../core/units/factors';
 import { assertRelative } from '../helpers/asserts';
 import { aircraft, climbGradient, cruise, design, stall, sustainedTurn } from '../helpers/design';
@@ -60,7 +61,7 @@ describe('requirementCosts', () => {
   });
 
   it('steps the value each kind is known by, in the direction that relaxes it', () => {
-    const directions = Object.fromEntries(Object.entries(STEPPED_FIELDS).map(([kind, s]) => [kind, `${s.conceptField} ${s.relaxed}`]));
+    const directions = Object.fromEntries(REQUIREMENT_DESCRIPTORS.map((d) => [d.kind, `${d.costStep.conceptField} ${d.costStep.relaxed}`]));
     expect(directions).toEqual({
       stall: 'speed up',
       'landing-ground-roll': 'distance up',
