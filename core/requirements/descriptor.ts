@@ -105,7 +105,18 @@ export interface RequirementDescriptor<
   /** The field to point at when the curve can be met nowhere because its given speed is below stall; absent: the requirement itself. */
   unattainableField?(requirement: Resolved): string | undefined;
   /** Typical ranges of the kind's own assumptions, by resolved field, with the concept-file key. */
-  typicalRanges: readonly { field: keyof Resolved & string; key: string; title: string; label: string; range: TypicalRange }[];
+  typicalRanges: readonly {
+    field: keyof Resolved & string;
+    /** Its concept-file key. */
+    key: string;
+    /** As the warning names it. */
+    title: string;
+    /** As a study chart labels it. */
+    label: string;
+    range: TypicalRange;
+    /** The values with a physical meaning, as the schema allows them; `open` ends exclude the bound. */
+    bounds: { min: number; max: number; openMin: boolean; openMax: boolean };
+  }[];
   /** Problems only seen when the written fields are read together. */
   issues?(written: z.infer<z.ZodObject<Shape>>, context: { engines: number }): KindIssue[];
   /** Why the resolved requirement cannot be met, when the inputs alone say so. */

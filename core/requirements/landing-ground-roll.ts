@@ -51,7 +51,7 @@ export const landingGroundRoll = defineRequirement<'landing-ground-roll', Landin
   newRequirement: { distance: '400 m' },
   summary: (r, system) => [`${formatQuantity(r.distanceM, 'length', system)} ground roll`, `μ braking ${plain(r.brakingFriction)}`],
   costStep: { field: 'distanceM', conceptField: 'distance', relaxed: 'up' },
-  typicalRanges: [{ field: 'brakingFriction', key: 'brakingFriction', title: 'Braking friction', label: 'Braking friction', range: BRAKING_FRICTION }],
+  typicalRanges: [{ field: 'brakingFriction', key: 'brakingFriction', title: 'Braking friction', label: 'Braking friction', range: BRAKING_FRICTION, bounds: { min: 0, max: 1, openMin: true, openMax: false } }],
   templates: [],
   methods: `### Landing ground roll (\`landing-ground-roll\`)
 

@@ -50,8 +50,8 @@ export const takeoffGroundRoll = defineRequirement<'takeoff-ground-roll', Takeof
   ],
   costStep: { field: 'distanceM', conceptField: 'distance', relaxed: 'up' },
   typicalRanges: [
-    { field: 'rollingFriction', key: 'rollingFriction', title: 'Rolling friction', label: 'Rolling friction', range: ROLLING_FRICTION },
-    { field: 'clGroundRun', key: 'clGroundRun', title: 'Ground-run C_L', label: 'Ground-run CL', range: CL_GROUND_RUN },
+    { field: 'rollingFriction', key: 'rollingFriction', title: 'Rolling friction', label: 'Rolling friction', range: ROLLING_FRICTION, bounds: { min: 0, max: 1, openMin: false, openMax: true } },
+    { field: 'clGroundRun', key: 'clGroundRun', title: 'Ground-run C_L', label: 'Ground-run CL', range: CL_GROUND_RUN, bounds: { min: 0, max: Infinity, openMin: false, openMax: false } },
   ],
   templates: [],
   methods: `### Take-off ground roll (\`takeoff-ground-roll\`)

@@ -46,7 +46,7 @@ describe('typicalRange', () => {
   it('names its source beside every range', () => {
     for (const field of rangeableFields(jet.design)) {
       const r = typicalRange(field, jet.design);
-      if (r) expect(r.source, field).toMatch(/METHODS\.md section \d/);
+      if (r) expect(r.source, field).toMatch(/methods reference, section \d/);
     }
   });
 });
