@@ -169,7 +169,6 @@ export async function runReport(file: string, options: ReportOptions): Promise<s
         concept: input.concept,
         design,
         evaluation,
-        conceptWarnings: input.warnings,
         ...(uncertainty ? { uncertainty } : {}),
         ...(version ? { version } : {}),
         studies: studyOptions,
