@@ -52,7 +52,7 @@ export function assumptionsSection(ctx: ReportContext, studies: ReportStudies | 
     const typical = studies.ranges === 'typical';
     parts.push(typical ? '<h3>Typical ranges used by the studies</h3>' : '<h3>Ranged assumptions</h3>');
     if (typical) {
-      parts.push(paragraph('The concept gives no ranges. The studies below use the typical ranges of METHODS.md for every assumption that has one, uniform over the range and widened where needed to contain the concept’s own value. They show which assumptions could move the design point; they are not the concept’s own uncertainty.', 'notice'));
+      parts.push(paragraph('The concept gives no ranges. The studies below use the typical ranges of the methods reference (section 9) for every assumption that has one, uniform over the range and widened where needed to contain the concept’s own value. They show which assumptions could move the design point; they are not the concept’s own uncertainty.', 'notice'));
     }
     const rows = studies.rows.map((row) => [
       markup(`${text(row.label)}<span class="label">${text(row.field)}</span>`),

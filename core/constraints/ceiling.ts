@@ -15,7 +15,7 @@ export interface CeilingRequirement extends RequirementCommon {
   minimumSpeedFactor: number;
 }
 
-/** Master equation with n = 1, P_s = RC at max(V*, k V_s) (METHODS.md section 6). */
+/** Master equation with n = 1, P_s = RC at max(V*, k V_s) (core/methods.md section 6). */
 export function ceilingBoundary(requirement: CeilingRequirement, aircraft: Aircraft): BoundaryOf<'ceiling'> {
   const c = flightCondition(requirement, aircraft);
   const { rateMps, minimumSpeedFactor } = requirement;

@@ -20,7 +20,7 @@ export interface ClimbGradientRequirement extends RequirementCommon {
 
 /**
  * T/W = f_N (beta/alpha)[q C_D0/(beta w) + K1 + K beta w/q + G] at V = k_V V_s,c
- * (METHODS.md section 6): the master equation with P_s/V = G. With V/V_s fixed
+ * (core/methods.md section 6): the master equation with P_s/V = G. With V/V_s fixed
  * the jet boundary is horizontal and the propeller boundary grows as sqrt(w).
  * All NaN when no engine is left running (k >= N).
  */

@@ -28,7 +28,7 @@ export function climbSpeedAt(
   return wingLoadingPa > 0 ? bestRateSpeed(c, wingLoadingPa, rateMps, minimumSpeedFactor) : NaN;
 }
 
-/** Master equation with n = 1, P_s = RC (Mattingly; METHODS.md section 6). */
+/** Master equation with n = 1, P_s = RC (Mattingly; core/methods.md section 6). */
 export function climbRateBoundary(requirement: ClimbRateRequirement, aircraft: Aircraft): BoundaryOf<'climb-rate'> {
   const c = flightCondition(requirement, aircraft);
   const { rateMps, minimumSpeedFactor, speedMps } = requirement;

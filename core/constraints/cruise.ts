@@ -13,7 +13,7 @@ export interface CruiseRequirement extends RequirementCommon {
   speedMps: number;
 }
 
-/** Master equation with n = 1, P_s = 0 at the given TAS (Mattingly; METHODS.md section 6). */
+/** Master equation with n = 1, P_s = 0 at the given TAS (Mattingly; core/methods.md section 6). */
 export function cruiseBoundary(requirement: CruiseRequirement, aircraft: Aircraft): BoundaryOf<'cruise'> {
   const c = flightCondition(requirement, aircraft);
   const v = requirement.speedMps;

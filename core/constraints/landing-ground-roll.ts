@@ -17,7 +17,7 @@ export interface LandingGroundRollRequirement extends RequirementCommon {
 
 /**
  * Touchdown speed that stops in the distance: free roll for t_fr, then
- * constant deceleration a = mu_B g0 (kinematics, METHODS.md section 6):
+ * constant deceleration a = mu_B g0 (kinematics, core/methods.md section 6):
  * V_TD = -a t_fr + sqrt((a t_fr)^2 + 2 a S_LG).
  */
 export function touchdownSpeedForRoll(distanceM: number, brakingFriction: number, freeRollTimeS: number): number {

@@ -16,7 +16,7 @@ export interface StallRequirement extends RequirementCommon {
 /**
  * w <= 1/2 rho0 V_E^2 C_Lmax,c / beta (Anderson, stalling speed). The required
  * speed is calibrated; it is taken as equivalent (CAS = EAS, under 0.1 % off
- * below M 0.3, METHODS.md section 2), so the limit uses sea-level density.
+ * below M 0.3, core/methods.md section 2), so the limit uses sea-level density.
  */
 export function stallBoundary(requirement: StallRequirement, aircraft: Aircraft): BoundaryOf<'stall'> {
   const c = flightCondition(requirement, aircraft);

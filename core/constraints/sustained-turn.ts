@@ -14,7 +14,7 @@ export interface SustainedTurnRequirement extends RequirementCommon {
   loadFactor: number;
 }
 
-/** Master equation with the turn's n and P_s = 0 (Mattingly; METHODS.md section 6). */
+/** Master equation with the turn's n and P_s = 0 (Mattingly; core/methods.md section 6). */
 export function sustainedTurnBoundary(requirement: SustainedTurnRequirement, aircraft: Aircraft): BoundaryOf<'sustained-turn'> {
   const c = flightCondition(requirement, aircraft);
   const v = requirement.speedMps;

@@ -1,6 +1,6 @@
 /**
  * Take-off ground-roll requirement: mean acceleration over the roll with the
- * forces taken at 0.7 V_LOF (Raymer/Roskam practice; METHODS.md section 6).
+ * forces taken at 0.7 V_LOF (Raymer/Roskam practice; core/methods.md section 6).
  */
 import { stallSpeed } from '../aero/speeds';
 import { G0 } from '../units/factors';
@@ -24,7 +24,7 @@ export const MEAN_ROLL_SPEED_FRACTION = 0.7;
 /**
  * T_SL/W_TO = (beta/alpha)[V_LOF^2/(2 g0 S_G) + qbar C_D,g/(beta w) + mu(1 - qbar C_L,g/(beta w))],
  * C_D,g = C_D0,TO + K1 C_L,g + K C_L,g^2, qbar at 0.7 V_LOF, V_LOF = k_LOF V_s,TO at
- * field density (Raymer ch. 17; METHODS.md section 6). Propellers: x 0.7 V_LOF / eta.
+ * field density (Raymer ch. 17; core/methods.md section 6). Propellers: x 0.7 V_LOF / eta.
  * The jet boundary is linear in w since qbar/w is constant.
  */
 export function takeoffGroundRollBoundary(requirement: TakeoffGroundRollRequirement, aircraft: Aircraft): BoundaryOf<'takeoff-ground-roll'> {

@@ -1,6 +1,6 @@
 /**
  * Speeds reported beside the design point: sea level ISA, take-off mass,
- * equivalent airspeeds (METHODS.md section 7).
+ * equivalent airspeeds (core/methods.md section 7).
  */
 import { characteristicSpeeds, stallSpeed } from '../aero/speeds';
 import { polarOf, type Polar } from '../aero/drag-polar';

@@ -20,7 +20,7 @@ const WARMUP = 300;
 const ROUNDS = 201;
 const BATCH = 10;
 
-/** alpha for the floor, written out per kind (METHODS.md section 5). */
+/** alpha for the floor, written out per kind (core/methods.md section 5). */
 function alphaOf(design: Design, r: Requirement): number {
   const p = design.aircraft.propulsion;
   const sigma = atmosphere(r.altitudeM, r.temperatureOffsetK).sigma;

@@ -34,7 +34,7 @@ describe('ceilingBoundary', () => {
   });
 
   it('is the 100 ft/min climb at the ceiling altitude at the best-rate speed', () => {
-    // Service ceiling: 100 ft/min residual climb (Anderson; Raymer; METHODS.md section 8).
+    // Service ceiling: 100 ft/min residual climb (Anderson; Raymer; core/methods.md section 6.3).
     const ac = aircraft({ kind: 'turboprop', engines: 2 });
     const atCeiling = curveOf(ceilingBoundary(ceiling(7000), ac));
     const asClimb = curveOf(climbRateBoundary(climbRate(100 * FOOT_PER_MINUTE_MPS, { altitudeM: 7000 }), ac));

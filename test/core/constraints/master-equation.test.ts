@@ -26,7 +26,7 @@ describe('master equation', () => {
   });
 
   it('scales to the sea-level rating and take-off weight by beta/alpha', () => {
-    // Mattingly's master equation (METHODS.md section 6): T_SL/W_TO = (beta/alpha)(T/W at the condition).
+    // Mattingly's master equation (core/methods.md section 6): T_SL/W_TO = (beta/alpha)(T/W at the condition).
     const c = flightCondition(cruise(200, { altitudeM: 10000, massFraction: 0.9 }), jet);
     const w = 4000;
     const bw = 0.9 * w;

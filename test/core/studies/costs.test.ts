@@ -30,7 +30,7 @@ describe('requirementCosts', () => {
 
   it('moves a horizontal jet climb-gradient boundary by f_N x dG', () => {
     // Jet climb gradient at V = k V_s: T/W = f_N (beta/alpha)[(k^2/CLmax) CD0 + K CLmax/k^2 + G], independent of w
-    // (METHODS.md section 6, from Mattingly's master equation); f_N = 2 for one of two engines out; sea level, alpha = 1.
+    // (core/methods.md section 6, from Mattingly's master equation); f_N = 2 for one of two engines out; sea level, alpha = 1.
     const d = design({
       aircraft: aircraft({ kind: 'turbofan', engines: 2, aspectRatio: 7.5 }),
       requirements: [stall(60 * KNOT_MPS, { id: 'stall' }), climbGradient(0.024, { id: 'oei', enginesInoperative: 1 })],
