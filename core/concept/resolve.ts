@@ -79,11 +79,12 @@ function resolveDesignPoint(concept: ConceptJson): DesignPoint | undefined {
 }
 
 function propellerEfficiencyWarnings(concept: ConceptJson): WarningJson[] {
-  if (concept.aircraft.propulsion.kind !== 'turbofan') return [];
+  const kind = concept.aircraft.propulsion.kind;
+  if (propulsionKind(kind).propeller) return [];
   return concept.requirements.flatMap((r, i) =>
     r.propellerEfficiency === undefined
       ? []
-      : [{ code: 'field-ignored', field: `requirements[${i}].propellerEfficiency`, message: `ignored: a turbofan has no propeller (requirement "${r.id}")` }],
+      : [{ code: 'field-ignored', field: `requirements[${i}].propellerEfficiency`, message: `ignored: a ${kind} has no propeller (requirement "${r.id}")` }],
   );
 }
 
