@@ -34,12 +34,6 @@ export interface MarginJson {
   margin: number;
 }
 
-export interface PointJson {
-  wingLoading: number;
-  /** `powerToWeight` or `thrustToWeight`, per `axis`. */
-  [axisKey: string]: unknown;
-}
-
 export interface OptimumJson {
   wingLoading: number;
   powerToWeight?: number;

@@ -8,7 +8,7 @@ import { REQUIREMENT_DESCRIPTORS, requirementKind, type RequirementKind } from '
 import { altitude, fraction } from '../requirements/fields';
 import { quantityField } from './quantity-field';
 
-export const commonRequirementShape = {
+const commonRequirementShape = {
   id: z.string().min(1),
   label: z.string().optional(),
   /** Where the requirement comes from (a rule, a specification paragraph) and any note on it; shown, not computed. */

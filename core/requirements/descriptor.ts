@@ -38,7 +38,7 @@ export interface EditorField {
 }
 
 /** Turns a value written in the file into SI (already validated). */
-export type ToSi = (value: string | number | undefined, dimension: Dimension, fallback: number) => number;
+type ToSi = (value: string | number | undefined, dimension: Dimension, fallback: number) => number;
 
 /** A rule from a published certification code, as the concept file writes the requirement. */
 export interface TemplateRow {
@@ -57,7 +57,7 @@ export interface TemplateRow {
 }
 
 /** A problem found when fields of one requirement are read together. */
-export interface KindIssue {
+interface KindIssue {
   /** Field under the requirement, or '' for the requirement itself. */
   field: string;
   message: string;

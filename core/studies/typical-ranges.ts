@@ -25,7 +25,7 @@ export interface TypicalRange {
 const SOURCE_PREFIX = 'Loftpoint methods reference, section 9: ';
 
 /** The published bands for one rangeable field of a design, most likely first; empty: none published. */
-export function typicalBands(ref: FieldRef, design: Design): readonly TypicalBand[] {
+function typicalBands(ref: FieldRef, design: Design): readonly TypicalBand[] {
   switch (ref.key) {
     case 'aspectRatio':
       return ASPECT_RATIO.bands;

@@ -16,7 +16,7 @@ import { isCurveKind, type FieldRef } from './uncertain-fields';
  * JSON when given (a configuration without the key inherits it); otherwise a
  * configuration whose value equals clean's is taken to inherit it.
  */
-export function inheritingConfigurations(key: 'oswaldEfficiency' | 'clMax', design: Design, concept?: unknown): string[] {
+function inheritingConfigurations(key: 'oswaldEfficiency' | 'clMax', design: Design, concept?: unknown): string[] {
   const configurations = design.aircraft.configurations;
   const written = writtenConfigurations(concept);
   return Object.keys(configurations).filter((name) => {

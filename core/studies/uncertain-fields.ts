@@ -7,10 +7,10 @@ import type { Design, Requirement, RequirementKind } from '../model';
 import { propulsionKind, PROPULSION_DESCRIPTORS } from '../propulsion/kinds';
 import { REQUIREMENT_DESCRIPTORS, requirementKind } from '../requirements';
 
-export type AircraftKey = 'aspectRatio' | 'cdLinear' | 'lapseExponent';
-export type ConfigurationKey = 'cd0' | 'cd0Increment' | 'oswaldEfficiency' | 'clMax';
+type AircraftKey = 'aspectRatio' | 'cdLinear' | 'lapseExponent';
+type ConfigurationKey = 'cd0' | 'cd0Increment' | 'oswaldEfficiency' | 'clMax';
 /** propellerEfficiency, or an assumption of a kind's own with a typical range (rollingFriction, brakingFriction, clGroundRun...). */
-export type RequirementKey = string;
+type RequirementKey = string;
 
 export type FieldRef =
   | { scope: 'aircraft'; key: AircraftKey }
