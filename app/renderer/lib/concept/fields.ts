@@ -9,7 +9,7 @@ import type { RequirementKind } from '../../../../core';
 import { configurationRole } from '../../../../core/assumptions/configuration-role';
 import { ASPECT_RATIO, CD0_CLEAN, CD0_INCREMENT, CLMAX, OSWALD } from '../../../../core/assumptions/typical-ranges';
 import { PROPULSION_DESCRIPTORS } from '../../../../core/propulsion/kinds';
-import { requirementKind, REQUIREMENT_DESCRIPTORS, type EditorField, type EditorValue } from '../../../../core/requirements';
+import { findRequirementKind, REQUIREMENT_DESCRIPTORS, type EditorField, type EditorValue } from '../../../../core/requirements';
 
 export type FieldValue = EditorValue;
 export type FieldSpec = EditorField;
@@ -33,7 +33,9 @@ const CONFIGURATION: FieldSpec = { key: 'configuration', title: 'Configuration',
 
 /** The fields the editor shows for a kind: its own first, then the shared ones that matter to it. */
 export function requirementFieldSpecs(kind: RequirementKind): FieldSpec[] {
-  const d = requirementKind(kind);
+  // A kind this version does not know (a newer file) shows only the fields every requirement has.
+  const d = findRequirementKind(kind);
+  if (!d) return [MASS_FRACTION, CONFIGURATION];
   const atmosphere = [...(d.atmosphere.altitude ? [ALTITUDE] : []), ...(d.atmosphere.temperature ? [TEMPERATURE] : [])];
   const propeller: FieldSpec[] = d.propeller
     ? [
