@@ -23,6 +23,12 @@ describe('methods help', () => {
     expect(blocks.some((b) => b.type === 'equation' && b.text.startsWith('T_SL/W_TO = (beta/alpha) [ q C_D0/(beta w)'))).toBe(true);
   });
 
+  it('keeps the caution as one quote', () => {
+    const quotes = blocks.filter((b) => b.type === 'quote');
+    expect(quotes).toHaveLength(1);
+    expect(quotes[0].type === 'quote' && quotes[0].text).toMatch(/^Preliminary sizing only\..*licensed engineering review\.$/);
+  });
+
   it('leaves no markers or Markdown emphasis in what it shows', () => {
     for (const b of blocks) {
       const shown = b.type === 'row' ? b.cells.join(' ') : b.text;

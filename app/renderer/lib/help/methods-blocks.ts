@@ -43,7 +43,10 @@ export function methodsBlocks(markdown: string): MethodsBlock[] {
       blocks.push({ type: 'item', text: plainText(line.slice(2)) });
     } else if (line.startsWith('> ')) {
       flush();
-      blocks.push({ type: 'quote', text: plainText(line.slice(2)) });
+      // A quote written over several lines is one block.
+      const last = blocks.at(-1);
+      if (last?.type === 'quote') last.text = `${last.text} ${plainText(line.slice(2))}`;
+      else blocks.push({ type: 'quote', text: plainText(line.slice(2)) });
     } else if (line.startsWith('|')) {
       flush();
       if (/^\|[-| ]+\|$/.test(line)) continue;
