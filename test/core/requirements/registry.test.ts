@@ -25,8 +25,8 @@ describe('kind registries', () => {
     expect(kindFiles('propulsion/kinds', ['index.ts', 'descriptor.ts'])).toEqual(PROPULSION_DESCRIPTORS.map((d) => d.kind).sort());
   });
 
-  it('keeps the order of the concept format', () => {
-    expect(REQUIREMENT_DESCRIPTORS.map((d) => d.kind)).toEqual([
+  it('keeps the order of the concept format (new kinds come after these)', () => {
+    expect(REQUIREMENT_DESCRIPTORS.map((d) => d.kind).slice(0, 8)).toEqual([
       'stall',
       'landing-ground-roll',
       'takeoff-ground-roll',
@@ -36,7 +36,7 @@ describe('kind registries', () => {
       'ceiling',
       'sustained-turn',
     ]);
-    expect(PROPULSION_DESCRIPTORS.map((d) => d.kind)).toEqual(['piston', 'turbocharged-piston', 'turboprop', 'turbofan', 'electric']);
+    expect(PROPULSION_DESCRIPTORS.map((d) => d.kind).slice(0, 5)).toEqual(['piston', 'turbocharged-piston', 'turboprop', 'turbofan', 'electric']);
   });
 
   it('gives every requirement kind its own colour and title', () => {
