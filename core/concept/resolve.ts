@@ -15,7 +15,9 @@ type AircraftJson = ConceptJson['aircraft'];
 /** Each configuration's cd0 = clean cd0 + increment; e and clMax default to clean's. */
 function resolveConfigurations(aero: AircraftJson['aero']): Record<string, ConfigurationPolar> {
   const { clean, ...others } = aero.configurations;
-  const result: Record<string, ConfigurationPolar> = { clean: { ...clean } };
+  // Keyed by the names the engineer writes: no prototype, so "toString" or "__proto__" is just a name.
+  const result: Record<string, ConfigurationPolar> = Object.create(null);
+  result.clean = { ...clean };
   for (const [name, c] of Object.entries(others)) {
     // The schema lets only clean give an absolute cd0; every other configuration gives an increment.
     const increment = 'cd0Increment' in c ? c.cd0Increment : undefined;

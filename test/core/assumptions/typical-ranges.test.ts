@@ -13,6 +13,7 @@ import type { Design, PropulsionKind } from '../../../core/model';
 import { PROPULSION_DESCRIPTORS } from '../../../core/propulsion/kinds';
 import { REQUIREMENT_DESCRIPTORS } from '../../../core/requirements';
 import { typicalRange } from '../../../core/studies/typical-ranges';
+import { DEMO_CONCEPTS, evaluateDesign, parseConcept } from '../../../core';
 import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffRoll } from '../helpers/design';
 
 /** One requirement of every kind, on an aircraft with the usual configurations and an engine-out one. */
@@ -225,5 +226,23 @@ describe('configuration roles', () => {
       const range = typicalRange(`aircraft.aero.configurations.${name}.oswaldEfficiency`, d);
       expect(range?.source ?? '').not.toMatch(/undefined/);
     }
+  });
+
+  it('reads, evaluates and reports a concept file with a configuration named "toString" like any other', () => {
+    const concept = structuredClone(DEMO_CONCEPTS.find((d) => d.slug === 'trainer')!.concept) as unknown as {
+      aircraft: { aero: { configurations: Record<string, unknown> } };
+      requirements: Array<Record<string, unknown>>;
+    };
+    concept.aircraft.aero.configurations.toString = { cd0Increment: 0.01, clMax: 1.9, oswaldEfficiency: 0.6 };
+    concept.requirements.push({ id: 'odd', kind: 'cruise', speed: '90 kt', configuration: 'toString' });
+    const parsed = parseConcept(concept);
+    expect(parsed.ok).toBe(true);
+    if (!parsed.ok) return;
+    const evaluation = evaluateDesign(parsed.design);
+    expect(JSON.stringify(evaluation)).not.toMatch(/undefined|function/);
+    expect(evaluation.speeds?.stallByConfiguration.toString).toBeGreaterThan(0);
+    // e 0.6 is below the typical 0.7-0.95 (common practice): warned under its own name, with the range.
+    const warning = evaluation.warnings.find((w) => w.field === 'aircraft.aero.configurations.toString.oswaldEfficiency');
+    expect(warning?.message).toContain('0.7-0.95');
   });
 });
