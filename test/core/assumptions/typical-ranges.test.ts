@@ -233,14 +233,14 @@ describe('configuration roles', () => {
       aircraft: { aero: { configurations: Record<string, unknown> } };
       requirements: Array<Record<string, unknown>>;
     };
-    concept.aircraft.aero.configurations.toString = { cd0Increment: 0.01, clMax: 1.9, oswaldEfficiency: 0.6 };
+    concept.aircraft.aero.configurations['toString'] = { cd0Increment: 0.01, clMax: 1.9, oswaldEfficiency: 0.6 } as unknown as () => string;
     concept.requirements.push({ id: 'odd', kind: 'cruise', speed: '90 kt', configuration: 'toString' });
     const parsed = parseConcept(concept);
     expect(parsed.ok).toBe(true);
     if (!parsed.ok) return;
     const evaluation = evaluateDesign(parsed.design);
     expect(JSON.stringify(evaluation)).not.toMatch(/undefined|function/);
-    expect(evaluation.speeds?.stallByConfiguration.toString).toBeGreaterThan(0);
+    expect(evaluation.speeds?.stallByConfiguration?.['toString']).toBeGreaterThan(0);
     // e 0.6 is below the typical 0.7-0.95 (common practice): warned under its own name, with the range.
     const warning = evaluation.warnings.find((w) => w.field === 'aircraft.aero.configurations.toString.oswaldEfficiency');
     expect(warning?.message).toContain('0.7-0.95');
