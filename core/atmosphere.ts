@@ -7,13 +7,13 @@ import { G0 } from './units/factors';
 
 /** Specific gas constant of air, J/(kg K) (USSA 1976). */
 export const R_AIR = 287.05287;
-export const GAMMA = 1.4;
+const GAMMA = 1.4;
 export const T0 = 288.15;
 export const P0 = 101325;
 export const RHO0 = P0 / (R_AIR * T0); // 1.2250 kg/m^3
 export const A0 = Math.sqrt(GAMMA * R_AIR * T0); // 340.294 m/s
 /** Effective Earth radius for geopotential altitude (USSA 1976), m. */
-export const EARTH_RADIUS_M = 6356766;
+const EARTH_RADIUS_M = 6356766;
 
 interface Layer {
   baseM: number;
@@ -49,7 +49,7 @@ const LAYERS: Layer[] = (() => {
 })();
 
 /** Highest altitude the model covers [m]. */
-export const ATMOSPHERE_TOP_M = 51000;
+const ATMOSPHERE_TOP_M = 51000;
 
 function layerPressure(basePa: number, baseK: number, lapse: number, dh: number): number {
   if (lapse === 0) return basePa * Math.exp((-G0 * dh) / (R_AIR * baseK));

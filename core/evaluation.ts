@@ -6,7 +6,8 @@
  * `powerToWeight` stands here, and `sizing` has `thrust` instead of `power`;
  * the types use an index signature for that one key.
  */
-import type { LoadingAxis, RequirementKind } from './model';
+import type { LoadingAxis } from './aircraft';
+import type { RequirementKind } from './requirements';
 
 export const EVALUATION_FORMAT = 'loftpoint-evaluation/1';
 
@@ -31,12 +32,6 @@ export interface MarginJson {
   id: string;
   /** Relative; negative means violated, -1 means no power can meet it there. */
   margin: number;
-}
-
-export interface PointJson {
-  wingLoading: number;
-  /** `powerToWeight` or `thrustToWeight`, per `axis`. */
-  [axisKey: string]: unknown;
 }
 
 export interface OptimumJson {

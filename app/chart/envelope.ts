@@ -1,6 +1,6 @@
 /**
  * The upper envelope of the curves: at each sample, the loading that meets
- * every curve requirement (METHODS.md section 7, E(w) = max_i y_i(w)).
+ * every curve requirement (core/methods.md section 7, E(w) = max_i y_i(w)).
  */
 import { isDefinedPoint, valueAt, type Samples } from './clip';
 import type { CurveSeries } from './series-types';

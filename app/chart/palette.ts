@@ -4,17 +4,12 @@
  * boundary looks the same wherever it is drawn.
  */
 import type { RequirementKind } from '../../core/model';
+import { findRequirementKind, REQUIREMENT_DESCRIPTORS } from '../../core/requirements';
 
-export const KIND_COLOURS: Readonly<Record<RequirementKind, string>> = {
-  stall: '#33658a', // harbour blue
-  'landing-ground-roll': '#6b5b95', // heather
-  'takeoff-ground-roll': '#b8632b', // kiln orange
-  cruise: '#2e7d5b', // pine
-  'climb-rate': '#a63d4f', // brick
-  'climb-gradient': '#b98b12', // ochre
-  ceiling: '#6e4f36', // walnut
-  'sustained-turn': '#2a8a9c', // lagoon
-};
+/** One colour per requirement kind, from its descriptor (core/requirements). */
+export const KIND_COLOURS: Readonly<Record<RequirementKind, string>> = Object.fromEntries(
+  REQUIREMENT_DESCRIPTORS.map((d) => [d.kind, d.colour]),
+) as Record<RequirementKind, string>;
 
 /** Dash patterns that tell apart two boundaries of the same kind (first one solid). */
 export const KIND_DASHES: readonly string[] = ['', '7 4', '2 3', '10 3 2 3'];
@@ -36,7 +31,7 @@ export const CHART_INKS = {
 
 /** Colour for a requirement kind; an unknown kind (a newer file) draws in the axis ink. */
 export function kindColour(kind: string): string {
-  return (KIND_COLOURS as Record<string, string>)[kind] ?? CHART_INKS.axis;
+  return findRequirementKind(kind)?.colour ?? CHART_INKS.axis;
 }
 
 /** Dash pattern for the n-th boundary (0-based) of one kind. */
@@ -44,18 +39,12 @@ export function kindDash(indexWithinKind: number): string {
   return KIND_DASHES[indexWithinKind % KIND_DASHES.length];
 }
 
-/** Requirement kinds as people say them, for legends and reports. */
-export const KIND_TITLES: Readonly<Record<RequirementKind, string>> = {
-  stall: 'Stall speed',
-  'landing-ground-roll': 'Landing ground roll',
-  'takeoff-ground-roll': 'Take-off ground roll',
-  cruise: 'Cruise speed',
-  'climb-rate': 'Rate of climb',
-  'climb-gradient': 'Climb gradient',
-  ceiling: 'Ceiling',
-  'sustained-turn': 'Sustained turn',
-};
+/** Requirement kinds as people say them, for legends and reports (from the descriptors). */
+export const KIND_TITLES: Readonly<Record<RequirementKind, string>> = Object.fromEntries(
+  REQUIREMENT_DESCRIPTORS.map((d) => [d.kind, d.title]),
+) as Record<RequirementKind, string>;
 
+/** The kind's title; an unknown kind (a newer file) shows as written. */
 export function kindTitle(kind: string): string {
-  return (KIND_TITLES as Record<string, string>)[kind] ?? kind;
+  return findRequirementKind(kind)?.title ?? kind;
 }

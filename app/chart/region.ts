@@ -1,6 +1,6 @@
 /**
  * The feasible region: wing loading at or below every limit and loading at or
- * above every curve (METHODS.md section 7), as polygons in display units,
+ * above every curve (core/methods.md section 7), as polygons in display units,
  * clipped to the plotted loading range.
  */
 import type { ChartData } from './data';

@@ -13,6 +13,7 @@ import {
   type WarningJson,
 } from '../../core';
 import { kindTitle } from '../chart/palette';
+import { requirementValues } from '../report/requirement-values';
 import { SIZING_CAUTION } from '../chart/caution';
 import { wrapText } from '../chart/text';
 import { oneLine } from './output-file';
@@ -21,8 +22,6 @@ export interface ReportInput {
   source: string;
   design: Design;
   evaluation: Evaluation;
-  /** Warnings from reading the concept, shown with the evaluation's own. */
-  conceptWarnings: readonly WarningJson[];
   system: UnitSystem;
 }
 
@@ -34,12 +33,12 @@ export function evaluationReport(input: ReportInput): string {
   const sections = [
     [`${oneLine(name)} — constraint diagram evaluation`, `Source: ${oneLine(input.source)}`, SIZING_CAUTION],
     axisSection(design, evaluation, system),
-    requirementSection(design, evaluation),
+    requirementSection(design, evaluation, system),
     optimumSection(evaluation, system),
     designPointSection(evaluation, system),
     sizingSection(design, evaluation, system),
     speedSection(evaluation, system),
-    warningSection([...input.conceptWarnings, ...evaluation.warnings]),
+    warningSection(evaluation.warnings),
     ['CAUTION', `  ${SIZING_CAUTION}`, ...wrap('Every number here follows from the assumptions in the concept (aerodynamics, propulsion, field and day); check them before relying on a result.', '  ')],
   ];
   return `${sections.map((lines) => lines.join('\n')).join('\n\n')}\n`;
@@ -83,7 +82,7 @@ function marginFor(margins: readonly MarginJson[] | undefined, id: string): stri
   return found ? formatMargin(found.margin) : '—';
 }
 
-function requirementSection(design: Design, evaluation: Evaluation): string[] {
+function requirementSection(design: Design, evaluation: Evaluation, system: UnitSystem): string[] {
   const active = new Set(evaluation.optimum?.active ?? []);
   const hasDesignPoint = evaluation.designPoint !== undefined;
   const header = ['id', 'kind', 'binds', 'margin at optimum', ...(hasDesignPoint ? ['margin at design point'] : [])];
@@ -95,10 +94,12 @@ function requirementSection(design: Design, evaluation: Evaluation): string[] {
     ...(hasDesignPoint ? [marginFor(evaluation.designPoint?.margins, boundary.id)] : []),
   ]);
   const lines = table([header, ...rows]);
-  // Each requirement's label under its row, where it has one.
+  // Under each row: the requirement's values in one line (its kind's summary), then its label where it has one.
   const out = [`REQUIREMENTS (${evaluation.boundaries.length} on the diagram)`, lines[0]];
   evaluation.boundaries.forEach((boundary, i) => {
     out.push(lines[i + 1]);
+    const requirement = design.requirements.find((r) => r.id === boundary.id);
+    if (requirement) out.push(...wrap(requirementValues(requirement, design.aircraft.propulsion.kind, system), '      '));
     if (boundary.label?.trim()) out.push(...wrap(boundary.label.trim(), '      '));
   });
   const disabled = design.requirements.filter((requirement) => !requirement.enabled).map((requirement) => requirement.id);
@@ -182,15 +183,8 @@ function speedSection(evaluation: Evaluation, system: UnitSystem): string[] {
 }
 
 function warningSection(warnings: readonly WarningJson[]): string[] {
-  const seen = new Set<string>();
-  const unique = warnings.filter((warning) => {
-    const key = `${warning.field}\u0000${warning.message}`;
-    if (seen.has(key)) return false;
-    seen.add(key);
-    return true;
-  });
-  if (unique.length === 0) return ['WARNINGS', '  None.'];
-  return [`WARNINGS (${unique.length})`, ...unique.flatMap((warning) => wrap(`${warning.field ? `${warning.field}: ` : ''}${warning.message}`, '  - ').map((line, i) => (i === 0 ? line : `    ${line.slice(4)}`)))];
+  if (warnings.length === 0) return ['WARNINGS', '  None.'];
+  return [`WARNINGS (${warnings.length})`, ...warnings.flatMap((warning) => wrap(`${warning.field ? `${warning.field}: ` : ''}${warning.message}`, '  - ').map((line, i) => (i === 0 ? line : `    ${line.slice(4)}`)))];
 }
 
 function capitalise(text: string): string {

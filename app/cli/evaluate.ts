@@ -69,7 +69,7 @@ async function runEvaluate(file: string, options: EvaluateOptions): Promise<stri
     const out = writeSvg(file, options.svg, evaluation, name, system, options.force === true);
     return `Wrote the constraint diagram of ${oneLine(name.trim() || input.source)} to ${out}\n`;
   }
-  return evaluationReport({ source: input.source, design: input.design, evaluation, conceptWarnings: input.warnings, system });
+  return evaluationReport({ source: input.source, design: input.design, evaluation, system });
 }
 
 function unitSystem(file: string, units: string | undefined): UnitSystem {

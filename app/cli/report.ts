@@ -172,7 +172,6 @@ async function runReport(file: string, options: ReportOptions): Promise<string> 
         concept: input.concept,
         design,
         evaluation,
-        conceptWarnings: input.warnings,
         ...(uncertainty ? { uncertainty } : {}),
         ...(version ? { version } : {}),
         studies: studyOptions,

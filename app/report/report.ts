@@ -25,8 +25,6 @@ export interface ReportInput {
   concept: unknown;
   design: Design;
   evaluation: Evaluation;
-  /** Warnings from reading the concept, shown with the evaluation's own. */
-  conceptWarnings?: readonly WarningJson[];
   /** The concept's own ranges (parseConcept's `uncertainty`); absent: typical ranges. */
   uncertainty?: ConceptUncertainty;
   version?: ReportVersion & { changesSinceParent?: VersionComparison };
@@ -42,16 +40,9 @@ export interface ReportInput {
 }
 
 function warningsSection(warnings: readonly WarningJson[]): string {
-  const seen = new Set<string>();
-  const unique = warnings.filter((w) => {
-    const key = `${w.field}\u0000${w.message}`;
-    if (seen.has(key)) return false;
-    seen.add(key);
-    return true;
-  });
-  if (unique.length === 0) return section('warnings', 'Warnings', paragraph('None.', 'muted'));
-  const items = unique.map((w) => `<li>${w.field ? `<code>${text(w.field)}</code>: ` : ''}${text(w.message)}</li>`).join('\n');
-  return section('warnings', `Warnings (${unique.length})`, `<ul class="plain">\n${items}\n</ul>`);
+  if (warnings.length === 0) return section('warnings', 'Warnings', paragraph('None.', 'muted'));
+  const items = warnings.map((w) => `<li>${w.field ? `<code>${text(w.field)}</code>: ` : ''}${text(w.message)}</li>`).join('\n');
+  return section('warnings', `Warnings (${warnings.length})`, `<ul class="plain">\n${items}\n</ul>`);
 }
 
 export function buildReport(input: ReportInput): string {
@@ -73,7 +64,7 @@ export function buildReport(input: ReportInput): string {
     `<div class="two-up">\n${sizingSection(ctx)}\n${speedsSection(ctx)}\n</div>`,
     studiesSection(ctx, studies),
     versionSection(input.version, input.version?.changesSinceParent, system, input.unsavedDraft === true && !input.version),
-    warningsSection([...(input.conceptWarnings ?? []), ...evaluation.warnings]),
+    warningsSection(evaluation.warnings),
     `<footer class="end">${cautionBox(true)}</footer>`,
   ];
   return [

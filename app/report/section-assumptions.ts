@@ -3,6 +3,7 @@
  * aerodynamic configuration, and every ranged assumption with its range and
  * distribution (the concept's own, or the typical ranges the studies used).
  */
+import { propulsionKind } from '../../core/propulsion/kinds';
 import { formatQuantity } from '../../core';
 import { plainNumber } from '../chart/tornado-data';
 import type { ReportContext } from './context';
@@ -25,10 +26,11 @@ export function assumptionsSection(ctx: ReportContext, studies: ReportStudies | 
     ['Linear drag term K1 (C_D = C_D0 + K1 C_L + K C_L²)', value('aircraft.aero.cdLinear', aircraft.cdLinear)],
     ['Propulsion', `${propulsion.kind}, ${propulsion.engines} engine${propulsion.engines === 1 ? '' : 's'}`],
   ];
-  if (propulsion.kind === 'turboprop' || propulsion.kind === 'turbofan') {
-    aircraftRows.push([`Lapse exponent m (${propulsion.kind === 'turbofan' ? 'thrust' : 'power'} ∝ σ^m)`, value('aircraft.propulsion.lapseExponent', propulsion.lapseExponent)]);
+  const propulsionDescriptor = propulsionKind(propulsion.kind);
+  if (propulsionDescriptor.lapseExponent) {
+    aircraftRows.push([`Lapse exponent m (${propulsionDescriptor.propeller ? 'power' : 'thrust'} ∝ σ^m)`, value('aircraft.propulsion.lapseExponent', propulsion.lapseExponent)]);
   }
-  if (propulsion.kind === 'turbocharged-piston') aircraftRows.push(['Critical altitude', formatQuantity(propulsion.criticalAltitudeM, 'altitude', system)]);
+  if (propulsionDescriptor.needsCriticalAltitude) aircraftRows.push(['Critical altitude', formatQuantity(propulsion.criticalAltitudeM, 'altitude', system)]);
 
   const clean = aircraft.configurations.clean;
   const configurationRows = Object.entries(aircraft.configurations).map(([name, polar]) => {
@@ -52,7 +54,7 @@ export function assumptionsSection(ctx: ReportContext, studies: ReportStudies | 
     const typical = studies.ranges === 'typical';
     parts.push(typical ? '<h3>Typical ranges used by the studies</h3>' : '<h3>Ranged assumptions</h3>');
     if (typical) {
-      parts.push(paragraph('The concept gives no ranges. The studies below use the typical ranges of METHODS.md for every assumption that has one, uniform over the range and widened where needed to contain the concept’s own value. They show which assumptions could move the design point; they are not the concept’s own uncertainty.', 'notice'));
+      parts.push(paragraph('The concept gives no ranges. The studies below use the typical ranges of the methods reference (section 9) for every assumption that has one, uniform over the range and widened where needed to contain the concept’s own value. They show which assumptions could move the design point; they are not the concept’s own uncertainty.', 'notice'));
     }
     const rows = studies.rows.map((row) => [
       markup(`${text(row.label)}<span class="label">${text(row.field)}</span>`),

@@ -67,7 +67,7 @@ export function jobSection(ctx: ReportContext): string {
     ),
     paragraph(
       `Wing area and installed ${thrust ? 'thrust' : 'power'} follow at take-off mass from the design point (the optimum when the concept gives none): S = W / (W/S), ${thrust ? 'T = (T/W) W' : 'P = (P/W) W'}. ` +
-        'The methods are the defaults of METHODS.md: the 1976 standard atmosphere, the master equation for the performance boundaries, and the published sources named there. ' +
+        'The methods are those of the Loftpoint methods reference (Help in the designer window; core/methods.md in the source): the 1976 standard atmosphere, the master equation for the performance boundaries, and the published sources named there. ' +
         'The studies show how far the picture moves when the assumptions move across their ranges.',
     ),
   ].join('\n');

@@ -29,7 +29,7 @@ export function requirementsSection(ctx: ReportContext): string {
   });
   const body = [
     table(header, rows, { numeric: hasPoint ? [3, 4] : [3], className: 'requirements' }),
-    paragraph('Margins are relative loadings (METHODS.md section 7): positive means met with room to spare, negative means missed. A requirement that is off is not on the diagram.', 'small muted'),
+    paragraph('Margins are relative loadings (methods reference, section 7): positive means met with room to spare, negative means missed. A requirement that is off is not on the diagram.', 'small muted'),
   ].join('\n');
   return section('requirements', `Requirements (${design.requirements.filter((r) => r.enabled).length} on the diagram)`, body);
 }

@@ -94,7 +94,7 @@ export function sizingSection(ctx: ReportContext): string {
   const weight = formatQuantity(design.aircraft.takeoffMassKg, 'mass', system);
   const body = [
     table(['', ...(point ? ['Design point'] : []), 'Optimum'], rows, { numeric: point ? [1, 2] : [1] }),
-    paragraph(`At take-off mass ${weight}: S = W / (W/S) and ${thrust ? 'T = (T/W) W' : 'P = (P/W) W'} (METHODS.md section 7).`, 'small muted'),
+    paragraph(`At take-off mass ${weight}: S = W / (W/S) and ${thrust ? 'T = (T/W) W' : 'P = (P/W) W'} (methods reference, section 7).`, 'small muted'),
   ].join('\n');
   return section('sizing', 'Sizing', body);
 }

@@ -42,7 +42,7 @@ function introduction(studies: ReportStudies): string {
   const count = studies.rows.length;
   const whose =
     studies.ranges === 'typical'
-      ? `The concept gives no ranges, so these studies use the typical ranges of METHODS.md (${count} assumption${count === 1 ? '' : 's'}; listed under Assumptions). They show what could move the design point, not the concept’s own uncertainty: give the concept an uncertainty block to study its own ranges.`
+      ? `The concept gives no ranges, so these studies use the typical ranges of the methods reference, section 9 (${count} assumption${count === 1 ? '' : 's'}; listed under Assumptions). They show what could move the design point, not the concept’s own uncertainty: give the concept an uncertainty block to study its own ranges.`
       : `${count} assumption${count === 1 ? '' : 's'} carry a range in the concept (listed under Assumptions).`;
   const run = studies.map
     ? ` The chance of meeting every requirement is a seeded Monte Carlo over those ranges (${runText(studies)}; the same seed and count give the same numbers).`

@@ -4,7 +4,7 @@
  * requirement (on the diagram's own grid), and what each requirement costs.
  *
  * Ranges come from the concept's `uncertainty` block. A concept without
- * ranges is studied on the typical ranges of METHODS.md (core
+ * ranges is studied on the typical ranges of core/methods.md (core
  * `typicalUncertainty`), and everything says so: an engineer still sees
  * which assumptions could move the point, but never mistakes handbook
  * spreads for the concept's own.
@@ -49,12 +49,12 @@ export interface RangeRow {
   nominal: number;
   high: number;
   distribution: Distribution;
-  /** Where a typical range comes from (METHODS.md); absent for the concept's own ranges. */
+  /** Where a typical range comes from (core/methods.md); absent for the concept's own ranges. */
   source?: string;
 }
 
 export interface ReportStudies {
-  /** Whose ranges: the concept's own, or METHODS.md typical ranges because the concept gives none. */
+  /** Whose ranges: the concept's own, or core/methods.md typical ranges because the concept gives none. */
   ranges: 'concept' | 'typical';
   rows: RangeRow[];
   seed: number;

@@ -2,7 +2,7 @@
  * The parabolic drag polar with a linear term, C_D = C_D0 + K1 C_L + K C_L^2,
  * for one aerodynamic configuration.
  */
-import type { Aircraft } from '../model';
+import type { Aircraft } from '../aircraft';
 
 /** A configuration's polar with the induced-drag factor worked out. */
 export interface Polar {
@@ -19,7 +19,7 @@ export function inducedDragFactor(aspectRatio: number, oswaldEfficiency: number)
   return 1 / (Math.PI * oswaldEfficiency * aspectRatio);
 }
 
-/** C_D = C_D0 + K1 C_L + K C_L^2 (METHODS.md section 3; Mattingly's K1 is our K). */
+/** C_D = C_D0 + K1 C_L + K C_L^2 (core/methods.md section 3; Mattingly's K1 is our K). */
 export function dragCoefficient(polar: Polar, liftCoefficient: number): number {
   return polar.cd0 + polar.k1 * liftCoefficient + polar.k * liftCoefficient * liftCoefficient;
 }

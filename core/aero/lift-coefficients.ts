@@ -1,6 +1,6 @@
 /**
  * Lift coefficients of the characteristic flight conditions of a polar with a
- * linear term (METHODS.md section 4).
+ * linear term (core/methods.md section 4).
  */
 import type { Polar } from './drag-polar';
 

@@ -1,6 +1,6 @@
 /**
  * Characteristic speeds of a polar at a wing loading and density
- * (METHODS.md section 4). With the sea-level density they are equivalent
+ * (core/methods.md section 4). With the sea-level density they are equivalent
  * airspeeds; with the density at altitude, true airspeeds.
  */
 import type { Polar } from './drag-polar';

@@ -27,7 +27,7 @@ const cleanConfiguration = z.strictObject(cleanConfigurationShape);
 const configuration = z.strictObject(configurationShape);
 
 /** `clean` plus any other named configurations, as a file writes them. */
-export type ConfigurationsJson = { clean: z.input<typeof cleanConfiguration> } & {
+type ConfigurationsJson = { clean: z.input<typeof cleanConfiguration> } & {
   [name: string]: z.input<typeof cleanConfiguration> | z.input<typeof configuration>;
 };
 

@@ -3,7 +3,9 @@
  * unique ids, configurations that exist, engine counts, the design point's
  * axis, and the diagram range.
  */
-import { loadingAxis } from '../model';
+import { loadingAxis } from '../aircraft';
+import { propulsionKind } from '../propulsion/kinds';
+import { requirementKind } from '../requirements';
 import { parseQuantity } from '../units/quantity';
 import { DEFAULT_ENGINES } from './defaults';
 import type { ConceptIssue } from './format';
@@ -28,24 +30,16 @@ function requirementIssues(concept: ConceptJson): ConceptIssue[] {
         message: `no configuration "${r.configuration}" in aircraft.aero.configurations (defined: ${configurations.join(', ')})${named(r)}`,
       });
     }
-    if (r.kind === 'climb-gradient' && (r.enginesInoperative ?? 0) >= engines) {
-      issues.push({
-        path: `${at}.enginesInoperative`,
-        message: `must be below the number of engines (aircraft.propulsion.engines is ${engines}; got ${r.enginesInoperative})${named(r)}`,
-      });
-    }
-    if (r.kind === 'sustained-turn' && (r.loadFactor === undefined) === (r.bankAngle === undefined)) {
-      const what = r.loadFactor === undefined ? 'needs' : 'has both; give only one of';
-      issues.push({ path: at, message: `${what} loadFactor (e.g. 1.5) or bankAngle (e.g. "45 deg")${named(r)}` });
-    }
+    const own = requirementKind(r.kind).issues?.(r, { engines }) ?? [];
+    for (const issue of own) issues.push({ path: issue.field ? `${at}.${issue.field}` : at, message: `${issue.message}${named(r)}` });
   });
   return issues;
 }
 
 function aircraftIssues(concept: ConceptJson): ConceptIssue[] {
   const { propulsion } = concept.aircraft;
-  if (propulsion.kind === 'turbocharged-piston' && propulsion.criticalAltitude === undefined) {
-    return [{ path: 'aircraft.propulsion.criticalAltitude', message: 'is required for a turbocharged-piston engine, e.g. "12000 ft"' }];
+  if (propulsionKind(propulsion.kind).needsCriticalAltitude && propulsion.criticalAltitude === undefined) {
+    return [{ path: 'aircraft.propulsion.criticalAltitude', message: `is required for a ${propulsion.kind} engine, e.g. "12000 ft"` }];
   }
   return [];
 }

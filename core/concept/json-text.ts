@@ -5,7 +5,7 @@
  * by keeping the last.
  */
 
-export type JsonText =
+type JsonText =
   | { ok: true; value: unknown }
   | { ok: false; line: number; column: number; reason: string; path?: PropertyKey[] };
 

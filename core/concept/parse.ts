@@ -66,7 +66,9 @@ export function parseConcept(input: unknown): ParsedConcept {
     const { design, warnings } = resolveConcept(checked.data);
     // A copy of what was written keeps its key order and leaves the caller's object alone.
     const concept = structuredClone(migrated.concept) as ConceptJson;
-    const result = { ok: true as const, concept, design, warnings: [...migrated.warnings, ...warnings] };
+    // Every note from reading (migration, then resolution) travels with the design, so the evaluation carries each once.
+    const readingWarnings = [...migrated.warnings, ...warnings];
+    const result = { ok: true as const, concept, design: { ...design, warnings: [...readingWarnings] }, warnings: readingWarnings };
     if (checked.data.uncertainty === undefined) return result;
     const uncertainty = resolveUncertainty(checked.data.uncertainty, design, checked.data);
     if (!uncertainty.ok) return { ok: false, issues: uncertainty.issues };

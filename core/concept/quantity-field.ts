@@ -6,7 +6,7 @@ import { z } from 'zod';
 import { EXAMPLE, SI_UNIT, parseQuantity, type Dimension } from '../units/quantity';
 
 /** Limits in SI; `above`/`below` exclude the value, `from`/`to` include it. */
-export interface QuantityBounds {
+interface QuantityBounds {
   above?: number;
   from?: number;
   below?: number;

@@ -1,11 +1,13 @@
 /**
  * One requirement as written, with its defaults applied and its units
- * turned to SI (DESIGN.md field list; METHODS.md section 12).
+ * turned to SI (DESIGN.md field list); the kind's own fields resolve in its
+ * descriptor (core/requirements).
  */
 import type { WarningJson } from '../evaluation';
 import type { Requirement } from '../model';
 import { quantity, type Dimension } from '../units/quantity';
-import { DEFAULT_CONFIGURATION, DEFAULT_PROPELLER_EFFICIENCY, REQUIREMENT_DEFAULTS as D } from './defaults';
+import { requirementKind } from '../requirements';
+import { REQUIREMENT_DEFAULTS as D } from './defaults';
 import type { RequirementJson } from './schema';
 
 /** Validated already, so a failure here is a bug and throws. */
@@ -17,7 +19,7 @@ function si(value: string | number | undefined, dimension: Dimension, fallback: 
 /** The configuration a requirement flies in; a defaulted one the concept lacks falls back to clean. */
 function configurationOf(r: RequirementJson, index: number, defined: readonly string[], warnings: WarningJson[]): string {
   if (r.configuration !== undefined) return r.configuration;
-  const wanted = DEFAULT_CONFIGURATION[r.kind];
+  const wanted = requirementKind(r.kind).defaultConfiguration;
   if (defined.includes(wanted)) return wanted;
   warnings.push({
     code: 'configuration-fallback',
@@ -35,6 +37,7 @@ export function resolveRequirement(
   configurations: readonly string[],
   warnings: WarningJson[],
 ): Requirement {
+  const descriptor = requirementKind(r.kind);
   const common = {
     id: r.id,
     ...(r.label !== undefined ? { label: r.label } : {}),
@@ -43,62 +46,9 @@ export function resolveRequirement(
     temperatureOffsetK: si(r.temperatureOffset, 'temperatureDifference', D.temperatureOffsetK),
     massFraction: r.massFraction ?? D.massFraction,
     powerSetting: r.powerSetting ?? D.powerSetting,
-    propellerEfficiency: r.propellerEfficiency ?? DEFAULT_PROPELLER_EFFICIENCY[r.kind],
+    // A kind without propeller efficiency keeps the climb value, unused.
+    propellerEfficiency: r.propellerEfficiency ?? descriptor.propeller?.default ?? D.propellerEfficiency,
     configuration: configurationOf(r, index, configurations, warnings),
   };
-  switch (r.kind) {
-    case 'stall':
-      return { ...common, kind: r.kind, speedMps: si(r.speed, 'speed', NaN) };
-    case 'cruise':
-      return { ...common, kind: r.kind, speedMps: si(r.speed, 'speed', NaN) };
-    case 'landing-ground-roll':
-      return {
-        ...common,
-        kind: r.kind,
-        distanceM: si(r.distance, 'length', NaN),
-        brakingFriction: r.brakingFriction ?? D.brakingFriction,
-        touchdownSpeedFactor: r.touchdownSpeedFactor ?? D.touchdownSpeedFactor,
-        freeRollTimeS: si(r.freeRollTime, 'time', D.freeRollTimeS),
-      };
-    case 'takeoff-ground-roll':
-      return {
-        ...common,
-        kind: r.kind,
-        distanceM: si(r.distance, 'length', NaN),
-        rollingFriction: r.rollingFriction ?? D.rollingFriction,
-        clGroundRun: r.clGroundRun ?? D.clGroundRun,
-        liftoffSpeedFactor: r.liftoffSpeedFactor ?? D.liftoffSpeedFactor,
-      };
-    case 'climb-rate':
-      return {
-        ...common,
-        kind: r.kind,
-        rateMps: si(r.rate, 'speed', NaN),
-        ...(r.speed !== undefined ? { speedMps: si(r.speed, 'speed', NaN) } : {}),
-        minimumSpeedFactor: r.minimumSpeedFactor ?? D.minimumSpeedFactor,
-      };
-    case 'climb-gradient':
-      return {
-        ...common,
-        kind: r.kind,
-        gradient: si(r.gradient, 'fraction', NaN),
-        enginesInoperative: r.enginesInoperative ?? D.enginesInoperative,
-        speedFactor: r.speedFactor ?? D.speedFactor,
-      };
-    case 'ceiling':
-      return {
-        ...common,
-        kind: r.kind,
-        rateMps: si(r.rate, 'speed', D.ceilingRateMps),
-        minimumSpeedFactor: r.minimumSpeedFactor ?? D.minimumSpeedFactor,
-      };
-    case 'sustained-turn':
-      return {
-        ...common,
-        kind: r.kind,
-        speedMps: si(r.speed, 'speed', NaN),
-        // n = 1/cos(phi) in a level coordinated turn (Anderson, Introduction to Flight, ch. 6, turning flight).
-        loadFactor: r.loadFactor ?? 1 / Math.cos(si(r.bankAngle, 'angle', NaN)),
-      };
-  }
+  return { ...common, kind: r.kind, ...descriptor.resolve(r, si) } as Requirement;
 }

@@ -4,8 +4,9 @@
  */
 import type { WarningJson } from '../evaluation';
 import { loadingAxis, type Aircraft, type ConfigurationPolar, type Design, type DesignPoint } from '../model';
+import { PROPULSION_DESCRIPTORS, propulsionKind } from '../propulsion/kinds';
 import { quantity } from '../units/quantity';
-import { DEFAULT_CD0_INCREMENT, DEFAULT_CD_LINEAR, DEFAULT_CONCEPT_NAME, DEFAULT_ENGINES, DEFAULT_LAPSE_EXPONENT, DEFAULT_SAMPLES } from './defaults';
+import { DEFAULT_CD0_INCREMENT, DEFAULT_CD_LINEAR, DEFAULT_CONCEPT_NAME, DEFAULT_ENGINES, DEFAULT_SAMPLES } from './defaults';
 import { resolveRequirement } from './resolve-requirement';
 import type { ConceptJson } from './schema';
 
@@ -14,7 +15,9 @@ type AircraftJson = ConceptJson['aircraft'];
 /** Each configuration's cd0 = clean cd0 + increment; e and clMax default to clean's. */
 function resolveConfigurations(aero: AircraftJson['aero']): Record<string, ConfigurationPolar> {
   const { clean, ...others } = aero.configurations;
-  const result: Record<string, ConfigurationPolar> = { clean: { ...clean } };
+  // Keyed by the names the engineer writes: no prototype, so "toString" or "__proto__" is just a name.
+  const result: Record<string, ConfigurationPolar> = Object.create(null);
+  result.clean = { ...clean };
   for (const [name, c] of Object.entries(others)) {
     // The schema lets only clean give an absolute cd0; every other configuration gives an increment.
     const increment = 'cd0Increment' in c ? c.cd0Increment : undefined;
@@ -27,20 +30,28 @@ function resolveConfigurations(aero: AircraftJson['aero']): Record<string, Confi
   return result;
 }
 
+/** The propulsion kinds that pass a test, as a sentence names them. */
+function kindsWith(test: (d: (typeof PROPULSION_DESCRIPTORS)[number]) => boolean, joiner: string): string {
+  return PROPULSION_DESCRIPTORS.filter(test)
+    .map((d) => d.kind)
+    .join(joiner);
+}
+
 function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircraft {
   const { kind, engines, lapseExponent, criticalAltitude } = aircraft.propulsion;
-  if (criticalAltitude !== undefined && kind !== 'turbocharged-piston') {
+  const descriptor = propulsionKind(kind);
+  if (criticalAltitude !== undefined && !descriptor.needsCriticalAltitude) {
     warnings.push({
       code: 'field-ignored',
       field: 'aircraft.propulsion.criticalAltitude',
-      message: `ignored: criticalAltitude applies to a turbocharged-piston engine, not ${kind}`,
+      message: `ignored: criticalAltitude applies to a ${kindsWith((d) => d.needsCriticalAltitude, ' or ')} engine, not ${kind}`,
     });
   }
-  if (lapseExponent !== undefined && kind !== 'turboprop' && kind !== 'turbofan') {
+  if (lapseExponent !== undefined && descriptor.lapseExponent === null) {
     warnings.push({
       code: 'field-ignored',
       field: 'aircraft.propulsion.lapseExponent',
-      message: `ignored: lapseExponent applies to turboprop and turbofan; a ${kind} engine uses its own lapse model (METHODS.md section 5)`,
+      message: `ignored: lapseExponent applies to ${kindsWith((d) => d.lapseExponent !== null, ' and ')}; a ${kind} engine uses its own lapse model (Loftpoint methods reference, section 5)`,
     });
   }
   return {
@@ -51,8 +62,9 @@ function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircr
     propulsion: {
       kind,
       engines: engines ?? DEFAULT_ENGINES,
-      lapseExponent: lapseExponent ?? DEFAULT_LAPSE_EXPONENT[kind],
-      ...(kind === 'turbocharged-piston' && criticalAltitude !== undefined
+      // A kind without an exponent never reads it; 1 keeps the model whole.
+      lapseExponent: lapseExponent ?? descriptor.lapseExponent?.default ?? 1,
+      ...(descriptor.needsCriticalAltitude && criticalAltitude !== undefined
         ? { criticalAltitudeM: quantity(criticalAltitude, 'length') }
         : {}),
     },
@@ -69,11 +81,12 @@ function resolveDesignPoint(concept: ConceptJson): DesignPoint | undefined {
 }
 
 function propellerEfficiencyWarnings(concept: ConceptJson): WarningJson[] {
-  if (concept.aircraft.propulsion.kind !== 'turbofan') return [];
+  const kind = concept.aircraft.propulsion.kind;
+  if (propulsionKind(kind).propeller) return [];
   return concept.requirements.flatMap((r, i) =>
     r.propellerEfficiency === undefined
       ? []
-      : [{ code: 'field-ignored', field: `requirements[${i}].propellerEfficiency`, message: `ignored: a turbofan has no propeller (requirement "${r.id}")` }],
+      : [{ code: 'field-ignored', field: `requirements[${i}].propellerEfficiency`, message: `ignored: a ${kind} has no propeller (requirement "${r.id}")` }],
   );
 }
 

@@ -1,6 +1,6 @@
 /**
  * The speed that minimises the loading a climb requirement needs
- * (METHODS.md section 6), floored at a multiple of the stall speed.
+ * (core/methods.md section 6), floored at a multiple of the stall speed.
  * With a = rho C_D0/(2 beta w) and b = 2 K beta w/rho:
  */
 import { stallSpeed } from '../aero/speeds';
@@ -8,14 +8,14 @@ import type { FlightCondition } from './flight-condition';
 
 const FOURTH_ROOT_OF_2 = Math.pow(2, 0.25);
 
-/** Propeller, eta constant: 3aV^4 + K1 V^2 - b = 0, V*^2 = [-K1 + sqrt(K1^2 + 12ab)]/(6a) = V_mp^2 (METHODS.md section 6). */
+/** Propeller, eta constant: 3aV^4 + K1 V^2 - b = 0, V*^2 = [-K1 + sqrt(K1^2 + 12ab)]/(6a) = V_mp^2 (core/methods.md section 6). */
 export function propellerBestRateSpeed(a: number, b: number, k1: number): number {
   return Math.sqrt((-k1 + Math.sqrt(k1 * k1 + 12 * a * b)) / (6 * a));
 }
 
 /**
  * Jet: the positive root of 2aV^4 - RC V - 2b = 0 by Newton's method
- * (METHODS.md section 6). The iteration starts from V_md moved right to
+ * (core/methods.md section 6). The iteration starts from V_md moved right to
  * max(2^(1/4) V_md, (RC/a)^(1/3)), where the quartic is already positive, so
  * Newton on the convex quartic descends to the root without overshoot.
  */

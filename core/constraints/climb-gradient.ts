@@ -3,18 +3,28 @@
  * 25.121(b) for twins), possibly with engines inoperative.
  */
 import { stallSpeed } from '../aero/speeds';
-import type { Aircraft, Boundary, ClimbGradientRequirement } from '../model';
+import type { Aircraft } from '../aircraft';
+import type { BoundaryOf } from '../boundary';
+import type { RequirementCommon } from '../requirements/common';
 import { engineOutFactor } from './engine-out';
 import { flightCondition } from './flight-condition';
 import { loadingRequired } from './master-equation';
 
+export interface ClimbGradientRequirement extends RequirementCommon {
+  kind: 'climb-gradient';
+  /** sin(gamma), e.g. 0.024 for 2.4 %. */
+  gradient: number;
+  enginesInoperative: number;
+  speedFactor: number;
+}
+
 /**
  * T/W = f_N (beta/alpha)[q C_D0/(beta w) + K1 + K beta w/q + G] at V = k_V V_s,c
- * (METHODS.md section 6): the master equation with P_s/V = G. With V/V_s fixed
+ * (core/methods.md section 6): the master equation with P_s/V = G. With V/V_s fixed
  * the jet boundary is horizontal and the propeller boundary grows as sqrt(w).
  * All NaN when no engine is left running (k >= N).
  */
-export function climbGradientBoundary(requirement: ClimbGradientRequirement, aircraft: Aircraft): Boundary {
+export function climbGradientBoundary(requirement: ClimbGradientRequirement, aircraft: Aircraft): BoundaryOf<'climb-gradient'> {
   const c = flightCondition(requirement, aircraft);
   const factor = engineOutFactor(aircraft.propulsion.engines, requirement.enginesInoperative);
   const { gradient, speedFactor } = requirement;

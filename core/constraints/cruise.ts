@@ -1,12 +1,20 @@
 /**
  * Cruise speed requirement: level, unaccelerated flight at a true airspeed.
  */
-import type { Aircraft, Boundary, CruiseRequirement } from '../model';
+import type { Aircraft } from '../aircraft';
+import type { BoundaryOf } from '../boundary';
+import type { RequirementCommon } from '../requirements/common';
 import { flightCondition } from './flight-condition';
 import { loadingRequired } from './master-equation';
 
-/** Master equation with n = 1, P_s = 0 at the given TAS (Mattingly; METHODS.md section 6). */
-export function cruiseBoundary(requirement: CruiseRequirement, aircraft: Aircraft): Boundary {
+export interface CruiseRequirement extends RequirementCommon {
+  kind: 'cruise';
+  /** True airspeed [m/s]. */
+  speedMps: number;
+}
+
+/** Master equation with n = 1, P_s = 0 at the given TAS (Mattingly; core/methods.md section 6). */
+export function cruiseBoundary(requirement: CruiseRequirement, aircraft: Aircraft): BoundaryOf<'cruise'> {
   const c = flightCondition(requirement, aircraft);
   const v = requirement.speedMps;
   return {

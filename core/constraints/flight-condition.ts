@@ -4,7 +4,8 @@
  */
 import { atmosphere } from '../atmosphere';
 import { polarOf, type Polar } from '../aero/drag-polar';
-import type { Aircraft, Requirement } from '../model';
+import type { Aircraft } from '../aircraft';
+import type { RequirementCommon } from '../requirements/common';
 import { availableFraction } from '../propulsion/available-fraction';
 import { isPropellerDriven } from '../propulsion/propeller';
 
@@ -24,7 +25,7 @@ export interface FlightCondition {
  * The condition of a requirement. A configuration the aircraft does not
  * define falls back to clean (the evaluation warns about it).
  */
-export function flightCondition(requirement: Requirement, aircraft: Aircraft): FlightCondition {
+export function flightCondition(requirement: RequirementCommon, aircraft: Aircraft): FlightCondition {
   const air = atmosphere(requirement.altitudeM, requirement.temperatureOffsetK);
   const polar = polarOf(aircraft, requirement.configuration) ?? (polarOf(aircraft, 'clean') as Polar);
   return {

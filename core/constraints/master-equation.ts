@@ -1,6 +1,6 @@
 /**
  * The master equation of constraint analysis (Mattingly, Aircraft Engine
- * Design; METHODS.md section 6), per unit take-off weight and sea-level rating.
+ * Design; core/methods.md section 6), per unit take-off weight and sea-level rating.
  */
 import { shaftPowerLoading } from '../propulsion/propeller';
 import type { FlightCondition } from './flight-condition';

@@ -1,12 +1,21 @@
 /**
  * Sustained level turn at a true airspeed and load factor n = 1/cos(bank).
  */
-import type { Aircraft, Boundary, SustainedTurnRequirement } from '../model';
+import type { Aircraft } from '../aircraft';
+import type { BoundaryOf } from '../boundary';
+import type { RequirementCommon } from '../requirements/common';
 import { flightCondition } from './flight-condition';
 import { loadingRequired } from './master-equation';
 
-/** Master equation with the turn's n and P_s = 0 (Mattingly; METHODS.md section 6). */
-export function sustainedTurnBoundary(requirement: SustainedTurnRequirement, aircraft: Aircraft): Boundary {
+export interface SustainedTurnRequirement extends RequirementCommon {
+  kind: 'sustained-turn';
+  /** True airspeed [m/s]. */
+  speedMps: number;
+  loadFactor: number;
+}
+
+/** Master equation with the turn's n and P_s = 0 (Mattingly; core/methods.md section 6). */
+export function sustainedTurnBoundary(requirement: SustainedTurnRequirement, aircraft: Aircraft): BoundaryOf<'sustained-turn'> {
   const c = flightCondition(requirement, aircraft);
   const v = requirement.speedMps;
   const n = requirement.loadFactor;

@@ -1,23 +1,33 @@
 /**
  * Take-off ground-roll requirement: mean acceleration over the roll with the
- * forces taken at 0.7 V_LOF (Raymer/Roskam practice; METHODS.md section 6).
+ * forces taken at 0.7 V_LOF (Raymer/Roskam practice; core/methods.md section 6).
  */
 import { stallSpeed } from '../aero/speeds';
 import { G0 } from '../units/factors';
-import type { Aircraft, Boundary, TakeoffGroundRollRequirement } from '../model';
+import type { Aircraft } from '../aircraft';
+import type { BoundaryOf } from '../boundary';
+import type { RequirementCommon } from '../requirements/common';
 import { shaftPowerLoading } from '../propulsion/propeller';
 import { flightCondition } from './flight-condition';
 
+export interface TakeoffGroundRollRequirement extends RequirementCommon {
+  kind: 'takeoff-ground-roll';
+  distanceM: number;
+  rollingFriction: number;
+  clGroundRun: number;
+  liftoffSpeedFactor: number;
+}
+
 /** Speed at which the mean forces are taken, as a fraction of V_LOF. */
-export const MEAN_ROLL_SPEED_FRACTION = 0.7;
+const MEAN_ROLL_SPEED_FRACTION = 0.7;
 
 /**
  * T_SL/W_TO = (beta/alpha)[V_LOF^2/(2 g0 S_G) + qbar C_D,g/(beta w) + mu(1 - qbar C_L,g/(beta w))],
  * C_D,g = C_D0,TO + K1 C_L,g + K C_L,g^2, qbar at 0.7 V_LOF, V_LOF = k_LOF V_s,TO at
- * field density (Raymer ch. 17; METHODS.md section 6). Propellers: x 0.7 V_LOF / eta.
+ * field density (Raymer ch. 17; core/methods.md section 6). Propellers: x 0.7 V_LOF / eta.
  * The jet boundary is linear in w since qbar/w is constant.
  */
-export function takeoffGroundRollBoundary(requirement: TakeoffGroundRollRequirement, aircraft: Aircraft): Boundary {
+export function takeoffGroundRollBoundary(requirement: TakeoffGroundRollRequirement, aircraft: Aircraft): BoundaryOf<'takeoff-ground-roll'> {
   const c = flightCondition(requirement, aircraft);
   const { polar } = c;
   const clg = requirement.clGroundRun;

@@ -7,21 +7,16 @@ import type { WarningJson } from '../evaluation';
 import type { Aircraft, Requirement } from '../model';
 import { availableFraction } from '../propulsion/available-fraction';
 import { round } from './assumption-warnings';
+import { requirementKind } from '../requirements';
 import type { RequirementBoundary } from './boundaries';
-
-const SPEED_KINDS = new Set(['cruise', 'sustained-turn', 'climb-rate']);
 
 /** Why a requirement's curve cannot be met anywhere, when the inputs alone say so. */
 function knownCause(requirement: Requirement, aircraft: Aircraft, path: string): WarningJson | undefined {
-  if (requirement.kind === 'climb-gradient' && !(requirement.enginesInoperative < aircraft.propulsion.engines)) {
-    return {
-      code: 'no-engine-left',
-      field: `${path}.enginesInoperative`,
-      message: `${requirement.enginesInoperative} of ${aircraft.propulsion.engines} engines inoperative leaves none running; the climb gradient cannot be met.`,
-    };
-  }
+  const descriptor = requirementKind(requirement.kind);
+  const own = descriptor.impossible?.(requirement, aircraft);
+  if (own) return { code: own.code, field: own.field ? `${path}.${own.field}` : path, message: own.message };
   const alpha = availableFraction(aircraft.propulsion, requirement.altitudeM, requirement.temperatureOffsetK, requirement.powerSetting);
-  if (requirement.kind !== 'stall' && requirement.kind !== 'landing-ground-roll' && !(alpha > 0)) {
+  if (descriptor.drawnAs === 'curve' && !(alpha > 0)) {
     const field = requirement.powerSetting > 0 ? `${path}.altitude` : `${path}.powerSetting`;
     return {
       code: 'no-power-available',
@@ -74,10 +69,11 @@ export function unattainableWarnings(
       continue;
     }
     if (curveMet.get(boundary.id) !== false || knownCause(requirement, aircraft, path)) continue;
-    const bySpeed = SPEED_KINDS.has(requirement.kind) && 'speedMps' in requirement && requirement.speedMps !== undefined;
+    const speedField = requirementKind(requirement.kind).unattainableField?.(requirement);
+    const bySpeed = speedField !== undefined;
     out.push({
       code: 'requirement-unattainable',
-      field: bySpeed ? `${path}.speed` : path,
+      field: bySpeed ? `${path}.${speedField}` : path,
       message: bySpeed
         ? `Requirement "${requirement.id}": the speed is below the stall speed of the ${requirement.configuration} configuration at every plotted wing loading (C_L needed above C_Lmax).`
         : `Requirement "${requirement.id}" cannot be met at any plotted wing loading.`,

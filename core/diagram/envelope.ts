@@ -1,6 +1,6 @@
 /**
  * The envelope of the curves, E(w) = max_i y_i(w), and the wing-loading cap
- * of the limits (METHODS.md section 7).
+ * of the limits (core/methods.md section 7).
  */
 import type { Boundary } from '../model';
 
@@ -9,7 +9,7 @@ export type LimitBoundary = Extract<Boundary, { type: 'limit' }>;
 /** Required loading at a wing loading; NaN where it cannot be met. */
 export type RequiredLoading = (wingLoadingPa: number) => number;
 
-/** E(w) = max_i y_i(w) (METHODS.md section 7); NaN where any curve cannot be met; 0 with no curves. */
+/** E(w) = max_i y_i(w) (core/methods.md section 7); NaN where any curve cannot be met; 0 with no curves. */
 export function envelopeAt(required: readonly RequiredLoading[], wingLoadingPa: number): number {
   let top = 0;
   for (let i = 0; i < required.length; i++) {

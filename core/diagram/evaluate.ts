@@ -25,7 +25,7 @@ import { sampleWingLoadings } from './sampling';
 import { sizingAt } from './sizing';
 import { reportedSpeeds } from './speeds';
 
-/** Relative distance within which a requirement counts as active at the optimum (METHODS.md section 7). */
+/** Relative distance within which a requirement counts as active at the optimum (core/methods.md section 7). */
 export const ACTIVE_TOLERANCE = 1e-3;
 const DEFAULT_SAMPLES = 201;
 

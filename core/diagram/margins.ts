@@ -1,5 +1,5 @@
 /**
- * How far a point on the diagram is from each requirement (METHODS.md
+ * How far a point on the diagram is from each requirement (core/methods.md
  * section 7). Positive means met.
  */
 import type { Boundary, Design, DesignPoint } from '../model';

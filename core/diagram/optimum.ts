@@ -1,16 +1,16 @@
 /**
- * The design point of least power or thrust (METHODS.md section 7):
+ * The design point of least power or thrust (core/methods.md section 7):
  * w* = argmin E(w) on (w_lo, w_lim], w_lim = min(limits, plot maximum);
  * ties (relative 1e-9) go to the largest wing loading.
  */
 import { envelopeAt, type RequiredLoading } from './envelope';
 import { goldenMinimum, lastWithin, tieBand } from './line-search';
 
-/** METHODS.md section 7 searches a 4000-point grid; every search here is at least that fine near a minimum. */
+/** core/methods.md section 7 searches a 4000-point grid; every search here is at least that fine near a minimum. */
 export const SEARCH_GRID_POINTS = 4000;
 /** Points of the coarse grid when the caller has no samples of the envelope to offer. */
 export const COARSE_GRID_POINTS = 250;
-/** Relative tolerance within which two loadings tie (METHODS.md section 7). */
+/** Relative tolerance within which two loadings tie (core/methods.md section 7). */
 export const TIE_TOLERANCE = 1e-9;
 /** Local minima of the coarse grid within this fraction of the lowest one are all refined. */
 const CANDIDATE_BAND = 1e-2;
@@ -105,7 +105,7 @@ function coarseGrid(f: Envelope, lo: number, right: number, samples?: EnvelopeSa
 /**
  * The optimum over [lo, min(cap, hi)]. A coarse grid (the plotted samples
  * when given, which must start at lo) finds the low local minima; each is
- * searched again on a fine grid as fine as METHODS.md's 4000-point grid,
+ * searched again on a fine grid as fine as the methods reference's (core/methods.md) 4000-point grid,
  * refined by golden section and moved right across any tie. Null when no
  * wing loading in the span can be met.
  *

@@ -1,6 +1,6 @@
 /**
  * A point of the diagram turned into wing area and installed power or thrust
- * at take-off mass (METHODS.md section 7).
+ * at take-off mass (core/methods.md section 7).
  */
 import type { Aircraft, LoadingAxis } from '../model';
 import type { SizingJson } from '../evaluation';

@@ -1,6 +1,6 @@
 /**
  * Speeds reported beside the design point: sea level ISA, take-off mass,
- * equivalent airspeeds (METHODS.md section 7).
+ * equivalent airspeeds (core/methods.md section 7).
  */
 import { characteristicSpeeds, stallSpeed } from '../aero/speeds';
 import { polarOf, type Polar } from '../aero/drag-polar';
@@ -15,7 +15,8 @@ export const APPROACH_SPEED_FACTOR = 1.3;
 export function reportedSpeeds(aircraft: Aircraft, wingLoadingPa: number): SpeedsJson {
   const clean = polarOf(aircraft, 'clean') as Polar;
   const landing = polarOf(aircraft, 'landing') ?? clean;
-  const stallByConfiguration: Record<string, number> = {};
+  // Keyed by configuration names as written: no prototype, so any name is just a name.
+  const stallByConfiguration: Record<string, number> = Object.create(null);
   for (const [name, configuration] of Object.entries(aircraft.configurations)) {
     stallByConfiguration[name] = stallSpeed(wingLoadingPa, RHO0, configuration.clMax);
   }

@@ -1,26 +1,14 @@
 /**
  * alpha: the fraction of rated sea-level power or thrust available at a
- * flight condition, lapse times throttle (METHODS.md section 5).
+ * flight condition, lapse times throttle (methods reference, section 5).
  */
 import { atmosphere } from '../atmosphere';
-import type { Propulsion } from '../model';
-import { electricLapse, pistonLapse, turbochargedPistonLapse, turbofanLapse, turbopropLapse } from './lapse';
+import type { Propulsion } from '../aircraft';
+import { propulsionKind } from './kinds';
 
 /** Lapse of the propulsion kind at density ratio sigma (no throttle). */
 export function lapseAt(propulsion: Propulsion, sigma: number): number {
-  switch (propulsion.kind) {
-    case 'piston':
-      return pistonLapse(sigma);
-    case 'turbocharged-piston':
-      // sigma_crit is the standard day's (dT = 0) at the critical altitude.
-      return turbochargedPistonLapse(sigma, atmosphere(propulsion.criticalAltitudeM ?? 0, 0).sigma);
-    case 'turboprop':
-      return turbopropLapse(sigma, propulsion.lapseExponent);
-    case 'turbofan':
-      return turbofanLapse(sigma, propulsion.lapseExponent);
-    case 'electric':
-      return electricLapse();
-  }
+  return propulsionKind(propulsion.kind).lapse(sigma, propulsion);
 }
 
 /** alpha = lapse(sigma) x power setting, at a pressure altitude and ISA offset. */

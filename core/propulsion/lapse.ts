@@ -1,6 +1,6 @@
 /**
  * Lapse of rated sea-level power or thrust with air density, one model per
- * propulsion kind (METHODS.md section 5). sigma = rho/rho0 includes any ISA
+ * propulsion kind (core/methods.md section 5). sigma = rho/rho0 includes any ISA
  * temperature offset.
  */
 

@@ -1,11 +1,11 @@
 /**
  * Propeller-driven kinds size shaft power, not thrust.
  */
-import type { PropulsionKind } from '../model';
+import { propulsionKind, type PropulsionKind } from './kinds';
 
-/** True for kinds whose diagram axis is shaft power per weight (all but turbofan). */
+/** True for kinds whose diagram axis is shaft power per weight. */
 export function isPropellerDriven(kind: PropulsionKind): boolean {
-  return kind !== 'turbofan';
+  return propulsionKind(kind).propeller;
 }
 
 /** P/W = (T/W) V / eta_p [W/N], thrust power over propeller efficiency (Anderson, Introduction to Flight, power available). */

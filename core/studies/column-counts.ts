@@ -8,7 +8,7 @@
 import type { Boundary } from '../model';
 import { firstRowAtOrAbove } from './probability-grid';
 
-export interface ColumnCounts {
+interface ColumnCounts {
   ws: Float64Array;
   ys: Float64Array;
   /** counts[i * (ny + 1) + k]: samples whose first row at or above E(ws[i]) is k; k = ny means none. */

@@ -4,20 +4,9 @@
  * and tightened by it, against the nominal optimum.
  */
 import { loadingAxis, type Design, type LoadingAxis, type Requirement, type RequirementKind } from '../model';
+import { requirementKind } from '../requirements';
 import { STUDY_CAUTION } from './caution';
 import { optimumOf, sizeOf, type StudyOptimum } from './study-optimum';
-
-/** The value stepped for each kind and the way that relaxes it. */
-export const STEPPED_FIELDS: Readonly<Record<RequirementKind, { field: string; conceptField: string; relaxed: 'up' | 'down' }>> = {
-  stall: { field: 'speedMps', conceptField: 'speed', relaxed: 'up' },
-  'landing-ground-roll': { field: 'distanceM', conceptField: 'distance', relaxed: 'up' },
-  'takeoff-ground-roll': { field: 'distanceM', conceptField: 'distance', relaxed: 'up' },
-  cruise: { field: 'speedMps', conceptField: 'speed', relaxed: 'down' },
-  'climb-rate': { field: 'rateMps', conceptField: 'rate', relaxed: 'down' },
-  'climb-gradient': { field: 'gradient', conceptField: 'gradient', relaxed: 'down' },
-  ceiling: { field: 'altitudeM', conceptField: 'altitude', relaxed: 'down' },
-  'sustained-turn': { field: 'loadFactor', conceptField: 'loadFactor', relaxed: 'down' },
-};
 
 export interface CostCase {
   /** The stepped value, SI. */
@@ -81,8 +70,9 @@ function caseOf(design: Design, id: string, field: string, value: number, nomina
 
 /**
  * For every enabled requirement: relaxed = value x (1 + step) where up
- * relaxes, x (1 - step) where down does; tightened the other way. A turn's
- * load factor is kept at 1 or more.
+ * relaxes, x (1 - step) where down does; tightened the other way. The kind's
+ * descriptor names the value and any floor (a turn's load factor stays at 1
+ * or more).
  */
 export function requirementCosts(design: Design, options: { step?: number } = {}): RequirementCosts {
   const step = options.step ?? 0.1;
@@ -92,14 +82,14 @@ export function requirementCosts(design: Design, options: { step?: number } = {}
   const costs = design.requirements
     .filter((r) => r.enabled)
     .map((requirement): RequirementCost => {
-      const { field, conceptField, relaxed: direction } = STEPPED_FIELDS[requirement.kind];
+      const { field, conceptField, relaxed: direction, least } = requirementKind(requirement.kind).costStep;
       const value = (requirement as unknown as Record<string, number>)[field];
       const notes: string[] = [];
       const [up, down] = [value * (1 + step), value * (1 - step)];
       let [relaxedValue, tightenedValue] = direction === 'up' ? [up, down] : [down, up];
-      if (requirement.kind === 'sustained-turn' && relaxedValue < 1) {
-        relaxedValue = 1;
-        notes.push('The relaxed load factor is held at 1 (level flight); a turn needs n of 1 or more.');
+      if (least && relaxedValue < least.value) {
+        relaxedValue = least.value;
+        notes.push(least.note);
       }
       if (value === 0) notes.push(`The ${conceptField} is 0, so a relative step leaves it unchanged.`);
       return {

@@ -32,7 +32,7 @@ export {
 } from './monte-carlo';
 export { defaultProbabilityGrid, probabilityFrontier, PROBABILITY_LEVELS, type ProbabilityGrid } from './probability-grid';
 export { spreadOf, type Spread } from './percentiles';
-export { requirementCosts, STEPPED_FIELDS, type RequirementCosts, type RequirementCost, type CostCase } from './costs';
+export { requirementCosts, type RequirementCosts, type RequirementCost, type CostCase } from './costs';
 export { optimumOf as studyOptimum, plotRangeOf, type StudyOptimum } from './study-optimum';
 export { REQUIREMENT_TEMPLATES, APPLICABILITY_NOTE, type RequirementTemplate, type TemplateRequirement } from './templates';
 export { templateRequirement, type TemplateTarget, type TemplateInsertion } from './template-requirement';

@@ -10,7 +10,7 @@ export interface Spread {
 }
 
 /** Nearest-rank percentile of ascending values: the ceil(p N)-th smallest (common practice). */
-export function nearestRank(sorted: ArrayLike<number>, p: number): number {
+function nearestRank(sorted: ArrayLike<number>, p: number): number {
   const n = sorted.length;
   if (n === 0) return NaN;
   return sorted[Math.min(n - 1, Math.max(0, Math.ceil(p * n) - 1))];

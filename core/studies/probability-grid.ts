@@ -2,7 +2,7 @@
  * The grid a probability map is computed on, and reading it: the row a
  * required loading falls in, and the probability contours as curves.
  */
-import type { Design } from '../model';
+import { loadingAxis, type Design } from '../model';
 import { optimumOf, plotRangeOf } from './study-optimum';
 
 export interface ProbabilityGrid {
@@ -48,7 +48,7 @@ export function firstRowAtOrAbove(ys: Float64Array, v: number): number {
 export function defaultProbabilityGrid(design: Design, nx = 200, ny = 200): ProbabilityGrid {
   const optimum = optimumOf(design);
   const reference = Math.max(optimum?.loading ?? 0, design.designPoint?.loading ?? 0);
-  const top = reference > 0 ? 2 * reference : design.aircraft.propulsion.kind === 'turbofan' ? 1 : 30;
+  const top = reference > 0 ? 2 * reference : loadingAxis(design.aircraft.propulsion.kind) === 'thrustToWeight' ? 1 : 30;
   return { wingLoading: plotRangeOf(design), loading: [0, top], nx, ny };
 }
 

@@ -34,7 +34,7 @@ export function optimumOf(design: Design): StudyOptimum | null {
   return found ? { wingLoadingPa: found.wingLoadingPa, loading: found.loading, unbounded: found.unbounded } : null;
 }
 
-/** Wing area [m^2] and installed sea-level power [W] or thrust [N] at take-off mass (S = W/w, P = y W; METHODS.md section 7). */
+/** Wing area [m^2] and installed sea-level power [W] or thrust [N] at take-off mass (S = W/w, P = y W; core/methods.md section 7). */
 export function sizeOf(design: Design, point: StudyOptimum): { wingAreaM2: number; installed: number } {
   const weight = design.aircraft.takeoffMassKg * G0;
   return { wingAreaM2: weight / point.wingLoadingPa, installed: point.loading * weight };

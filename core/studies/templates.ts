@@ -1,12 +1,11 @@
 /**
- * Requirement templates from published certification rules: the confirmed
- * rows of METHODS.md section 8 only. Each is an ordinary concept-file
- * requirement (loftpoint-concept/1 syntax, values with units) that the
- * engineer inserts and may edit; the rule stays named in its label.
+ * Requirement templates from published certification rules, confirmed rows
+ * only (methods reference, section 8), each kept in its kind's descriptor.
+ * Each is an ordinary concept-file requirement (loftpoint-concept/1 syntax,
+ * values with units) that the engineer inserts and may edit; the rule stays
+ * named in its label.
  */
-
-import { PART_23_ROWS, SAILPLANE_ROWS } from './template-rows-part23';
-import { PART_25_ROWS } from './template-rows-part25';
+import { REQUIREMENT_DESCRIPTORS, type TemplateRow } from '../requirements';
 
 export const APPLICABILITY_NOTE =
   'Applicability depends on the certification basis: the applicable authority decides which rules apply, ' +
@@ -29,18 +28,7 @@ export interface RequirementTemplate {
   requirement: TemplateRequirement;
 }
 
-/** A rule as written in the tables, before the label and note are completed. */
-export interface TemplateRow {
-  id: string;
-  title: string;
-  source: string;
-  note: string;
-  engines?: number;
-  configurations?: readonly string[];
-  requirement: TemplateRequirement;
-}
-
-function toTemplate(row: TemplateRow): RequirementTemplate {
+function toTemplate({ code: _code, ...row }: TemplateRow): RequirementTemplate {
   const label = `${row.source}: ${row.title}`;
   return {
     ...row,
@@ -51,4 +39,9 @@ function toTemplate(row: TemplateRow): RequirementTemplate {
 }
 
 /** Every template, Part 23 first, then Part 25, then sailplanes. */
-export const REQUIREMENT_TEMPLATES: readonly RequirementTemplate[] = [...PART_23_ROWS, ...PART_25_ROWS, ...SAILPLANE_ROWS].map(toTemplate);
+const CODES: readonly TemplateRow['code'][] = ['part-23', 'part-25', 'sailplane'];
+
+/** Every template, Part 23 first, then Part 25, then sailplanes; within a code, kinds in registry order. */
+export const REQUIREMENT_TEMPLATES: readonly RequirementTemplate[] = CODES.flatMap((code) =>
+  REQUIREMENT_DESCRIPTORS.flatMap((d) => d.templates.filter((row) => row.code === code)),
+).map(toTemplate);

@@ -16,7 +16,7 @@ import { isCurveKind, type FieldRef } from './uncertain-fields';
  * JSON when given (a configuration without the key inherits it); otherwise a
  * configuration whose value equals clean's is taken to inherit it.
  */
-export function inheritingConfigurations(key: 'oswaldEfficiency' | 'clMax', design: Design, concept?: unknown): string[] {
+function inheritingConfigurations(key: 'oswaldEfficiency' | 'clMax', design: Design, concept?: unknown): string[] {
   const configurations = design.aircraft.configurations;
   const written = writtenConfigurations(concept);
   return Object.keys(configurations).filter((name) => {
@@ -93,7 +93,7 @@ export function affectedRequirements(ref: FieldRef, design: Design, targets: rea
   if (ref.scope === 'requirement') return [ref.id];
   if (ref.scope === 'aircraft') return curves.map((r) => r.id);
   // A configuration the aircraft lacks is flown as clean (core/constraints/flight-condition.ts).
-  const flies = (r: Requirement) => targets.includes(r.configuration in design.aircraft.configurations ? r.configuration : 'clean');
+  const flies = (r: Requirement) => targets.includes(Object.hasOwn(design.aircraft.configurations, r.configuration) ? r.configuration : 'clean');
   if (ref.key === 'clMax') return design.requirements.filter(flies).map((r) => r.id);
   return curves.filter(flies).map((r) => r.id);
 }

@@ -4,10 +4,13 @@
  * physical bounds it has, and which requirements it can move.
  */
 import type { Design, Requirement, RequirementKind } from '../model';
+import { propulsionKind, PROPULSION_DESCRIPTORS } from '../propulsion/kinds';
+import { REQUIREMENT_DESCRIPTORS, requirementKind } from '../requirements';
 
-export type AircraftKey = 'aspectRatio' | 'cdLinear' | 'lapseExponent';
-export type ConfigurationKey = 'cd0' | 'cd0Increment' | 'oswaldEfficiency' | 'clMax';
-export type RequirementKey = 'propellerEfficiency' | 'rollingFriction' | 'brakingFriction' | 'clGroundRun';
+type AircraftKey = 'aspectRatio' | 'cdLinear' | 'lapseExponent';
+type ConfigurationKey = 'cd0' | 'cd0Increment' | 'oswaldEfficiency' | 'clMax';
+/** propellerEfficiency, or an assumption of a kind's own with a typical range (rollingFriction, brakingFriction, clGroundRun...). */
+type RequirementKey = string;
 
 export type FieldRef =
   | { scope: 'aircraft'; key: AircraftKey }
@@ -17,13 +20,20 @@ export type FieldRef =
 const CONFIGURATIONS = 'aircraft.aero.configurations.';
 const REQUIREMENTS = 'requirements.';
 const CONFIGURATION_KEYS: readonly ConfigurationKey[] = ['cd0', 'cd0Increment', 'oswaldEfficiency', 'clMax'];
-const REQUIREMENT_KEYS: readonly RequirementKey[] = ['propellerEfficiency', 'rollingFriction', 'brakingFriction', 'clGroundRun'];
+/** Which kinds own each rangeable key of a requirement (propeller efficiency: every kind that uses it). */
+const KEY_OWNERS: ReadonlyMap<string, readonly RequirementKind[]> = (() => {
+  const owners = new Map<string, RequirementKind[]>([['propellerEfficiency', []]]);
+  for (const d of REQUIREMENT_DESCRIPTORS) {
+    if (d.propeller) owners.get('propellerEfficiency')?.push(d.kind);
+    for (const entry of d.typicalRanges) owners.set(entry.key, [...(owners.get(entry.key) ?? []), d.kind]);
+  }
+  return owners;
+})();
+const REQUIREMENT_KEYS: readonly RequirementKey[] = [...KEY_OWNERS.keys()];
 
-/** Kinds drawn as a wing-loading limit; they use no drag polar and no propulsion. */
-const LIMIT_KINDS: readonly RequirementKind[] = ['stall', 'landing-ground-roll'];
-
+/** Curves use the drag polar and the propulsion; limits use neither. */
 export function isCurveKind(kind: RequirementKind): boolean {
-  return !LIMIT_KINDS.includes(kind);
+  return requirementKind(kind).drawnAs === 'curve';
 }
 
 /** Parse a field path and check that this design has it and that it may carry a range. */
@@ -32,8 +42,9 @@ export function fieldRef(field: string, design: Design): { ok: true; ref: FieldR
   if (field === 'aircraft.aero.cdLinear') return { ok: true, ref: { scope: 'aircraft', key: 'cdLinear' } };
   if (field === 'aircraft.propulsion.lapseExponent') {
     const kind = design.aircraft.propulsion.kind;
-    if (kind !== 'turboprop' && kind !== 'turbofan') {
-      return { ok: false, message: `a ${kind} concept has no lapse exponent (only turboprop and turbofan use one)` };
+    if (propulsionKind(kind).lapseExponent === null) {
+      const users = PROPULSION_DESCRIPTORS.filter((d) => d.lapseExponent !== null).map((d) => d.kind);
+      return { ok: false, message: `a ${kind} concept has no lapse exponent (only ${users.join(' and ')} use one)` };
     }
     return { ok: true, ref: { scope: 'aircraft', key: 'lapseExponent' } };
   }
@@ -45,7 +56,7 @@ export function fieldRef(field: string, design: Design): { ok: true; ref: FieldR
 const RANGEABLE_HINT =
   'use aircraft.aero.aspectRatio, aircraft.aero.cdLinear, aircraft.propulsion.lapseExponent, ' +
   'aircraft.aero.configurations.NAME.(cd0|cd0Increment|oswaldEfficiency|clMax) or ' +
-  'requirements.ID.(propellerEfficiency|rollingFriction|brakingFriction|clGroundRun)';
+  `requirements.ID.(${REQUIREMENT_KEYS.join('|')})`;
 
 function configurationRef(rest: string, design: Design): { ok: true; ref: FieldRef } | { ok: false; message: string } {
   const dot = rest.lastIndexOf('.');
@@ -54,7 +65,7 @@ function configurationRef(rest: string, design: Design): { ok: true; ref: FieldR
   if (dot < 0 || !CONFIGURATION_KEYS.includes(key)) {
     return { ok: false, message: `a configuration's ranged value must be cd0, cd0Increment, oswaldEfficiency or clMax` };
   }
-  if (!(name in design.aircraft.configurations)) {
+  if (!Object.hasOwn(design.aircraft.configurations, name)) {
     const known = Object.keys(design.aircraft.configurations).join(', ');
     return { ok: false, message: `the concept has no configuration "${name}" (it has ${known})` };
   }
@@ -68,20 +79,18 @@ function requirementRef(rest: string, design: Design): { ok: true; ref: FieldRef
   const id = rest.slice(0, dot);
   const key = rest.slice(dot + 1) as RequirementKey;
   if (dot < 0 || !REQUIREMENT_KEYS.includes(key)) {
-    return { ok: false, message: `a requirement's ranged value must be propellerEfficiency, rollingFriction, brakingFriction or clGroundRun` };
+    return { ok: false, message: `a requirement's ranged value must be ${REQUIREMENT_KEYS.slice(0, -1).join(', ')} or ${REQUIREMENT_KEYS.at(-1)}` };
   }
   const requirement = design.requirements.find((r) => r.id === id);
   if (!requirement) return { ok: false, message: `no requirement has the id "${id}" (requirements are addressed by id)` };
   const kind = requirement.kind;
   if (key === 'propellerEfficiency') {
-    if (design.aircraft.propulsion.kind === 'turbofan') return { ok: false, message: 'a turbofan concept uses no propeller efficiency' };
-    if (!isCurveKind(kind)) return { ok: false, message: `a ${kind} requirement does not use propeller efficiency` };
-  }
-  if ((key === 'rollingFriction' || key === 'clGroundRun') && kind !== 'takeoff-ground-roll') {
-    return { ok: false, message: `${key} belongs to a takeoff-ground-roll requirement; "${id}" is ${kind}` };
-  }
-  if (key === 'brakingFriction' && kind !== 'landing-ground-roll') {
-    return { ok: false, message: `brakingFriction belongs to a landing-ground-roll requirement; "${id}" is ${kind}` };
+    const propulsion = design.aircraft.propulsion.kind;
+    if (!propulsionKind(propulsion).propeller) return { ok: false, message: `a ${propulsion} concept uses no propeller efficiency` };
+    if (!requirementKind(kind).propeller) return { ok: false, message: `a ${kind} requirement does not use propeller efficiency` };
+  } else {
+    const owners = KEY_OWNERS.get(key) ?? [];
+    if (!owners.includes(kind)) return { ok: false, message: `${key} belongs to a ${owners.join(' or ')} requirement; "${id}" is ${kind}` };
   }
   return { ok: true, ref: { scope: 'requirement', id, key } };
 }
@@ -118,15 +127,21 @@ export function boundsOf(ref: FieldRef): PhysicalBounds {
     case 'cdLinear':
       return bounds(-Infinity, Infinity);
     case 'cd0Increment':
-    case 'clGroundRun':
       return bounds(0, Infinity);
-    case 'rollingFriction':
-      return bounds(0, 1, false, true);
-    case 'brakingFriction':
     case 'oswaldEfficiency':
     case 'propellerEfficiency':
       return bounds(0, 1, true);
   }
+  return ownEntry(ref.key).bounds;
+}
+
+/** The descriptor entry of a kind's own rangeable assumption. */
+function ownEntry(key: string) {
+  for (const d of REQUIREMENT_DESCRIPTORS) {
+    const entry = d.typicalRanges.find((e) => e.key === key);
+    if (entry) return entry;
+  }
+  throw new Error(`no requirement kind has the assumption "${key}"`);
 }
 
 /** A short label for a chart bar: "Oswald efficiency (landing)", "Propeller efficiency (cruise)" (requirement id). */
@@ -138,12 +153,7 @@ export function labelOf(ref: FieldRef): string {
     const what = { cd0: 'CD0', cd0Increment: 'CD0 increment', oswaldEfficiency: 'Oswald efficiency', clMax: 'CLmax' }[ref.key];
     return `${what} (${ref.name})`;
   }
-  const what = {
-    propellerEfficiency: 'Propeller efficiency',
-    rollingFriction: 'Rolling friction',
-    brakingFriction: 'Braking friction',
-    clGroundRun: 'Ground-run CL',
-  }[ref.key];
+  const what = ref.key === 'propellerEfficiency' ? 'Propeller efficiency' : ownEntry(ref.key).label;
   return `${what} (${ref.id})`;
 }
 

@@ -20,7 +20,7 @@ const WARMUP = 300;
 const ROUNDS = 201;
 const BATCH = 10;
 
-/** alpha for the floor, written out per kind (METHODS.md section 5). */
+/** alpha for the floor, written out per kind (core/methods.md section 5). */
 function alphaOf(design: Design, r: Requirement): number {
   const p = design.aircraft.propulsion;
   const sigma = atmosphere(r.altitudeM, r.temperatureOffsetK).sigma;
@@ -84,7 +84,7 @@ function floor(design: Design, ws: Float64Array, out: Float64Array[], envelope: 
             if (Math.abs(step) <= 1e-12 * v) break;
           }
         }
-        v = Math.max(v, r.minimumSpeedFactor * Math.sqrt((2 * bw) / (rho * clMax)));
+        v = Math.max(v, ('minimumSpeedFactor' in r ? r.minimumSpeedFactor : 1.2) * Math.sqrt((2 * bw) / (rho * clMax)));
       }
       const q = 0.5 * rho * v * v;
       const cl = (nLoad * bw) / q;

@@ -53,7 +53,7 @@ if (!parsed || !parsed.ok) {
 }
 const { design, concept } = parsed;
 const block = typicalUncertainty(design, { seed: 20261202, samples: 10000 });
-// METHODS.md publishes no range for K1; +/-0.01 is a timing choice so that every listed assumption is ranged.
+// core/methods.md publishes no range for K1; +/-0.01 is a timing choice so that every listed assumption is ranged.
 block.parameters.push({ field: 'aircraft.aero.cdLinear', low: -0.01, high: 0.01, distribution: 'uniform' });
 const resolved = resolveUncertainty(block, design, concept);
 if (!resolved.ok) {

@@ -17,10 +17,10 @@ test('ranges: typical ranges, bands, the chance study with contours, cancel, and
   await expect(included).not.toHaveCount(0);
   const aspect = window.byTest('range-aircraft_aero_aspectRatio');
   await expect(aspect).toHaveAttribute('data-included', 'true');
-  // METHODS.md section 9: aspect ratio 6-8 for general aviation; the trainer's 7.4 lies inside it.
+  // core/methods.md section 9: aspect ratio 6-8 for general aviation; the trainer's 7.4 lies inside it.
   await expect(aspect.getByTestId('range-low')).toHaveValue('6');
   await expect(aspect.getByTestId('range-high')).toHaveValue('8');
-  await expect(aspect.getByTestId('range-source')).toContainText('METHODS.md section 9');
+  await expect(aspect.getByTestId('range-source')).toContainText('methods reference, section 9');
   // K1 has no published range, so it stays out.
   await expect(window.byTest('range-aircraft_aero_cdLinear')).toHaveAttribute('data-included', 'false');
   await window.shot('typical-ranges-filled');
@@ -168,7 +168,7 @@ test('removing a requirement takes its ranges with it, and undo brings both back
   const cruise = window.byTest('range-requirements_survey-cruise_propellerEfficiency');
   await cruise.getByTestId('range-include').check();
   await expect(cruise).toHaveAttribute('data-included', 'true');
-  // METHODS.md section 9: cruise propeller efficiency about 0.8, taken as 0.75-0.85; the drone's 0.75 lies at its low end.
+  // core/methods.md section 9: cruise propeller efficiency about 0.8, taken as 0.75-0.85; the drone's 0.75 lies at its low end.
   await expect(cruise.getByTestId('range-low')).toHaveValue('0.75');
 
   await window.byTest('tab-requirements').click();

@@ -5,7 +5,7 @@ import { jetEvaluation, trainerEvaluation } from './fixture';
 
 // NIST SP 811 (2008), Appendix B: 1 lbf/ft^2 = 47.88026 Pa; 1 hp (550 ft.lbf/s) = 745.6999 W; 1 lbf = 4.448222 N.
 const PSF_PA = 47.880258980335843;
-const WN_TO_HP_PER_LBF = 4.4482216152605 / 745.69987158227022; // 0.0059652, as in METHODS.md section 7
+const WN_TO_HP_PER_LBF = 4.4482216152605 / 745.69987158227022; // 0.0059652, as in core/methods.md section 7
 
 describe('chartData', () => {
   it('keeps SI numbers for the si system', () => {

@@ -1,6 +1,6 @@
 /**
  * Real designs for the study-chart tests: the invented demo concepts, with
- * an uncertainty block of METHODS.md typical ranges (core typicalUncertainty)
+ * an uncertainty block of core/methods.md typical ranges (core typicalUncertainty)
  * or one written for the test.
  */
 import { DEMO_CONCEPTS, evaluateDesign, parseConcept, typicalUncertainty, type ConceptJson, type Design, type Evaluation, type UncertainParameter } from '../../core';
@@ -35,7 +35,7 @@ export function studied(concept: unknown): Studied {
   };
 }
 
-/** A demo with every assumption that has a METHODS.md typical range ranged over it. */
+/** A demo with every assumption that has a core/methods.md typical range ranged over it. */
 export function withTypicalRanges(slug: string, options: { samples?: number; seed?: number } = {}): ConceptJson {
   const concept = demoConcept(slug);
   const base = parseConcept(concept);

@@ -1,6 +1,6 @@
 /**
  * `loftpoint evaluate`, run in-process through main() for speed, plus a few
- * real runs of the bin. Reference relations come from METHODS.md section 7
+ * real runs of the bin. Reference relations come from core/methods.md section 7
  * (sizing S = W_TO / w, P = (P/W) W_TO; margins as relative loading) and
  * DESIGN.md ("The evaluation"); unit factors from NIST SP 811.
  */
@@ -17,7 +17,7 @@ import { DEMO_CONCEPTS, evaluateDesign, parseConcept, type CurveBoundaryJson, ty
 const ROOT = resolve(__dirname, '../..');
 const G0 = 9.80665; // standard gravity, m/s^2 (CGPM 1901, exact)
 const PSF_PA = 47.880258980335843; // 1 lbf/ft^2 in Pa (NIST SP 811, Appendix B)
-const HP_PER_LBF_PER_W_PER_N = 4.4482216152605 / 745.69987158227022; // hp/lbf per W/N (NIST SP 811; METHODS.md 7: 0.0059652)
+const HP_PER_LBF_PER_W_PER_N = 4.4482216152605 / 745.69987158227022; // hp/lbf per W/N (NIST SP 811; core/methods.md section 7: 0.0059652)
 const CAUTION = /certification requirements come from the applicable authority.*licensed engineering review/s;
 
 let dir: string;
@@ -156,7 +156,7 @@ describe('loftpoint evaluate FILE --json', () => {
       expect(optimum.margins.map((m) => m.id)).toEqual(ids);
       for (const id of optimum.active) expect(Math.abs(optimum.margins.find((m) => m.id === id)!.margin)).toBeLessThan(2e-3);
       for (const margin of optimum.margins) expect(margin.margin).toBeGreaterThan(-1e-6);
-      // No feasible sample needs less loading than the optimum (METHODS.md 7: w* = argmin E).
+      // No feasible sample needs less loading than the optimum (core/methods.md section 7: w* = argmin E).
       const cap = Math.min(...json.boundaries.filter((b): b is LimitBoundaryJson => 'wingLoadingMax' in b).map((b) => b.wingLoadingMax));
       xs.forEach((w, i) => {
         if (w > cap) return;
@@ -165,7 +165,7 @@ describe('loftpoint evaluate FILE --json', () => {
         expect(Math.max(...(values as number[]))).toBeGreaterThanOrEqual(y * (1 - 1e-6));
       });
 
-      // Design point: feasible exactly when every margin is met; limit margins are 1 - w/w_lim (METHODS.md 7).
+      // Design point: feasible exactly when every margin is met; limit margins are 1 - w/w_lim (core/methods.md section 7).
       const point = json.designPoint!;
       expect(typeof point.feasible).toBe('boolean');
       expect(point.margins.map((m) => m.id)).toEqual(ids);
@@ -176,7 +176,7 @@ describe('loftpoint evaluate FILE --json', () => {
         expect(margin).toBeCloseTo(1 - point.wingLoading / boundary.wingLoadingMax, 9);
       }
 
-      // Speeds (m/s) and sizing at take-off mass (METHODS.md 7: S = W_TO / w, P = (P/W) W_TO).
+      // Speeds (m/s) and sizing at take-off mass (core/methods.md section 7: S = W_TO / w, P = (P/W) W_TO).
       for (const key of ['stall', 'minimumDrag', 'minimumPower'] as const) expect(json.speeds[key]).toBeGreaterThan(0);
       const weight = Number.parseFloat(demo.concept.aircraft.takeoffMass as string) * (/(^|\s)lb$/.test(demo.concept.aircraft.takeoffMass as string) ? 0.45359237 : 1) * G0;
       expect(json.sizing!.wingArea).toBeCloseTo(weight / point.wingLoading, 6);

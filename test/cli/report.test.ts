@@ -117,7 +117,7 @@ describe('loftpoint report FILE --out PATH', () => {
     expect(stdout).toContain('constraint diagram with bands and probability contours (SVG)');
     const doc = xml(readFileSync(out, 'utf8'));
     expect(doc.getElementsByTagName('parsererror')).toHaveLength(0);
-    // Landing CLmax moves the stall limit and the landing-roll limit (METHODS.md section 6), nothing else.
+    // Landing CLmax moves the stall limit and the landing-roll limit (core/methods.md section 6), nothing else.
     expect([...doc.querySelectorAll('[data-role="band"]')].map((g) => g.getAttribute('data-id'))).toEqual(['stall', 'landing-grass']);
     expect(doc.querySelectorAll('[data-role="contour"]').length).toBeGreaterThan(0);
     expect(doc.documentElement.textContent).toContain('Monte Carlo: 400 samples, seed 5');

@@ -20,7 +20,7 @@ const relative = (a: number, b: number) => Math.abs(a / b - 1);
 
 describe('U.S. Standard Atmosphere 1976', () => {
   it('has the published sea-level values', () => {
-    // USSA 1976 Table 1 (also METHODS.md section 1): rho0 = 1.2250 kg/m^3, a0 = 340.294 m/s.
+    // USSA 1976 Table 1 (also core/methods.md section 1): rho0 = 1.2250 kg/m^3, a0 = 340.294 m/s.
     expect(RHO0).toBeCloseTo(1.225, 4);
     expect(A0).toBeCloseTo(340.294, 3);
     expect(isaTemperature(0)).toBe(288.15);
@@ -28,7 +28,7 @@ describe('U.S. Standard Atmosphere 1976', () => {
   });
 
   it('chains the published layer base pressures from sea level', () => {
-    // USSA 1976 Table 4 (also METHODS.md section 1), printed to 6 significant figures.
+    // USSA 1976 Table 4 (also core/methods.md section 1), printed to 6 significant figures.
     const bases: Array<[number, number, number]> = [
       [11000, 216.65, 22632.1],
       [20000, 216.65, 5474.89],
@@ -86,7 +86,7 @@ describe('U.S. Standard Atmosphere 1976', () => {
 });
 
 describe('ISA temperature offset', () => {
-  it('keeps pressure and scales density by T_std / T (METHODS.md section 1, common practice)', () => {
+  it('keeps pressure and scales density by T_std / T (core/methods.md section 1, common practice)', () => {
     for (const h of [0, 2200, 6000, 12000]) {
       for (const dT of [-30, 15, 25]) {
         const hot = atmosphere(h, dT);
@@ -157,7 +157,7 @@ describe('airspeeds', () => {
   });
 
   it('CAS and EAS agree to 0.1 % at stall speeds below 3000 m (M at most 0.15)', () => {
-    // The approximation V_E = V_C for stall limits, METHODS.md section 2.
+    // The approximation V_E = V_C for stall limits, core/methods.md section 2.
     for (const h of [0, 1000, 2200, 3000]) {
       const air = atmosphere(h, 25);
       const tas = 0.15 * air.speedOfSoundMps;

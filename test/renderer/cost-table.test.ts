@@ -2,7 +2,7 @@
  * What each requirement costs, as the window's table
  * (app/renderer/lib/studies/cost-table.ts). Checks: installed power is
  * P/W x W at take-off weight, so its change is the loading change times the
- * weight (METHODS.md section 7; W = m g0, g0 = 9.80665 m/s^2 by definition,
+ * weight (core/methods.md section 7; W = m g0, g0 = 9.80665 m/s^2 by definition,
  * CGPM 1901); 1 hp = 745.69987158227 W (NIST SP 811); relaxing a requirement
  * never needs more power at the optimum (a larger feasible set has a least
  * value no greater: common practice); a stall speed tightened by 50 % to

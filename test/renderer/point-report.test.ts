@@ -23,7 +23,7 @@ describe('pointReporter', () => {
     expect(fast.speeds.stall).toBeCloseTo(evaluation.speeds.stall, 9);
   });
 
-  it('sizes a dragged point as S = m g0 / (W/S) and P = (P/W) m g0 (METHODS.md section 7)', () => {
+  it('sizes a dragged point as S = m g0 / (W/S) and P = (P/W) m g0 (core/methods.md section 7)', () => {
     const at = report({ wingLoadingPa: 700, loading: 12 })!;
     const weight = design.aircraft.takeoffMassKg * G0;
     expect(at.sizing!.wingArea).toBeCloseTo(weight / 700, 9);

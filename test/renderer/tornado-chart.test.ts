@@ -41,7 +41,7 @@ describe('studyRanges', () => {
     expect(ranges.whose).toBe('typical');
     expect(ranges.ranges.length).toBeGreaterThan(5);
     for (const range of ranges.ranges) {
-      expect(range.source, range.field).toMatch(/METHODS\.md section \d/);
+      expect(range.source, range.field).toMatch(/methods reference, section \d/);
       expect(range.low).toBeLessThanOrEqual(range.nominal);
       expect(range.nominal).toBeLessThanOrEqual(range.high);
     }

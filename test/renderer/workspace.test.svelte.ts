@@ -12,7 +12,7 @@ describe('Workspace', () => {
     const index = (workspace.document.requirements as Array<{ id: string }>).findIndex((r) => r.id === 'cruise');
     workspace.edit(setIn(workspace.document, ['requirements', index, 'speed'], '140 kt'));
     const after = workspace.current!.evaluation.optimum!.powerToWeight!;
-    // A faster cruise needs more power (master equation, METHODS.md section 6).
+    // A faster cruise needs more power (master equation, core/methods.md section 6).
     expect(after).toBeGreaterThan(before);
     workspace.undo();
     expect(workspace.current!.evaluation.optimum!.powerToWeight).toBe(before);

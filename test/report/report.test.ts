@@ -6,7 +6,7 @@
  * its stall limit, w = 1/2 rho0 V^2 CLmax (Anderson, Introduction to Flight,
  * stalling speed) with rho0 = 1.225 kg/m^3 (U.S. Standard Atmosphere 1976),
  * V = 45 kt = 45 x 1852/3600 m/s (NIST SP 811), CLmax 2.05 (the demo's
- * landing configuration); the METHODS.md typical range of CD0 for light
+ * landing configuration); the core/methods.md typical range of CD0 for light
  * aircraft is 0.025-0.035 (common practice).
  */
 import { describe, expect, it } from 'vitest';
@@ -133,17 +133,17 @@ describe('buildReport', () => {
     expect(trainer.querySelectorAll('#costs tbody tr').length).toBe(2 * demoConcept('trainer').requirements.length);
   });
 
-  it('studies a concept without ranges on the typical ranges of METHODS.md, and says so', () => {
+  it('studies a concept without ranges on the typical ranges of core/methods.md, and says so', () => {
     const doc = parse(buildReport(input(demoConcept('trainer'))));
     expect(doc.querySelector('#studies h2')?.textContent).toBe('Studies on typical ranges');
-    expect(doc.querySelector('#studies .notice')?.textContent).toMatch(/gives no ranges.*typical ranges of METHODS\.md/);
+    expect(doc.querySelector('#studies .notice')?.textContent).toMatch(/gives no ranges.*typical ranges of the methods reference/);
     const assumptions = doc.querySelector('#assumptions')!.textContent!;
     expect(assumptions).toContain('Typical ranges used by the studies');
-    // Light-aircraft CD0 0.025-0.035 (METHODS.md section 9, common practice).
+    // Light-aircraft CD0 0.025-0.035 (core/methods.md section 9, common practice).
     const cd0 = [...doc.querySelectorAll('#assumptions tbody tr')].find((row) => row.textContent?.includes('aircraft.aero.configurations.clean.cd0'))!;
     expect(cd0.textContent).toContain('0.025');
     expect(cd0.textContent).toContain('0.035');
-    expect(cd0.textContent).toContain('METHODS.md section 9');
+    expect(cd0.textContent).toContain('methods reference, section 9');
   });
 
   it('reports in US customary units', () => {

@@ -1,6 +1,6 @@
 /**
  * Demo: a small twin-turbofan business jet. An invented scenario; the
- * numbers sit in METHODS.md's typical ranges and follow the rules named on
+ * numbers sit in the methods reference's (core/methods.md) typical ranges and follow the rules named on
  * each requirement.
  */
 import { DEMO_CAUTION, type DemoConcept } from './demo';

@@ -1,6 +1,6 @@
 /**
  * Demo: a battery-electric survey drone. An invented scenario; the numbers
- * sit in METHODS.md's typical ranges for small unmanned aircraft.
+ * sit in the methods reference's (core/methods.md) typical ranges for small unmanned aircraft.
  */
 import { DEMO_CAUTION, type DemoConcept } from './demo';
 

@@ -1,6 +1,6 @@
 /**
  * Demo: a two-seat piston trainer for a flying club that operates from a
- * grass field. An invented scenario; the numbers sit in METHODS.md's
+ * grass field. An invented scenario; the numbers sit in the methods reference's (core/methods.md)
  * typical ranges and follow the rules named on each requirement.
  */
 import { DEMO_CAUTION, type DemoConcept } from './demo';

@@ -1,6 +1,6 @@
 /**
  * Demo: a twin-turboprop utility aircraft for a hot-and-high mountain
- * strip. An invented scenario; the numbers sit in METHODS.md's typical
+ * strip. An invented scenario; the numbers sit in the methods reference's (core/methods.md) typical
  * ranges and follow the rules named on each requirement.
  */
 import { DEMO_CAUTION, type DemoConcept } from './demo';

@@ -12,7 +12,7 @@ describe('inducedDragFactor', () => {
 
 describe('dragCoefficient', () => {
   it('adds zero-lift, linear and induced drag', () => {
-    // C_D = C_D0 + K1 C_L + K C_L^2 (METHODS.md section 3): 0.03 + (-0.01)(0.5) + 0.05(0.25) = 0.0375.
+    // C_D = C_D0 + K1 C_L + K C_L^2 (core/methods.md section 3): 0.03 + (-0.01)(0.5) + 0.05(0.25) = 0.0375.
     const polar: Polar = { cd0: 0.03, k1: -0.01, k: 0.05, clMax: 1.5 };
     assertInDelta(dragCoefficient(polar, 0.5), 0.0375, 1e-15);
   });

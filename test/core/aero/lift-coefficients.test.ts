@@ -37,14 +37,14 @@ describe('characteristic lift coefficients with K1 = 0', () => {
   });
 
   it('gives V_md / V_mp = 3^(1/4) = 1.316', () => {
-    // Anderson, Introduction to Flight, textbook identity; METHODS.md section 4.
+    // Anderson, Introduction to Flight, textbook identity; core/methods.md section 4.
     const ratio = speedForLiftCoefficient(1000, 1.225, minimumDragLiftCoefficient(clean)) / speedForLiftCoefficient(1000, 1.225, minimumPowerLiftCoefficient(clean));
     assertInDelta(ratio, Math.pow(3, 0.25), 1e-12);
     assertInDelta(ratio, 1.316, 5e-4);
   });
 
   it('gives (L/D) at minimum power = (sqrt 3 / 2)(L/D)max', () => {
-    // Anderson, Introduction to Flight, textbook identity; METHODS.md section 4.
+    // Anderson, Introduction to Flight, textbook identity; core/methods.md section 4.
     assertRelative(liftToDrag(clean, minimumPowerLiftCoefficient(clean)), (Math.sqrt(3) / 2) * maximumLiftToDrag(clean), 1e-12);
   });
 
@@ -56,7 +56,7 @@ describe('characteristic lift coefficients with K1 = 0', () => {
   });
 
   it('puts the jet best-range speed at 3^(1/4) V_md', () => {
-    // Anderson, Introduction to Flight: jet maximum range at C_Di = C_D0/3, V_mr = 3^(1/4) V_md (METHODS.md section 4).
+    // Anderson, Introduction to Flight: jet maximum range at C_Di = C_D0/3, V_mr = 3^(1/4) V_md (core/methods.md section 4).
     const ratio = speedForLiftCoefficient(1000, 1.225, bestRangeLiftCoefficient(clean)) / speedForLiftCoefficient(1000, 1.225, minimumDragLiftCoefficient(clean));
     assertInDelta(ratio, Math.pow(3, 0.25), 1e-12);
   });
@@ -67,7 +67,7 @@ describe('characteristic lift coefficients with a linear term', () => {
     const polar: Polar = { ...clean, k1 };
 
     it(`keeps C_L,md = sqrt(C_D0/K) with K1 = ${k1}, as a scan of C_L/C_D confirms`, () => {
-      // d(C_D/C_L)/dC_L = -C_D0/C_L^2 + K has no K1 (METHODS.md section 4); the scan is independent.
+      // d(C_D/C_L)/dC_L = -C_D0/C_L^2 + K has no K1 (core/methods.md section 4); the scan is independent.
       const scanned = argmax((c) => c / dragCoefficient(polar, c));
       assertInDelta(minimumDragLiftCoefficient(polar), scanned, 2e-5);
       expect(minimumDragLiftCoefficient(polar)).toBe(minimumDragLiftCoefficient(clean));
@@ -80,7 +80,7 @@ describe('characteristic lift coefficients with a linear term', () => {
     });
 
     it(`gives (L/D)max = 1/(2 sqrt(K C_D0) + K1) with K1 = ${k1}`, () => {
-      // METHODS.md section 4; the scan of C_L/C_D is independent.
+      // core/methods.md section 4; the scan of C_L/C_D is independent.
       const scanned = argmax((c) => c / dragCoefficient(polar, c));
       assertRelative(maximumLiftToDrag(polar), liftToDrag(polar, scanned), 1e-8);
     });

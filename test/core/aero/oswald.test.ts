@@ -4,12 +4,12 @@ import { assertInDelta } from '../helpers/asserts';
 
 describe('oswaldStraightWing', () => {
   it('gives 0.811 at aspect ratio 8', () => {
-    // Raymer, Aircraft Design: A Conceptual Approach, 4th ed., eq. 12.48 (from memory): AR 8 -> 0.811, as METHODS.md section 3 quotes.
+    // Raymer, Aircraft Design: A Conceptual Approach, 4th ed., eq. 12.48 (from memory): AR 8 -> 0.811, as core/methods.md section 3 quotes.
     assertInDelta(oswaldStraightWing(8), 0.811, 5e-4);
   });
 
   it('falls as aspect ratio grows, staying within the 0.7-0.95 typical band for light-aircraft ratios', () => {
-    // Typical e 0.7-0.95 (METHODS.md section 9, common practice) for AR 6-10.
+    // Typical e 0.7-0.95 (core/methods.md section 9, common practice) for AR 6-10.
     let previous = Infinity;
     for (const ar of [6, 7, 8, 9, 10]) {
       const e = oswaldStraightWing(ar);

@@ -3,7 +3,7 @@ import { parseConcept, type ParsedConcept } from '../../../core/concept';
 import type { Design, PropulsionKind, Requirement } from '../../../core/model';
 import { conceptWith, type Editable } from './fixture';
 
-// Defaults from DESIGN.md ("The concept file") and METHODS.md section 12.
+// Defaults from DESIGN.md ("The concept file") and core/methods.md section 11.
 const FT_PER_MIN = 0.00508; // NIST SP 811, exact
 
 function design(parsed: ParsedConcept): Design {
@@ -103,7 +103,7 @@ describe('parseConcept: defaults', () => {
     expect(byId(d, 'climb-rate')).not.toHaveProperty('speedMps');
     expect(byId(d, 'climb-rate')).toMatchObject({ rateMps: expect.closeTo(800 * FT_PER_MIN, 12) });
     expect(byId(d, 'climb-gradient')).toMatchObject({ gradient: 0.083, enginesInoperative: 0, speedFactor: 1.2 });
-    // Service ceiling at 100 ft/min = 0.508 m/s (Anderson, Raymer; METHODS.md section 6).
+    // Service ceiling at 100 ft/min = 0.508 m/s (Anderson, Raymer; core/methods.md section 6).
     expect(byId(d, 'ceiling')).toMatchObject({ rateMps: expect.closeTo(0.508, 12), minimumSpeedFactor: 1.2 });
   });
 
@@ -121,7 +121,7 @@ describe('parseConcept: defaults', () => {
     ['turboprop', 0.75],
     ['turbofan', 1],
     ['electric', 1],
-  ])('sets the lapse exponent of a %s to %d (METHODS.md section 5)', (kind, m) => {
+  ])('sets the lapse exponent of a %s to %d (core/methods.md section 5)', (kind, m) => {
     const d = design(parseConcept(conceptWith([{ id: 'c', kind: 'cruise', speed: '200 kt' }], { propulsion: { kind } })));
     expect(d.aircraft.propulsion.lapseExponent).toBe(m);
   });

@@ -77,16 +77,16 @@ describe('demo scenarios', () => {
     const { design } = demo('trainer');
     expect(design.aircraft.takeoffMassKg).toBe(750);
     expect(design.aircraft.propulsion).toMatchObject({ kind: 'piston', engines: 1 });
-    // CS-VLA 49: VS0 at most 45 kt CAS (METHODS.md section 8, from memory); 1 kt = 1852/3600 m/s.
+    // CS-VLA 49: VS0 at most 45 kt CAS (core/methods.md section 8, from memory); 1 kt = 1852/3600 m/s.
     const [stall] = requirement(design, 'stall');
     expect(stall).toMatchObject({ configuration: 'landing', speedMps: expect.closeTo((45 * 1852) / 3600, 9) });
-    // Short grass: rolling friction about 0.05 (METHODS.md section 9, common practice).
+    // Short grass: rolling friction about 0.05 (core/methods.md section 9, common practice).
     expect(requirement(design, 'takeoff-ground-roll')[0]).toMatchObject({ rollingFriction: 0.05 });
     expect(requirement(design, 'landing-ground-roll')).toHaveLength(1);
     expect(requirement(design, 'cruise')).toHaveLength(1);
     expect(requirement(design, 'climb-rate')).toHaveLength(1);
     expect(requirement(design, 'ceiling')).toHaveLength(1);
-    // 14 CFR 23.65(a): 8.3 % all engines, take-off flaps (METHODS.md section 8, confirmed).
+    // 14 CFR 23.65(a): 8.3 % all engines, take-off flaps (core/methods.md section 8, confirmed).
     expect(requirement(design, 'climb-gradient')[0]).toMatchObject({ gradient: 0.083, configuration: 'takeoff' });
   });
 
@@ -96,7 +96,7 @@ describe('demo scenarios', () => {
     const takeoff = requirement(design, 'takeoff-ground-roll')[0];
     expect(takeoff).toMatchObject({ altitudeM: 2200, temperatureOffsetK: 25 });
     expect(requirement(design, 'landing-ground-roll')[0]).toMatchObject({ altitudeM: 2200, temperatureOffsetK: 25 });
-    // 14 CFR 23.2120(b)(3): 2 % one engine out at 400 ft (METHODS.md section 8, confirmed).
+    // 14 CFR 23.2120(b)(3): 2 % one engine out at 400 ft (core/methods.md section 8, confirmed).
     const oei = requirement(design, 'climb-gradient')[0];
     expect(oei).toMatchObject({ gradient: 0.02, enginesInoperative: 1, temperatureOffsetK: 25 });
     expect(oei.altitudeM - takeoff.altitudeM).toBeCloseTo(400 * 0.3048, -1);
@@ -105,7 +105,7 @@ describe('demo scenarios', () => {
   it('business jet: two turbofans, 2.4 % second segment one engine out, cruise below take-off mass, ceiling', () => {
     const { design } = demo('business-jet');
     expect(design.aircraft.propulsion).toMatchObject({ kind: 'turbofan', engines: 2 });
-    // 14 CFR 25.121(b): 2.4 % for two engines, gear up, take-off flaps (METHODS.md section 8, confirmed).
+    // 14 CFR 25.121(b): 2.4 % for two engines, gear up, take-off flaps (core/methods.md section 8, confirmed).
     expect(requirement(design, 'climb-gradient')[0]).toMatchObject({ gradient: 0.024, enginesInoperative: 1 });
     expect(requirement(design, 'cruise')[0].massFraction).toBeLessThan(1);
     expect(requirement(design, 'ceiling')).toHaveLength(1);

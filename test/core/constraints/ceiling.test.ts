@@ -2,7 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { minimumPowerLiftCoefficient } from '../../../core/aero/lift-coefficients';
 import { dragCoefficient } from '../../../core/aero/drag-polar';
 import { atmosphere } from '../../../core/atmosphere';
-import { ceilingBoundary, climbRateBoundary, flightCondition } from '../../../core/constraints';
+import { flightCondition } from '../../../core/constraints';
+import { ceilingBoundary } from '../../../core/constraints/ceiling';
+import { climbRateBoundary } from '../../../core/constraints/climb-rate';
 import { FOOT_PER_MINUTE_MPS } from '../../../core/units/factors';
 import { aircraft, ceiling, climbRate } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';
@@ -32,7 +34,7 @@ describe('ceilingBoundary', () => {
   });
 
   it('is the 100 ft/min climb at the ceiling altitude at the best-rate speed', () => {
-    // Service ceiling: 100 ft/min residual climb (Anderson; Raymer; METHODS.md section 8).
+    // Service ceiling: 100 ft/min residual climb (Anderson; Raymer; core/methods.md section 6.3).
     const ac = aircraft({ kind: 'turboprop', engines: 2 });
     const atCeiling = curveOf(ceilingBoundary(ceiling(7000), ac));
     const asClimb = curveOf(climbRateBoundary(climbRate(100 * FOOT_PER_MINUTE_MPS, { altitudeM: 7000 }), ac));

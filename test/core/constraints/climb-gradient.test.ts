@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { climbGradientBoundary, engineOutFactor } from '../../../core/constraints';
+import { engineOutFactor } from '../../../core/constraints';
+import { climbGradientBoundary } from '../../../core/constraints/climb-gradient';
 import { aircraft, climbGradient } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';
 import { curveOf } from './curve';
@@ -10,7 +11,7 @@ const twinProp = aircraft({ kind: 'electric', engines: 2, aspectRatio: 8.5, clea
 
 describe('engineOutFactor', () => {
   const table: Array<[number, number, number]> = [
-    // N/(N - k) (METHODS.md section 6): all thrust must come from the engines still running.
+    // N/(N - k) (core/methods.md section 6): all thrust must come from the engines still running.
     [2, 1, 2],
     [3, 1, 1.5],
     [4, 1, 4 / 3],
@@ -38,13 +39,13 @@ describe('climbGradientBoundary', () => {
   });
 
   it('is horizontal for a jet', () => {
-    // With V/V_s fixed, the jet boundary does not depend on w (METHODS.md section 6).
+    // With V/V_s fixed, the jet boundary does not depend on w (core/methods.md section 6).
     const curve = curveOf(climbGradientBoundary(climbGradient(0.024, { enginesInoperative: 1 }), twinJet));
     assertRelative(curve.required(6000), curve.required(1000), 1e-12);
   });
 
   it('grows as sqrt(w) for a propeller', () => {
-    // P/W = (T/W) V / eta with V proportional to sqrt(w) (METHODS.md section 6).
+    // P/W = (T/W) V / eta with V proportional to sqrt(w) (core/methods.md section 6).
     const curve = curveOf(climbGradientBoundary(climbGradient(0.015, { enginesInoperative: 1 }), twinProp));
     assertRelative(curve.required(4000) / curve.required(1000), 2, 1e-12);
   });

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { minimumPowerLiftCoefficient } from '../../../core/aero/lift-coefficients';
 import { speedForLiftCoefficient, stallSpeed } from '../../../core/aero/speeds';
-import { bestRateSpeed, climbRateBoundary, flightCondition, jetBestRateSpeed, loadingRequired } from '../../../core/constraints';
+import { bestRateSpeed, flightCondition, jetBestRateSpeed, loadingRequired } from '../../../core/constraints';
+import { climbRateBoundary } from '../../../core/constraints/climb-rate';
 import { aircraft, climbRate } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';
 import { curveOf } from './curve';
@@ -24,7 +25,7 @@ function scanBestSpeed(f: (v: number) => number, from: number, to: number): numb
 
 describe('best-rate speed', () => {
   it("equals Anderson's closed form V_(R/C)max for a jet (K1 = 0)", () => {
-    // Anderson, Introduction to Flight, maximum rate of climb of a jet (METHODS.md section 6):
+    // Anderson, Introduction to Flight, maximum rate of climb of a jet (core/methods.md section 6):
     // V = {(w/(3 rho C_D0))[T/W + sqrt((T/W)^2 + 12 C_D0 K)]}^(1/2), T/W the thrust that just gives RC at best.
     const rc = 15;
     const c = flightCondition(climbRate(rc), jet);
@@ -44,7 +45,7 @@ describe('best-rate speed', () => {
   });
 
   it('equals the minimum-power speed for a propeller', () => {
-    // With eta constant the best-rate speed is V_mp (Anderson, Introduction to Flight; METHODS.md section 6).
+    // With eta constant the best-rate speed is V_mp (Anderson, Introduction to Flight; core/methods.md section 6).
     const c = flightCondition(climbRate(5), prop);
     const v = bestRateSpeed(c, 700, 5, 1.2);
     assertRelative(v, speedForLiftCoefficient(700, 1.225, minimumPowerLiftCoefficient(c.polar)), 1e-7); // rho0 1.2250 (USSA 1976)
@@ -52,12 +53,12 @@ describe('best-rate speed', () => {
   });
 
   it('is the jet quartic root for zero rate: V_md', () => {
-    // 2aV^4 - 2b = 0 gives V^4 = b/a, the minimum-drag speed (METHODS.md section 6).
+    // 2aV^4 - 2b = 0 gives V^4 = b/a, the minimum-drag speed (core/methods.md section 6).
     assertRelative(jetBestRateSpeed(2e-6, 300, 0), Math.pow(300 / 2e-6, 0.25), 1e-12);
   });
 
   it('is floored at 1.2 V_s for a typical light aircraft, whose C_L,mp exceeds C_Lmax/1.44', () => {
-    // 14 CFR 23.65/23.67 climb-speed minimum 1.2 V_s; METHODS.md section 6 notes the floor is usually active for propellers.
+    // 14 CFR 23.65/23.67 climb-speed minimum 1.2 V_s; core/methods.md section 6 notes the floor is usually active for propellers.
     const light = aircraft({ aspectRatio: 7.5, clean: { cd0: 0.03, oswaldEfficiency: 0.8, clMax: 1.5 } });
     const c = flightCondition(climbRate(3.5), light);
     expect(minimumPowerLiftCoefficient(c.polar)).toBeGreaterThan(1.5 / 1.44);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { atmosphere } from '../../../core/atmosphere';
-import { landingGroundRollBoundary, touchdownSpeedForRoll } from '../../../core/constraints';
+import { landingGroundRollBoundary, touchdownSpeedForRoll } from '../../../core/constraints/landing-ground-roll';
 import { G0 } from '../../../core/units/factors';
 import { aircraft, landingRoll } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';

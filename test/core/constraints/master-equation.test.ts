@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { minimumDragLiftCoefficient, maximumLiftToDrag } from '../../../core/aero/lift-coefficients';
 import { speedForLiftCoefficient } from '../../../core/aero/speeds';
-import { cruiseBoundary, flightCondition, sustainedTurnBoundary, thrustLoadingRequired } from '../../../core/constraints';
+import { flightCondition, thrustLoadingRequired } from '../../../core/constraints';
+import { cruiseBoundary } from '../../../core/constraints/cruise';
+import { sustainedTurnBoundary } from '../../../core/constraints/sustained-turn';
 import { aircraft, cruise, sustainedTurn } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';
 import { curveOf } from './curve';
@@ -24,7 +26,7 @@ describe('master equation', () => {
   });
 
   it('scales to the sea-level rating and take-off weight by beta/alpha', () => {
-    // Mattingly's master equation (METHODS.md section 6): T_SL/W_TO = (beta/alpha)(T/W at the condition).
+    // Mattingly's master equation (core/methods.md section 6): T_SL/W_TO = (beta/alpha)(T/W at the condition).
     const c = flightCondition(cruise(200, { altitudeM: 10000, massFraction: 0.9 }), jet);
     const w = 4000;
     const bw = 0.9 * w;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { RHO0 } from '../../../core/atmosphere';
-import { stallBoundary } from '../../../core/constraints';
+import { stallBoundary } from '../../../core/constraints/stall';
 import { KNOT_MPS, PSF_PA } from '../../../core/units/factors';
 import { aircraft, stall } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';
@@ -10,7 +10,7 @@ const twoPointOh = aircraft({ increments: { landing: { cd0Increment: 0.06, clMax
 
 describe('stallBoundary', () => {
   it('caps wing loading at 1/2 rho0 V^2 C_Lmax exactly', () => {
-    // w <= 1/2 rho0 V_E^2 C_Lmax (METHODS.md section 6) with 61 kt CAS (14 CFR 23.49(c), pre-Amdt 23-64, confirmed).
+    // w <= 1/2 rho0 V_E^2 C_Lmax (core/methods.md section 6) with 61 kt CAS (14 CFR 23.49(c), pre-Amdt 23-64, confirmed).
     const v = 61 * KNOT_MPS;
     expect(limitOf(stallBoundary(stall(v), twoPointOh))).toBe((0.5 * RHO0 * v * v * 2.0) / 1);
   });
@@ -21,7 +21,7 @@ describe('stallBoundary', () => {
   });
 
   it('ignores altitude and temperature, since the speed is calibrated (CAS = EAS)', () => {
-    // METHODS.md section 2: stall limits use V_E = V_C at rho0.
+    // core/methods.md section 2: stall limits use V_E = V_C at rho0.
     const atField = stall(25, { altitudeM: 1500, temperatureOffsetK: 20 });
     expect(limitOf(stallBoundary(atField, twoPointOh))).toBe(limitOf(stallBoundary(stall(25), twoPointOh)));
   });

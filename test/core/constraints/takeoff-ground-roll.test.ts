@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { takeoffGroundRollBoundary } from '../../../core/constraints';
+import { takeoffGroundRollBoundary } from '../../../core/constraints/takeoff-ground-roll';
 import { G0 } from '../../../core/units/factors';
 import { aircraft, takeoffRoll } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';
@@ -22,15 +22,15 @@ function raymerGroundRoll(thrustToWeight: number, w: number, rho: number, mu: nu
 
 describe('takeoffGroundRollBoundary', () => {
   it('is linear in wing loading for a jet', () => {
-    // qbar/w is constant, so T/W = A + B w (METHODS.md section 6, take-off notes).
+    // qbar/w is constant, so T/W = A + B w (core/methods.md section 6, take-off notes).
     const curve = curveOf(takeoffGroundRollBoundary(takeoffRoll(900), jet(0.02, 1.9)));
     const [a, b, c] = [1500, 3000, 4500].map(curve.required);
     assertRelative(b - a, c - b, 1e-12);
     expect(c).toBeGreaterThan(a);
   });
 
-  // Typical jet take-off cases (METHODS.md section 9 ranges); the mean-acceleration form at 0.7 V_LOF
-  // is within about 1 % of Raymer's closed form (METHODS.md section 6; ref.py): checked here to 2 %.
+  // Typical jet take-off cases (core/methods.md section 9 ranges); the mean-acceleration form at 0.7 V_LOF
+  // is within about 1 % of Raymer's closed form (core/methods.md section 6; ref.py): checked here to 2 %.
   const cases: Array<{ dcd0: number; clMax: number; mu: number; distance: number; w: number }> = [
     { dcd0: 0.015, clMax: 1.8, mu: 0.04, distance: 600, w: 1500 },
     { dcd0: 0.015, clMax: 1.8, mu: 0.04, distance: 600, w: 5000 },
@@ -52,7 +52,7 @@ describe('takeoffGroundRollBoundary', () => {
   }
 
   it('multiplies a propeller boundary by 0.7 V_LOF / eta', () => {
-    // METHODS.md section 6: prop x 0.7 V_LOF / eta_TO; at sea level ISA both lapses are 1.
+    // core/methods.md section 6: prop x 0.7 V_LOF / eta_TO; at sea level ISA both lapses are 1.
     const increments = { takeoff: { cd0Increment: 0.015, oswaldEfficiency: 0.76, clMax: 1.8 } };
     const thrust = curveOf(takeoffGroundRollBoundary(takeoffRoll(300), aircraft({ kind: 'turbofan', increments })));
     const power = curveOf(takeoffGroundRollBoundary(takeoffRoll(300), aircraft({ kind: 'electric', increments })));

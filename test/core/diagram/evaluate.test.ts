@@ -84,7 +84,7 @@ describe('evaluateDesign', () => {
   });
 
   it('sizes wing area and power at the design point from the take-off weight', () => {
-    // S = W_TO/w, P = (P/W) W_TO, W_TO = m g0 (METHODS.md section 7); 750 kg, 600 N/m^2, 9 W/N.
+    // S = W_TO/w, P = (P/W) W_TO, W_TO = m g0 (core/methods.md section 7); 750 kg, 600 N/m^2, 9 W/N.
     const e = evaluateDesign(TRAINER);
     const weight = 750 * G0;
     assertRelative(e.sizing!.takeoffWeight!, 7354.9875, 1e-12);

@@ -30,7 +30,7 @@ describe('findOptimum', () => {
   });
 
   it('breaks a tie towards the largest wing loading', () => {
-    // Flat at 1 up to w = 700, where (w/700)^4 rises above it: every w <= 700 ties; METHODS.md section 7 takes the largest.
+    // Flat at 1 up to w = 700, where (w/700)^4 rises above it: every w <= 700 ties; core/methods.md section 7 takes the largest.
     const curves: RequiredLoading[] = [() => 1, (w) => Math.pow(w / 700, 4)];
     assertRelative(findOptimum(curves, Infinity, [100, 1000])!.wingLoadingPa, 700, 1e-4);
   });

@@ -45,7 +45,7 @@ describe('marginsAt', () => {
   });
 
   it('gives 1 - w/limit for a limit and y/required - 1 for a curve', () => {
-    // METHODS.md section 7 margin definitions.
+    // core/methods.md section 7 margin definitions.
     const read = readAt(TRAINER, 500);
     const margins = marginsAt(TRAINER, { wingLoadingPa: 500, loading: 20 });
     for (const entry of read.entries) {

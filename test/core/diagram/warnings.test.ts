@@ -11,13 +11,13 @@ function fields(d: Design): string[] {
 
 describe('evaluation warnings', () => {
   it('names the configuration field of an Oswald efficiency outside 0.7-0.95', () => {
-    // Typical e 0.7-0.95 (METHODS.md section 9, common practice).
+    // Typical e 0.7-0.95 (core/methods.md section 9, common practice).
     const d = design({ aircraft: aircraft({ clean: { cd0: 0.03, oswaldEfficiency: 0.6, clMax: 1.5 } }), requirements: [cruise(50)], rangePa: [200, 1500] });
     expect(fields(d)).toContain('aircraft.aero.configurations.clean.oswaldEfficiency');
   });
 
   it('names the requirement index of a propeller efficiency outside its typical range', () => {
-    // eta_p about 0.8 in cruise (METHODS.md section 9, common practice); index counts every requirement.
+    // eta_p about 0.8 in cruise (core/methods.md section 9, common practice); index counts every requirement.
     const d = design({ requirements: [stall(25), takeoffRoll(300), cruise(50, { propellerEfficiency: 0.3 })], rangePa: [200, 1500] });
     expect(fields(d)).toContain('requirements[2].propellerEfficiency');
   });

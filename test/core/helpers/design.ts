@@ -2,23 +2,15 @@
  * Builders of resolved SI Designs for engine tests, with the defaults of
  * DESIGN.md applied the way the concept resolver applies them.
  */
-import type {
-  Aircraft,
-  CeilingRequirement,
-  ClimbGradientRequirement,
-  ClimbRateRequirement,
-  ConfigurationPolar,
-  CruiseRequirement,
-  Design,
-  DesignPoint,
-  LandingGroundRollRequirement,
-  Propulsion,
-  PropulsionKind,
-  Requirement,
-  StallRequirement,
-  SustainedTurnRequirement,
-  TakeoffGroundRollRequirement,
-} from '../../../core/model';
+import type { Aircraft, ConfigurationPolar, Design, DesignPoint, Propulsion, PropulsionKind, Requirement } from '../../../core/model';
+import type { CeilingRequirement } from '../../../core/constraints/ceiling';
+import type { ClimbGradientRequirement } from '../../../core/constraints/climb-gradient';
+import type { ClimbRateRequirement } from '../../../core/constraints/climb-rate';
+import type { CruiseRequirement } from '../../../core/constraints/cruise';
+import type { LandingGroundRollRequirement } from '../../../core/constraints/landing-ground-roll';
+import type { StallRequirement } from '../../../core/constraints/stall';
+import type { SustainedTurnRequirement } from '../../../core/constraints/sustained-turn';
+import type { TakeoffGroundRollRequirement } from '../../../core/constraints/takeoff-ground-roll';
 import { FOOT_PER_MINUTE_MPS } from '../../../core/units/factors';
 
 type Extra<R extends Requirement> = Partial<Omit<R, 'kind'>>;

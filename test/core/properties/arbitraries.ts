@@ -1,6 +1,6 @@
 /**
  * fast-check generators of valid resolved Designs, with values across and a
- * little beyond METHODS.md section 9's typical ranges.
+ * little beyond core/methods.md section 9's typical ranges.
  */
 import fc from 'fast-check';
 import type { Design, PropulsionKind, Requirement } from '../../../core/model';

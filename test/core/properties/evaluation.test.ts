@@ -37,7 +37,7 @@ describe('evaluateDesign on random valid designs', () => {
         const optimum = evaluation.optimum;
         if (!optimum) return;
         const y = (optimum.powerToWeight ?? optimum.thrustToWeight) as number;
-        // Feasible: every margin met (within the 1e-9 tie tolerance of METHODS.md section 7).
+        // Feasible: every margin met (within the 1e-9 tie tolerance of core/methods.md section 7).
         for (const m of marginsAt(design, { wingLoadingPa: optimum.wingLoading, loading: y })) {
           expect(m.margin, m.id).toBeGreaterThanOrEqual(-1e-6);
         }

@@ -18,7 +18,7 @@ function withClean(ac: Aircraft, change: Partial<Aircraft['configurations']['cle
 
 describe('boundaries move the way physics says', () => {
   it('more C_Lmax moves the stall limit right', () => {
-    // w_max = 1/2 rho0 V^2 C_Lmax / beta (METHODS.md section 6).
+    // w_max = 1/2 rho0 V^2 C_Lmax / beta (core/methods.md section 6).
     fc.assert(
       fc.property(aircraftArb, fc.double({ min: 15, max: 60, noNaN: true }), fc.double({ min: 0.01, max: 1, noNaN: true }), (ac, v, more) => {
         const requirement = stall(v, { configuration: 'clean' });
@@ -53,7 +53,7 @@ describe('boundaries move the way physics says', () => {
   });
 
   it('a higher or hotter airfield raises the take-off curve', () => {
-    // Lower density: faster lift-off and no more power (METHODS.md sections 5 and 6).
+    // Lower density: faster lift-off and no more power (core/methods.md sections 5 and 6).
     fc.assert(
       fc.property(
         aircraftArb,

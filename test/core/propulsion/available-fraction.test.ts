@@ -8,7 +8,7 @@ const piston: Propulsion = { kind: 'piston', engines: 1, lapseExponent: 1 };
 
 describe('availableFraction', () => {
   it('includes the temperature offset in sigma: ISA+15 at sea level', () => {
-    // Ideal gas at constant pressure: sigma = 288.15/303.15 = 0.950520 (common practice, METHODS.md section 1).
+    // Ideal gas at constant pressure: sigma = 288.15/303.15 = 0.950520 (common practice, core/methods.md section 1).
     const sigma = 288.15 / 303.15;
     assertInDelta(availableFraction(piston, 0, 15, 1), sigma - (1 - sigma) / 7.55, 1e-9);
   });

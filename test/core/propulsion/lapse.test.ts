@@ -12,7 +12,7 @@ describe('pistonLapse (Gagg-Ferrar)', () => {
   });
 
   it('matches the rounded printed form 1.132 sigma - 0.132 to 5e-4', () => {
-    // Both forms as METHODS.md section 5 quotes them (Gudmundsson, from memory).
+    // Both forms as core/methods.md section 5 quotes them (Gudmundsson, from memory).
     for (let sigma = 0.3; sigma <= 1; sigma += 0.05) assertInDelta(pistonLapse(sigma), 1.132 * sigma - 0.132, 5e-4);
   });
 
@@ -28,7 +28,7 @@ describe('turbochargedPistonLapse', () => {
   const critical = atmosphere(3000).sigma;
 
   it('holds rated power down to the critical density, including a hot day below it', () => {
-    // Common practice (METHODS.md section 5).
+    // Common practice (core/methods.md section 5).
     expect(turbochargedPistonLapse(atmosphere(2000).sigma, critical)).toBe(1);
     expect(turbochargedPistonLapse(atmosphere(0, 30).sigma, critical)).toBe(1);
   });
@@ -47,7 +47,7 @@ describe('turbine and electric lapse', () => {
   });
 
   it('gives turboprop power as sigma^0.75', () => {
-    // Common practice, m 0.7-0.9 (METHODS.md section 5): 0.5^0.75 = 0.59460.
+    // Common practice, m 0.7-0.9 (core/methods.md section 5): 0.5^0.75 = 0.59460.
     assertInDelta(turbopropLapse(0.5, 0.75), 0.5946, 1e-4);
   });
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { requirementCosts, STEPPED_FIELDS } from '../../../core/studies';
+import { requirementCosts } from '../../../core/studies';
+import { REQUIREMENT_DESCRIPTORS } from '../../../core/requirements';
 import { KNOT_MPS } from '../../../core/units/factors';
 import { assertRelative } from '../helpers/asserts';
 import { aircraft, climbGradient, cruise, design, stall, sustainedTurn } from '../helpers/design';
@@ -29,7 +30,7 @@ describe('requirementCosts', () => {
 
   it('moves a horizontal jet climb-gradient boundary by f_N x dG', () => {
     // Jet climb gradient at V = k V_s: T/W = f_N (beta/alpha)[(k^2/CLmax) CD0 + K CLmax/k^2 + G], independent of w
-    // (METHODS.md section 6, from Mattingly's master equation); f_N = 2 for one of two engines out; sea level, alpha = 1.
+    // (core/methods.md section 6, from Mattingly's master equation); f_N = 2 for one of two engines out; sea level, alpha = 1.
     const d = design({
       aircraft: aircraft({ kind: 'turbofan', engines: 2, aspectRatio: 7.5 }),
       requirements: [stall(60 * KNOT_MPS, { id: 'stall' }), climbGradient(0.024, { id: 'oei', enginesInoperative: 1 })],
@@ -60,7 +61,7 @@ describe('requirementCosts', () => {
   });
 
   it('steps the value each kind is known by, in the direction that relaxes it', () => {
-    const directions = Object.fromEntries(Object.entries(STEPPED_FIELDS).map(([kind, s]) => [kind, `${s.conceptField} ${s.relaxed}`]));
+    const directions = Object.fromEntries(REQUIREMENT_DESCRIPTORS.map((d) => [d.kind, `${d.costStep.conceptField} ${d.costStep.relaxed}`]));
     expect(directions).toEqual({
       stall: 'speed up',
       'landing-ground-roll': 'distance up',

@@ -22,7 +22,7 @@ function insert(template: RequirementTemplate, slug: string, engines?: number) {
 
 describe('REQUIREMENT_TEMPLATES', () => {
   it('carries the gradients of 14 CFR 25.121 for two, three and four engines', () => {
-    // 14 CFR 25.121(a)-(d) (METHODS.md section 8, confirmed): (a) >0 / 0.3 / 0.5 %; (b) 2.4 / 2.7 / 3.0 %;
+    // 14 CFR 25.121(a)-(d) (core/methods.md section 8, confirmed): (a) >0 / 0.3 / 0.5 %; (b) 2.4 / 2.7 / 3.0 %;
     // (c) 1.2 / 1.5 / 1.7 %; (d) 2.1 / 2.4 / 2.7 %.
     expect(gradients('14 CFR 25.121(a)')).toEqual(['0 %', '0.3 %', '0.5 %']);
     expect(gradients('14 CFR 25.121(b)')).toEqual(['2.4 %', '2.7 %', '3 %']);
@@ -37,7 +37,7 @@ describe('REQUIREMENT_TEMPLATES', () => {
     expect(gradients('14 CFR 25.119')).toEqual(['3.2 %']);
   });
 
-  it('carries the Part 23 gradients and stall speeds of METHODS.md section 8', () => {
+  it('carries the Part 23 gradients and stall speeds of core/methods.md section 8', () => {
     // 14 CFR 23.65(a) 8.3 % landplane / 6.7 % seaplane; 23.65(b) 4 %; 23.67(a)(1) 1.5 % at 5000 ft;
     // 23.77(a)-(c) 3.3 / 2.5 / 3.2 %; 23.2120(a) 8.3 / 6.7 / 4 %, (b)(1) 1.5 % at 5000 ft, (b)(2) 1 %, (b)(3) 2 % at 400 ft;
     // 23.49(c) V_SO 61 kt CAS; CS 22.49 sailplane V_S0 80 km/h. All confirmed rows.
@@ -63,7 +63,7 @@ describe('REQUIREMENT_TEMPLATES', () => {
       expect(t.note).toMatch(/certification basis/);
       expect(t.note).toMatch(/applicable authority/);
       expect(String(t.requirement.label)).toContain(t.source);
-      // Rows METHODS.md marks from memory or secondary: CS-VLA 49, light-sport and MOSAIC stall speeds, 23.2110.
+      // Rows core/methods.md marks from memory or secondary: CS-VLA 49, light-sport and MOSAIC stall speeds, 23.2110.
       expect(t.source).not.toMatch(/CS-VLA|MOSAIC|F2245|23\.2110|1\.1\b/);
     }
   });

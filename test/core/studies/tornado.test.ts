@@ -33,7 +33,7 @@ describe('tornado', () => {
 
   it('raises the cruise power with CD0 by the master equation at the stall-limited wing loading', () => {
     // Propeller cruise, sea level, alpha = 1 (Gagg-Ferrar at sigma 1), beta = 1:
-    // P/W = (V/eta)[q CD0/w + K w/q], K = 1/(pi e AR) (Mattingly master equation; METHODS.md sections 5 and 6).
+    // P/W = (V/eta)[q CD0/w + K w/q], K = 1/(pi e AR) (Mattingly master equation; core/methods.md sections 5 and 6).
     const params = ranged({ parameters: [{ field: CD0, low: 0.025, high: 0.035 }] }, STALL_BOUND);
     const result = tornado(STALL_BOUND, params);
     const [bar] = result.bars;

@@ -10,8 +10,8 @@ const range = (field: string, d = trainer) => {
 };
 
 describe('typicalRange', () => {
-  it('offers the published typical ranges of METHODS.md section 9', () => {
-    // METHODS.md section 9: e 0.7-0.95 (common practice); clean CLmax 1.2-1.5 (common practice);
+  it('offers the published typical ranges of core/methods.md section 9', () => {
+    // core/methods.md section 9: e 0.7-0.95 (common practice); clean CLmax 1.2-1.5 (common practice);
     // light-aircraft CD0 0.025-0.035 and business-jet CD0 0.018-0.025 (common practice);
     // take-off run eta_p 0.5-0.6 (common practice); dry paved mu 0.02-0.05 (Brandt et al.).
     expect(range('aircraft.aero.configurations.clean.oswaldEfficiency')).toEqual([0.7, 0.95]);
@@ -21,8 +21,8 @@ describe('typicalRange', () => {
     expect(range('requirements.takeoff-run.rollingFriction', jet)).toEqual([0.02, 0.05]);
   });
 
-  it('offers the configuration ranges of METHODS.md sections 3 and 9 by configuration', () => {
-    // Roskam, Airplane Design I, Tables 3.1 and 3.6 as given in METHODS.md (from memory there):
+  it('offers the configuration ranges of core/methods.md sections 3 and 9 by configuration', () => {
+    // Roskam, Airplane Design I, Tables 3.1 and 3.6 as given in core/methods.md (from memory there):
     // landing CLmax 1.6-2.8, take-off CLmax 1.4-2.2, landing e 0.70-0.75, landing-flap dCD0 0.055-0.075.
     expect(range('aircraft.aero.configurations.landing.clMax')).toEqual([1.6, 2.8]);
     expect(range('aircraft.aero.configurations.takeoff.clMax')).toEqual([1.4, 2.2]);
@@ -31,14 +31,14 @@ describe('typicalRange', () => {
   });
 
   it('picks the class that contains the value, or widens the nearest one to contain it', () => {
-    // Grass strip rolling friction 0.05 lies in the dry-paved class 0.02-0.05 (METHODS.md section 9).
+    // Grass strip rolling friction 0.05 lies in the dry-paved class 0.02-0.05 (core/methods.md section 9).
     expect(range('requirements.takeoff-grass.rollingFriction')).toEqual([0.02, 0.05]);
     // Business-jet AR 8.6 is outside every class; the nearest (about 10, taken as 9-11) widens down to it.
     const ar = typicalRange('aircraft.aero.aspectRatio', jet.design);
     expect(ar && [ar.low, ar.high, ar.widened]).toEqual([8.6, 11, true]);
   });
 
-  it('gives no range where METHODS.md publishes none, and none for a field the concept lacks', () => {
+  it('gives no range where core/methods.md publishes none, and none for a field the concept lacks', () => {
     expect(typicalRange('aircraft.aero.cdLinear', trainer.design)).toBeNull();
     expect(typicalRange('aircraft.propulsion.lapseExponent', trainer.design)).toBeNull();
   });
@@ -46,7 +46,7 @@ describe('typicalRange', () => {
   it('names its source beside every range', () => {
     for (const field of rangeableFields(jet.design)) {
       const r = typicalRange(field, jet.design);
-      if (r) expect(r.source, field).toMatch(/METHODS\.md section \d/);
+      if (r) expect(r.source, field).toMatch(/methods reference, section \d/);
     }
   });
 });

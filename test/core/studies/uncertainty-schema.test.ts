@@ -40,7 +40,7 @@ describe('resolveUncertainty', () => {
       trainer.design,
       trainer.concept,
     );
-    // The trainer demo's own values (core/concept/demos/trainer.ts): e 0.79, AR 7.4, cruise eta default 0.8 (METHODS.md section 12).
+    // The trainer demo's own values (core/concept/demos/trainer.ts): e 0.79, AR 7.4, cruise eta default 0.8 (core/methods.md section 11).
     expect([e.nominal, ar.nominal, eta.nominal]).toEqual([0.79, 7.4, 0.8]);
     expect([e.low, e.high, e.distribution]).toEqual([0.72, 0.88, 'triangular']);
     expect(ar.distribution).toBe('uniform');
@@ -76,7 +76,7 @@ describe('resolveUncertainty', () => {
   });
 
   it('refuses assumptions the concept does not use', () => {
-    // A turbofan has no propeller; a piston engine has no lapse exponent (METHODS.md section 5).
+    // A turbofan has no propeller; a piston engine has no lapse exponent (core/methods.md section 5).
     expect(issuesOf({ parameters: [{ field: 'requirements.cruise.propellerEfficiency', low: 0.7, high: 0.9 }] }, jet)[0].message).toMatch(/turbofan/);
     expect(issuesOf({ parameters: [{ field: 'aircraft.propulsion.lapseExponent', low: 0.7, high: 0.9 }] })[0].message).toMatch(/no lapse exponent/);
     expect(issuesOf({ parameters: [{ field: 'aircraft.aero.configurations.takeoff.cd0', low: 0.01, high: 0.02 }] })[0].message).toMatch(/cd0Increment/);

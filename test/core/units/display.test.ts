@@ -58,8 +58,8 @@ describe('display conversions', () => {
     expect(Math.abs(toDisplay(si, quantity, 'us') / library() - 1)).toBeLessThan(1e-6);
   });
 
-  it('matches the display factors of METHODS.md section 7', () => {
-    // W/N x 0.0059652 = hp/lbf; w / 47.880 = psf (METHODS.md section 7).
+  it('matches the display factors of core/methods.md section 7', () => {
+    // W/N x 0.0059652 = hp/lbf; w / 47.880 = psf (core/methods.md section 7).
     expect(toDisplay(1, 'powerToWeight', 'us')).toBeCloseTo(0.0059652, 7);
     expect(toDisplay(47.88, 'wingLoading', 'us')).toBeCloseTo(1, 4);
     // SI shows the engine's own units, with power and thrust in kW and kN.

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import * as factors from '../../../core/units/factors';
 
 // Each constant against NIST SP 811 (2008) Appendix B as tabulated in
-// METHODS.md section 10, and against js-quantities (a general-purpose units
+// core/methods.md section 10, and against js-quantities (a general-purpose units
 // library on npm), which stores some factors to 7-9 significant figures.
 const TABLE: Array<[name: keyof typeof factors, nist: number, library: () => number]> = [
   ['FOOT_M', 0.3048, () => Qty('1 ft').to('m').scalar],

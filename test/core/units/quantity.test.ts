@@ -2,7 +2,7 @@ import Qty from 'js-quantities';
 import { describe, expect, it } from 'vitest';
 import { EXAMPLE, UNITS, parseQuantity, quantity, type Dimension } from '../../../core/units/quantity';
 
-// NIST SP 811 (2008), Appendix B, exact values (also METHODS.md section 10).
+// NIST SP 811 (2008), Appendix B, exact values (also core/methods.md section 10).
 const FT = 0.3048;
 const LB = 0.45359237;
 const LBF = 4.4482216152605;

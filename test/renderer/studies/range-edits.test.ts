@@ -17,14 +17,14 @@ describe('the Ranges panel rows', () => {
     const groups = rangeGroups(design, document);
     expect(groups.flatMap((group) => group.rows.map((row) => row.field)).sort()).toEqual([...rangeableFields(design)].sort());
     expect(groups.slice(0, 4).map((group) => group.title)).toEqual(['Aerodynamics', 'Clean', 'Take-off flaps', 'Landing flaps']);
-    // A piston engine's lapse follows Gagg-Ferrar, not sigma^m: there is no lapse exponent to range (METHODS.md section 5).
+    // A piston engine's lapse follows Gagg-Ferrar, not sigma^m: there is no lapse exponent to range (core/methods.md section 5).
     expect(groups.some((group) => group.title === 'Propulsion')).toBe(false);
     const aspect = groups[0].rows.find((row) => row.field === 'aircraft.aero.aspectRatio');
-    // METHODS.md section 9: aspect ratio 6-8 for general aviation (common practice).
+    // core/methods.md section 9: aspect ratio 6-8 for general aviation (common practice).
     expect(aspect?.typical).toMatchObject({ low: 6, high: 8, widened: false });
-    expect(aspect?.typical?.source).toContain('METHODS.md section 9');
+    expect(aspect?.typical?.source).toContain('methods reference, section 9');
     expect(aspect?.index).toBe(-1);
-    // METHODS.md publishes no range for the linear drag term K1.
+    // core/methods.md publishes no range for the linear drag term K1.
     expect(groups[0].rows.find((row) => row.field === 'aircraft.aero.cdLinear')?.typical).toBeNull();
   });
 
@@ -32,7 +32,7 @@ describe('the Ranges panel rows', () => {
     const document = demoDocument('business-jet');
     const rows = rangeGroups(designOf(document), document).flatMap((group) => group.rows);
     const lapse = rows.find((row) => row.field === 'aircraft.propulsion.lapseExponent');
-    // METHODS.md section 5: turbofan lapse exponent 0.6-1 (common range).
+    // core/methods.md section 5: turbofan lapse exponent 0.6-1 (common range).
     expect(lapse?.typical).toMatchObject({ low: 0.6, high: 1 });
     // A jet uses no propeller: no requirement offers a propeller efficiency.
     expect(rows.some((row) => row.field.endsWith('.propellerEfficiency'))).toBe(false);

@@ -34,13 +34,12 @@ export function windowReportHtml(request: WindowReportRequest): string {
     const more = parsed.issues.length > 1 ? ` (and ${parsed.issues.length - 1} more)` : '';
     throw new Error(first ? `the concept has a problem to fix first: ${first.path || 'concept'}: ${first.message}${more}` : 'the concept cannot be read');
   }
-  const { concept, design, warnings, uncertainty } = parsed;
+  const { concept, design, uncertainty } = parsed;
   const evaluation = evaluateDesign(design);
   return buildReport({
     concept,
     design,
     evaluation,
-    conceptWarnings: warnings,
     ...(uncertainty ? { uncertainty } : {}),
     ...(request.version ? { version: request.version } : {}),
     studies: { step: REPORT_STEP },

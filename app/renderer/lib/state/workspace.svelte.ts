@@ -27,7 +27,7 @@ function compute(document: ConceptDocument): Computed {
   if (!parsed.ok) return { ok: false, issues: parsed.issues.map((issue) => ({ path: issue.path, message: issue.message })) };
   try {
     const evaluation = evaluateDesign(parsed.design);
-    return { ok: true, design: parsed.design, evaluation, warnings: [...parsed.warnings, ...evaluation.warnings] };
+    return { ok: true, design: parsed.design, evaluation, warnings: evaluation.warnings };
   } catch (error) {
     return { ok: false, issues: [{ path: '', message: `the diagram could not be drawn: ${error instanceof Error ? error.message : String(error)}` }] };
   }

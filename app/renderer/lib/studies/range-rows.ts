@@ -9,6 +9,7 @@
  * efficiency or a friction coefficient), so no unit conversion applies.
  */
 import { rangeableFields, typicalRange, type Design, type Distribution, type TypicalRange } from '../../../../core';
+import { REQUIREMENT_DESCRIPTORS } from '../../../../core/requirements';
 import { fieldRef, nominalOf, type FieldRef } from '../../../../core/studies/uncertain-fields';
 import { kindTitle } from '../../../chart';
 import { plotName } from '../concept/names';
@@ -49,12 +50,15 @@ const CONFIGURATION_TITLES = {
   oswaldEfficiency: 'Oswald efficiency e',
   clMax: 'Maximum lift coefficient',
 } as const;
-const REQUIREMENT_TITLES = {
-  propellerEfficiency: 'Propeller efficiency',
-  rollingFriction: 'Rolling friction',
-  brakingFriction: 'Braking friction',
-  clGroundRun: 'Lift coefficient in the ground run',
-} as const;
+/** A requirement's rangeable assumption as its kind's editor titles it. */
+function requirementFieldTitle(key: string): string {
+  if (key === 'propellerEfficiency') return 'Propeller efficiency';
+  for (const d of REQUIREMENT_DESCRIPTORS) {
+    const field = d.editorFields.find((f) => f.key === key);
+    if (field) return field.title;
+  }
+  return key;
+}
 
 /** A configuration's name as the Assumptions panel shows it. */
 function configurationTitle(name: string): string {
@@ -64,7 +68,7 @@ function configurationTitle(name: string): string {
 function titleOf(ref: FieldRef): string {
   if (ref.scope === 'aircraft') return AIRCRAFT_TITLES[ref.key];
   if (ref.scope === 'configuration') return CONFIGURATION_TITLES[ref.key];
-  return REQUIREMENT_TITLES[ref.key];
+  return requirementFieldTitle(ref.key);
 }
 
 function groupOf(ref: FieldRef, requirements: readonly Record<string, unknown>[]): { id: string; title: string } {

@@ -1,0 +1,16 @@
+/**
+ * Electric motor: rated power does not lapse with altitude.
+ */
+import { electricLapse } from '../lapse';
+import { definePropulsion } from './descriptor';
+
+export const electric = definePropulsion({
+  kind: 'electric',
+  title: 'Electric',
+  propeller: true,
+  lapse: () => electricLapse(),
+  lapseExponent: null,
+  needsCriticalAltitude: false,
+  cd0Band: 3,
+  methods: '- **electric**: alpha = 1 at every altitude (a motor needs no air; battery limits are outside the diagram).',
+});

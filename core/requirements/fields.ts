@@ -1,0 +1,29 @@
+/**
+ * Pieces the requirement descriptors share: zod fields with units, the
+ * editor's value kinds, and number text for summaries.
+ */
+import { z } from 'zod';
+import { quantityField } from '../concept/quantity-field';
+import type { EditorValue } from './descriptor';
+
+export const fraction = z.number().gt(0).lte(1);
+export const speedFactor = z.number().gte(1);
+export const positiveSpeed = quantityField('speed', { above: 0 });
+/** Pressure altitudes the standard atmosphere covers for sizing. */
+export const altitude = quantityField('length', { from: -1000, to: 30000 });
+
+export const speedValue = (): EditorValue => ({ type: 'quantity', dimension: 'speed', units: { si: 'm/s', us: 'kt' } });
+export const rateValue = (): EditorValue => ({ type: 'quantity', dimension: 'speed', units: { si: 'm/s', us: 'ft/min' } });
+export const lengthValue = (): EditorValue => ({ type: 'quantity', dimension: 'length', units: { si: 'm', us: 'ft' } });
+export const numberValue = (integer = false): EditorValue => ({ type: 'number', integer });
+
+export function plain(value: number, digits = 2): string {
+  return Number.isFinite(value) ? String(Number(value.toFixed(digits))) : '—';
+}
+
+export function percent(fraction: number): string {
+  return Number.isFinite(fraction) ? `${Number((fraction * 100).toFixed(2))} %` : '—';
+}
+
+/** A typical range as the editor marks it. */
+export const mark = (range: { low: number; high: number; note: string }) => ({ low: range.low, high: range.high, note: range.note });
