@@ -19,7 +19,7 @@ test('the sensitivity tab shows what moves the optimum, largest first, in the ch
   await expect(rows.first()).toBeVisible();
   expect(await rows.count()).toBeGreaterThan(1);
   await expect(window.byTest('tornado-panel')).toContainText('Preliminary sizing');
-  await expect(window.byTest('tornado-ranges')).toContainText('typical values from core/methods.md');
+  await expect(window.byTest('tornado-ranges')).toContainText('typical values from the methods reference');
   await window.shot('wing-loading');
 
   // Largest swing first.

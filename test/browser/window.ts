@@ -81,6 +81,21 @@ export class DesignerWindow {
   }
 }
 
+/**
+ * Browser mode keeps unsaved drafts per project file on the server, across
+ * page loads; every test starts from the saved versions alone, as a first
+ * visit would.
+ */
+async function forgetKeptDrafts(page: Page): Promise<void> {
+  const address = new URL(serverAddress());
+  const token = /token=([A-Za-z0-9_-]+)/.exec(address.hash)?.[1] ?? '';
+  const response = await page.request.post(new URL('/api/keepDrafts', address.origin).href, {
+    headers: { 'X-Loftpoint-Token': token },
+    data: { drafts: {} },
+  });
+  expect(response.ok(), 'the server forgets its kept drafts').toBe(true);
+}
+
 export const test = base.extend<{ window: DesignerWindow }>({
   window: async ({ page }, use, testInfo) => {
     const problems: string[] = [];
@@ -88,6 +103,7 @@ export const test = base.extend<{ window: DesignerWindow }>({
       if (message.type() === 'error') problems.push(message.text());
     });
     page.on('pageerror', (error) => problems.push(error.message));
+    await forgetKeptDrafts(page);
     await page.goto(serverAddress());
     const window = new DesignerWindow(page, testInfo);
     await window.ready();
