@@ -7,12 +7,9 @@
  */
 import type { Command } from 'commander';
 import { evaluateDesign, type Evaluation, type UnitSystem } from '../../core';
-import { constraintDiagramSvg } from '../chart/svg';
 import type { SetExitCode } from './io';
 import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
-import { evaluationCsv } from './evaluate-csv';
-import { evaluationReport } from './evaluate-report';
 import type { CliIO } from './io';
 import { checkOutputTarget, oneLine, writeWhole, type OutputTarget } from './output-file';
 
@@ -61,12 +58,13 @@ async function runEvaluate(file: string, options: EvaluateOptions): Promise<stri
   const evaluation = evaluateDesign(input.design);
   const name = input.design.name;
   if (options.json) return `${JSON.stringify(evaluation, null, 2)}\n`;
-  if (options.csv) return evaluationCsv({ name, evaluation, system });
+  // Each output's writer loads when asked for, so `--json` starts without the chart and CSV code.
+  if (options.csv) return (await import('./evaluate-csv')).evaluationCsv({ name, evaluation, system });
   if (options.svg !== undefined) {
-    const out = writeSvg(file, options.svg, evaluation, name, system);
+    const out = writeSvg(file, options.svg, evaluation, name, system, (await import('../chart/svg')).constraintDiagramSvg);
     return `Wrote the constraint diagram of ${oneLine(name.trim() || input.source)} to ${out}\n`;
   }
-  return evaluationReport({ source: input.source, design: input.design, evaluation, conceptWarnings: input.warnings, system });
+  return (await import('./evaluate-report')).evaluationReport({ source: input.source, design: input.design, evaluation, conceptWarnings: input.warnings, system });
 }
 
 function unitSystem(file: string, units: string | undefined): UnitSystem {
@@ -76,7 +74,7 @@ function unitSystem(file: string, units: string | undefined): UnitSystem {
 }
 
 /** Writes the diagram; an existing file is replaced only when it is an SVG. */
-function writeSvg(file: string, out: string, evaluation: Evaluation, name: string, system: UnitSystem): string {
+function writeSvg(file: string, out: string, evaluation: Evaluation, name: string, system: UnitSystem, constraintDiagramSvg: typeof import('../chart/svg').constraintDiagramSvg): string {
   const target: OutputTarget = { file, out, flag: '--svg', extension: '.svg', exampleName: 'diagram.svg', inputRole: 'the file being evaluated', looksLike: (head) => /<svg[\s>]/.test(head.toString('utf8')) };
   const path = checkOutputTarget(target);
   writeWhole(target, path, constraintDiagramSvg(evaluation, { title: name, system }));
