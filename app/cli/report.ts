@@ -161,7 +161,10 @@ async function runReport(file: string, options: ReportOptions): Promise<string> 
   } else {
     const parsed = parseConcept(input.concept);
     const uncertainty = parsed.ok ? parsed.uncertainty : undefined;
-    const studies = runStudies({ design, concept: input.concept, evaluation, system, ...(uncertainty ? { uncertainty } : {}), options: studyOptions });
+    const studyInput = { design, concept: input.concept, evaluation, system, ...(uncertainty ? { uncertainty } : {}), options: studyOptions };
+    // The Monte Carlo on every free core (the same map as one core gives); the other studies here.
+    const { reportProbabilityMap } = await import('./monte-carlo-workers');
+    const studies = runStudies(studyInput, await reportProbabilityMap(studyInput));
     if (output.kind === 'svg' || output.kind === 'png') {
       const svg = reportDiagramSvg({ design, evaluation, system, studies });
       content = output.kind === 'svg' ? svg : await svgToPng(svg, STUDY_DIAGRAM_SIZE, { binary: chromium as string });

@@ -13,6 +13,7 @@ const benches = [
   ['Engine: evaluation per demo against a floor doing the same work; growth with samples', 'test/bench/engine.ts'],
   ['Project file: save, list, open, size', 'test/bench/store.ts'],
   ['Trade studies: bands, tornado, Monte Carlo', 'test/bench/studies.ts'],
+  ['Monte Carlo on one and two threads', 'test/bench/monte-carlo-cores.js'],
   ['Designer window: drag to redraw', 'test/bench/drag.ts'],
 ];
 let failed = 0;

@@ -19,8 +19,8 @@ const CAUTION = /certification requirements come from the applicable authority.*
 
 let dir: string;
 
-function run(args: string[], fromSource: boolean, bin = BIN) {
-  const env = { ...process.env, LOFTPOINT_FROM_SOURCE: fromSource ? '1' : '0' };
+function run(args: string[], fromSource: boolean, bin = BIN, extra: Record<string, string> = {}) {
+  const env = { ...process.env, LOFTPOINT_FROM_SOURCE: fromSource ? '1' : '0', ...extra };
   const result = spawnSync(process.execPath, [bin, ...args], { cwd: dir, encoding: 'utf8', env, timeout: 120_000 });
   return { status: result.status, stdout: result.stdout, stderr: result.stderr };
 }
@@ -80,6 +80,28 @@ describe('the built command line', () => {
     expect(bad.stderr).toContain('aircraft.aero.configurations.clean.oswaldEfficiency');
     expect(bad.stderr.trimEnd().split('\n')).toHaveLength(1);
   }, 120_000);
+});
+
+describe('the Monte Carlo on several threads', () => {
+  it('draws the very same probability map with 1, 2 and 3 worker threads, and as the sources on one', () => {
+    // 3,000 samples are six random blocks: 1, 2 and 3 threads split them differently.
+    const svg = (workers: string, fromSource = false) => {
+      const out = join(dir, `chance-${workers}-${fromSource ? 'source' : 'built'}.svg`);
+      const result = run(['report', join(dir, 'business-jet.json'), '--out', out, '--samples', '3000', '--seed', '11'], fromSource, BIN, { LOFTPOINT_WORKERS: workers });
+      expect(result.stderr).toBe('');
+      expect(result.status).toBe(0);
+      return readFileSync(out, 'utf8');
+    };
+    const one = svg('1');
+    expect(one).toMatch(/<svg[\s>]/);
+    expect(svg('2')).toBe(one);
+    expect(svg('3')).toBe(one);
+    expect(svg('2', true)).toBe(one);
+    // Another seed draws other samples: the comparison above can fail.
+    const other = join(dir, 'chance-other-seed.svg');
+    expect(run(['report', join(dir, 'business-jet.json'), '--out', other, '--samples', '3000', '--seed', '12'], false).status).toBe(0);
+    expect(readFileSync(other, 'utf8')).not.toBe(one);
+  }, 180_000);
 });
 
 describe('a copy of the project', () => {
