@@ -179,12 +179,13 @@ export function fallbackMessage(failure) {
   return [`The desktop window cannot start: step "${failure.step}" failed: ${failure.problem}.`, `  To fix it: ${failure.fix}`, 'Starting browser mode instead.'].join('\n');
 }
 
-/** Browser mode: the page built when stale, then `loftpoint serve`'s server. */
+/** Browser mode: the page built when stale, then `loftpoint serve`'s server from JavaScript built ahead. */
 export function startBrowserMode(deps, args, start = spawn) {
   if (stale(deps.root, 'out/renderer/index.html', PAGE_SOURCES)) {
     deps.log('Building the window for browser mode...');
     const status = deps.run(bin(deps.root, 'vite'), ['build', '--config', 'app/renderer/vite.config.ts', '--logLevel', 'error'], { env: { ...deps.env, VITE_CONFIG_NATIVE_IGNORE_WARNING: 'true' } });
     if (status !== 0) process.exit(status);
   }
-  return start(bin(deps.root, 'tsx'), [join(deps.root, 'app', 'cli', 'serve-start.ts'), ...args], { cwd: deps.root, stdio: 'inherit', env: deps.env });
+  // The server built ahead (out/cli), rebuilt by app/cli/browser-mode.js when a source is newer.
+  return start(process.execPath, [join(deps.root, 'app', 'cli', 'browser-mode.js'), ...args], { cwd: deps.root, stdio: 'inherit', env: deps.env });
 }

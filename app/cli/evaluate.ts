@@ -7,12 +7,9 @@
  */
 import type { Command } from 'commander';
 import { evaluateDesign, type Evaluation, type UnitSystem } from '../../core';
-import { constraintDiagramSvg } from '../chart/svg';
 import type { SetExitCode } from './io';
 import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
-import { evaluationCsv } from './evaluate-csv';
-import { evaluationReport } from './evaluate-report';
 import type { CliIO } from './io';
 import { checkOutputTarget, oneLine, writeWhole, type OutputTarget } from './output-file';
 import { hasMark, markSvg } from './output-mark';
@@ -64,12 +61,13 @@ async function runEvaluate(file: string, options: EvaluateOptions): Promise<stri
   const evaluation = evaluateDesign(input.design);
   const name = input.design.name;
   if (options.json) return `${JSON.stringify(evaluation, null, 2)}\n`;
-  if (options.csv) return evaluationCsv({ name, evaluation, system });
+  // Each output's writer loads when asked for, so `--json` starts without the chart and CSV code.
+  if (options.csv) return (await import('./evaluate-csv')).evaluationCsv({ name, evaluation, system });
   if (options.svg !== undefined) {
-    const out = writeSvg(file, options.svg, evaluation, name, system, options.force === true);
+    const out = writeSvg(file, options.svg, evaluation, name, system, options.force === true, (await import('../chart/svg')).constraintDiagramSvg);
     return `Wrote the constraint diagram of ${oneLine(name.trim() || input.source)} to ${out}\n`;
   }
-  return evaluationReport({ source: input.source, design: input.design, evaluation, system });
+  return (await import('./evaluate-report')).evaluationReport({ source: input.source, design: input.design, evaluation, system });
 }
 
 function unitSystem(file: string, units: string | undefined): UnitSystem {
@@ -79,7 +77,7 @@ function unitSystem(file: string, units: string | undefined): UnitSystem {
 }
 
 /** Writes the diagram; an existing file is replaced only when Loftpoint wrote it as an SVG, or with --force. */
-function writeSvg(file: string, out: string, evaluation: Evaluation, name: string, system: UnitSystem, force: boolean): string {
+function writeSvg(file: string, out: string, evaluation: Evaluation, name: string, system: UnitSystem, force: boolean, constraintDiagramSvg: typeof import('../chart/svg').constraintDiagramSvg): string {
   const target: OutputTarget = { file, out, flag: '--svg', extension: '.svg', exampleName: 'diagram.svg', inputRole: 'the file being evaluated', isOurs: hasMark.svg, force };
   const path = checkOutputTarget(target);
   writeWhole(target, path, markSvg(constraintDiagramSvg(evaluation, { title: name, system })));

@@ -8,16 +8,8 @@ import type { Command } from 'commander';
 import { readFileSync, writeFileSync, existsSync } from 'node:fs';
 import { checkOutputTarget, writeWhole, type OutputTarget } from './output-file';
 import { basename, extname } from 'node:path';
-import { StoreError } from '../store/errors';
-import {
-  PRELIMINARY_CAUTION,
-  ProjectService,
-  ServiceFailure,
-  comparisonText,
-  versionsText,
-  type ServiceError,
-  type UnitSystem,
-} from '../service';
+import { PRELIMINARY_CAUTION } from '../../core/caution';
+import type { ProjectService, ServiceError, UnitSystem } from '../service';
 import { EXIT_FAILURE, InputError } from './errors';
 import type { CliIO } from './io';
 import type { SetExitCode } from './io';
@@ -49,10 +41,18 @@ function readText(file: string): string {
 
 class ReportedFailure extends Error {}
 
+type ServiceModule = typeof import('../service');
+let serviceModule: ServiceModule | undefined;
+/** The project service's module: loaded by the project verbs only, so the other verbs start without the project store. */
+const projects = (): ServiceModule => serviceModule as ServiceModule;
+
 /** Runs one verb: service errors become one line, input errors exit 2, the rest exit 1. */
 function run(io: CliIO, setExitCode: SetExitCode, verb: (service: ProjectService) => void | Promise<void>) {
   return async () => {
-    const service = new ProjectService();
+    serviceModule ??= await import('../service');
+    const { StoreError } = await import('../store/errors');
+    const { ServiceFailure } = serviceModule;
+    const service = new serviceModule.ProjectService();
     try {
       await verb(service);
     } catch (error) {
@@ -127,7 +127,7 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
             ...(options.author !== undefined ? { author: options.author } : {}),
           });
         } catch (error) {
-          if (error instanceof ServiceFailure && error.error.code === 'invalid-concept') {
+          if (error instanceof projects().ServiceFailure && error.error.code === 'invalid-concept') {
             const issues = error.error.issues ?? [];
             const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
             const first = issues[0];
@@ -177,7 +177,7 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
         const units = unitsOption(options.units);
         const info = service.openProject({ file, readonly: true });
         const versions = service.listVersions(options.concept !== undefined ? { concept: options.concept } : {});
-        io.out(options.json ? `${JSON.stringify(versions, null, 2)}\n` : versionsText(versions, units ?? info.units, info.name));
+        io.out(options.json ? `${JSON.stringify(versions, null, 2)}\n` : projects().versionsText(versions, units ?? info.units, info.name));
       })(),
     );
 
@@ -208,7 +208,7 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
         const units = unitsOption(options.units);
         const info = service.openProject({ file, readonly: true });
         const comparison = service.compareVersions(numbers);
-        io.out(options.json ? `${JSON.stringify(comparison, null, 2)}\n` : comparisonText(comparison, units ?? info.units));
+        io.out(options.json ? `${JSON.stringify(comparison, null, 2)}\n` : projects().comparisonText(comparison, units ?? info.units));
       })(),
     );
 

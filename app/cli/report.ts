@@ -10,14 +10,9 @@
 import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { evaluateDesign, parseConcept, PRELIMINARY_CAUTION, type UnitSystem } from '../../core';
-import { buildReport } from '../report/report';
-import { ChromiumFailed, ChromiumUnavailable, findChromium, printPdf, svgToPng } from '../report/chromium';
-import { STUDY_DIAGRAM_SIZE } from '../report/section-results';
-import { reportDiagramSvg } from '../report/section-studies';
-import { runStudies, type StudyOptions } from '../report/studies';
+import type { StudyOptions } from '../report/studies';
 import type { SetExitCode } from './io';
 import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
-import { evaluationCsv } from './evaluate-csv';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
 import type { CliIO } from './io';
 import { checkOutputTarget, oneLine, writeWhole, type OutputTarget } from './output-file';
@@ -71,7 +66,7 @@ export function registerReport(program: Command, io: CliIO, setExitCode: SetExit
           setExitCode(EXIT_FAILURE);
           return;
         }
-        if (error instanceof ChromiumFailed) {
+        if (error instanceof (await import('../report/chromium')).ChromiumFailed) {
           io.err(`loftpoint: ${oneLine(file)}: ${oneLine(error.message)}\n`);
           setExitCode(EXIT_FAILURE);
           return;
@@ -132,6 +127,13 @@ async function versionInfo(file: string, number: number) {
 
 /** Build and write the output; returns what to print. Throws InputError on bad input. */
 async function runReport(file: string, options: ReportOptions): Promise<string> {
+  // The report's parts load with this verb only, so the other verbs start without them.
+  const { ChromiumUnavailable, findChromium, printPdf, svgToPng } = await import('../report/chromium');
+  const { buildReport } = await import('../report/report');
+  const { STUDY_DIAGRAM_SIZE } = await import('../report/section-results');
+  const { reportDiagramSvg } = await import('../report/section-studies');
+  const { runStudies } = await import('../report/studies');
+  const { evaluationCsv } = await import('./evaluate-csv');
   const output = outputKind(file, options.out);
   const extension = extname(output.target).toLowerCase();
   const system = unitSystem(file, options.units);
@@ -162,7 +164,10 @@ async function runReport(file: string, options: ReportOptions): Promise<string> 
   } else {
     const parsed = parseConcept(input.concept);
     const uncertainty = parsed.ok ? parsed.uncertainty : undefined;
-    const studies = runStudies({ design, concept: input.concept, evaluation, system, ...(uncertainty ? { uncertainty } : {}), options: studyOptions });
+    const studyInput = { design, concept: input.concept, evaluation, system, ...(uncertainty ? { uncertainty } : {}), options: studyOptions };
+    // The Monte Carlo on every free core (the same map as one core gives); the other studies here.
+    const { reportProbabilityMap } = await import('./monte-carlo-workers');
+    const studies = runStudies(studyInput, await reportProbabilityMap(studyInput));
     if (output.kind === 'svg' || output.kind === 'png') {
       const svg = reportDiagramSvg({ design, evaluation, system, studies });
       content = output.kind === 'svg' ? markSvg(svg) : markPng(await svgToPng(svg, STUDY_DIAGRAM_SIZE, { binary: chromium as string }));

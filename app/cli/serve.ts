@@ -5,7 +5,7 @@
  */
 import type { Command } from 'commander';
 import { PRELIMINARY_CAUTION } from '../service/contract';
-import { LaunchError, launchBrowserMode, type BrowserMode } from '../server/launch';
+import type { BrowserMode } from '../server/launch';
 import type { SetExitCode } from './io';
 import { EXIT_OK, InputError } from './errors';
 import type { CliIO } from './io';
@@ -31,6 +31,8 @@ export function parsePort(text: string | undefined): number {
 /** Starts browser mode and prints where it is; resolves once `until` does and everything is closed. */
 export async function runServe(options: ServeOptions, io: CliIO, until: Promise<unknown>): Promise<BrowserMode> {
   const port = parsePort(options.port);
+  // The server loads with the verb that needs it, so the other verbs start without it.
+  const { LaunchError, launchBrowserMode } = await import('../server/launch');
   let mode: BrowserMode;
   try {
     mode = await launchBrowserMode({ port, project: options.project, rendererDir: options.rendererDir });

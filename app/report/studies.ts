@@ -76,7 +76,8 @@ function timed<T>(run: () => T): [T, number] {
   return [value, performance.now() - start];
 }
 
-function rangedParameters(design: Design, concept: unknown, uncertainty: ConceptUncertainty | undefined): { ranges: ReportStudies['ranges']; parameters: UncertainParameter[] } {
+/** The ranged assumptions studied: the concept's own, else the typical ones. */
+export function rangedParameters(design: Design, concept: unknown, uncertainty: ConceptUncertainty | undefined): { ranges: ReportStudies['ranges']; parameters: UncertainParameter[] } {
   if (uncertainty && uncertainty.parameters.length > 0) return { ranges: 'concept', parameters: uncertainty.parameters };
   const typical = resolveUncertainty(typicalUncertainty(design), design, concept);
   return { ranges: 'typical', parameters: typical.ok ? typical.parameters : [] };
@@ -89,14 +90,17 @@ function bandWingLoadings(evaluation: Evaluation, grid: ProbabilityGrid): number
   return Array.from(sampleWingLoadings(grid.wingLoading, 201));
 }
 
-export function runStudies(input: {
+export interface StudyInput {
   design: Design;
   concept: unknown;
   evaluation: Evaluation;
   uncertainty?: ConceptUncertainty;
   system: UnitSystem;
   options?: StudyOptions;
-}): ReportStudies {
+}
+
+/** What the studies run on: the ranged assumptions, seed, sample count, cost step and the diagram's grid. */
+export function studySettings(input: StudyInput) {
   const { design, evaluation, system } = input;
   const options = input.options ?? {};
   const { ranges, parameters } = rangedParameters(design, input.concept, input.uncertainty);
@@ -104,9 +108,21 @@ export function runStudies(input: {
   const samples = options.samples ?? input.uncertainty?.samples ?? DEFAULT_STUDY_SAMPLES;
   const step = options.step ?? 0.1;
   const grid = diagramGrid(evaluation, { system, title: design.name });
+  return { ranges, parameters, seed, samples, step, grid };
+}
+
+/**
+ * Every study, in this thread; `monteCarlo`, when given, is the map already
+ * worked out elsewhere (on several cores) for these very settings, and its time.
+ */
+export function runStudies(input: StudyInput, monteCarlo?: { map: ProbabilityMap | null; ms: number }): ReportStudies {
+  const { design, evaluation } = input;
+  const { ranges, parameters, seed, samples, step, grid } = studySettings(input);
   const [bands, bandsMs] = timed(() => boundaryBands(design, parameters, bandWingLoadings(evaluation, grid)));
   const [moved, tornadoMs] = timed(() => tornado(design, parameters));
-  const [map, monteCarloMs] = timed(() => (parameters.length > 0 ? probabilityMap(design, parameters, { seed, samples, grid }) : null));
+  const [map, monteCarloMs] = monteCarlo
+    ? [monteCarlo.map, monteCarlo.ms]
+    : timed(() => (parameters.length > 0 ? probabilityMap(design, parameters, { seed, samples, grid }) : null));
   const [costs, costsMs] = timed(() => requirementCosts(design, { step }));
   const rows = parameters.map((p): RangeRow => {
     const source = ranges === 'typical' ? typicalRange(p.field, design)?.source : undefined;

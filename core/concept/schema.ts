@@ -15,7 +15,7 @@ const wingLoading = quantityField('wingLoading', { above: 0 });
 
 export const diagramShape = {
   wingLoading: z.tuple([wingLoading, wingLoading]).optional(),
-  samples: z.number().int().gte(2).lte(5000).optional(),
+  samples: z.number().int().gte(2).lte(40000).optional(),
 };
 
 export const designPointShape = {

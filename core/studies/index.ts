@@ -24,8 +24,11 @@ export { tornado, type Tornado, type TornadoBar, type TornadoEnd, type TornadoOr
 export {
   probabilityMap,
   probabilityMapRun,
+  sampleParts,
+  MONTE_CARLO_BLOCK,
   type ProbabilityMap,
   type ProbabilityMapOptions,
+  type ProbabilityPart,
   type ProbabilityMapRun,
   type PointProbability,
   type OptimumSpread,

@@ -17,18 +17,65 @@ export interface RandomStream {
   nextUnit(): number;
 }
 
-/** MT19937 (Matsumoto and Nishimura, ACM TOMACS 8(1), 1998), seeded by init_genrand. */
-export function mersenneTwister(seed: number): RandomStream {
-  if (!Number.isInteger(seed) || seed < 0 || seed > 0xffffffff) {
-    throw new RangeError(`seed is ${seed}; give a whole number from 0 to 4294967295`);
+function checkedWord(value: number, what: string): number {
+  if (!Number.isInteger(value) || value < 0 || value > 0xffffffff) {
+    throw new RangeError(`${what} is ${value}; give a whole number from 0 to 4294967295`);
   }
+  return value >>> 0;
+}
+
+/** init_genrand: mt[i] = 1812433253 * (mt[i-1] ^ (mt[i-1] >> 30)) + i (Matsumoto and Nishimura, 2002 revision). */
+function initialState(seed: number): Uint32Array {
   const state = new Uint32Array(N);
   state[0] = seed >>> 0;
-  // init_genrand: mt[i] = 1812433253 * (mt[i-1] ^ (mt[i-1] >> 30)) + i (Matsumoto and Nishimura, 2002 revision).
   for (let i = 1; i < N; i++) {
     const previous = state[i - 1] ^ (state[i - 1] >>> 30);
     state[i] = (Math.imul(1812433253, previous) + i) >>> 0;
   }
+  return state;
+}
+
+/** MT19937 (Matsumoto and Nishimura, ACM TOMACS 8(1), 1998), seeded by init_genrand. */
+export function mersenneTwister(seed: number): RandomStream {
+  return streamFrom(initialState(checkedWord(seed, 'seed')));
+}
+
+/**
+ * MT19937 seeded by init_by_array (mt19937ar.c, 2002): a key of several
+ * 32-bit words sets the whole state, so keys [seed, 0], [seed, 1], ... give
+ * streams as unrelated as different seeds, never sharing a state.
+ */
+export function mersenneTwisterByArray(key: readonly number[]): RandomStream {
+  if (key.length === 0) throw new RangeError('the key is empty; give at least one whole number');
+  const words = key.map((value, i) => checkedWord(value, `key[${i}]`));
+  const state = initialState(19650218);
+  let i = 1;
+  let j = 0;
+  for (let k = Math.max(N, words.length); k > 0; k--) {
+    const previous = state[i - 1] ^ (state[i - 1] >>> 30);
+    state[i] = ((state[i] ^ Math.imul(previous, 1664525)) + words[j] + j) >>> 0;
+    i++;
+    j++;
+    if (i >= N) {
+      state[0] = state[N - 1];
+      i = 1;
+    }
+    if (j >= words.length) j = 0;
+  }
+  for (let k = N - 1; k > 0; k--) {
+    const previous = state[i - 1] ^ (state[i - 1] >>> 30);
+    state[i] = ((state[i] ^ Math.imul(previous, 1566083941)) - i) >>> 0;
+    i++;
+    if (i >= N) {
+      state[0] = state[N - 1];
+      i = 1;
+    }
+  }
+  state[0] = 0x80000000; // MSB is 1, assuring a non-zero initial state
+  return streamFrom(state);
+}
+
+function streamFrom(state: Uint32Array): RandomStream {
   let index = N;
 
   function twist(): void {

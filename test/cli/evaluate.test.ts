@@ -186,6 +186,30 @@ describe('loftpoint evaluate FILE --json', () => {
     });
   }
 
+  it('samples as finely as the concept asks, up to 40,000 wing loadings, with the same optimum', async () => {
+    const fine = variant('fine.json', (c) => (c.diagram = { ...c.diagram, samples: 40000 }));
+    const result = await run('evaluate', fine, '--json');
+    expect(result.stderr).toBe('');
+    expect(result.code).toBe(0);
+    const json = JSON.parse(result.stdout) as Evaluation;
+    const coarse = JSON.parse((await run('evaluate', demoFile('trainer'), '--json')).stdout) as Evaluation;
+    for (const curve of json.boundaries.filter((b): b is CurveBoundaryJson => 'points' in b)) {
+      expect(curve.points).toHaveLength(40000);
+      const step = curve.points[1][0] - curve.points[0][0];
+      expect(curve.points[39999][0] - curve.points[39998][0]).toBeCloseTo(step, 6); // evenly spaced (DESIGN.md, "The evaluation")
+    }
+    // The optimum is searched on a grid at least as fine as 4000 points whatever is plotted (core/methods.md section 7).
+    expect(Math.abs(json.optimum!.wingLoading - coarse.optimum!.wingLoading) / coarse.optimum!.wingLoading).toBeLessThan(1e-5);
+  });
+
+  it('refuses more than 40,000 samples, naming the field', async () => {
+    const tooFine = variant('too-fine.json', (c) => (c.diagram = { ...c.diagram, samples: 40001 }));
+    const result = await run('evaluate', tooFine, '--json');
+    expect(result.code).toBe(2);
+    expect(result.stderr).toContain('diagram.samples');
+    expect(result.stderr).toMatch(/at most 40000/);
+  });
+
   it('stays SI whatever --units says', async () => {
     const si = await run('evaluate', demoFile('trainer'), '--json');
     const us = await run('evaluate', demoFile('trainer'), '--json', '--units', 'us');

@@ -73,7 +73,9 @@ describe('loftpoint serve', () => {
     const scripts = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')).scripts as Record<string, string>;
     const script = BUILD_PAGE_COMMAND.replace(/^npm run /, '');
     expect(scripts[script]).toMatch(/vite build/);
-    expect(scripts.prepare).toBe(BUILD_PAGE_COMMAND);
+    // `npm install` builds the page, then the command line (app/build-cli.js).
+    expect(scripts.prepare.split(' && ')).toEqual([BUILD_PAGE_COMMAND, 'npm run build:cli']);
+    expect(scripts['build:cli']).toBe('node app/build-cli.js');
     expect(() => findPage(empty)).toThrow(/no built page in .*no-page/);
   });
 

@@ -108,7 +108,7 @@ const CASES: BadCase[] = [
   { what: 'power setting 0', change: (c) => (c.requirements[1].powerSetting = 0), path: 'requirements[1].powerSetting', message: /greater than 0/ },
   { what: 'propeller efficiency above 1', change: (c) => (c.requirements[1].propellerEfficiency = 82), path: 'requirements[1].propellerEfficiency', message: /at most 1 \(got 82\)/ },
   { what: 'samples 1', change: (c) => (c.diagram.samples = 1), path: 'diagram.samples', message: /at least 2/ },
-  { what: 'samples 5001', change: (c) => (c.diagram.samples = 5001), path: 'diagram.samples', message: /at most 5000/ },
+  { what: 'samples 40001', change: (c) => (c.diagram.samples = 40001), path: 'diagram.samples', message: /at most 40000/ },
   { what: 'samples 10.5', change: (c) => (c.diagram.samples = 10.5), path: 'diagram.samples', message: /whole number/ },
   { what: 'a descending range', change: (c) => (c.diagram.wingLoading = ['1500 N/m^2', '200 N/m^2']), path: 'diagram.wingLoading', message: /ascending/ },
   { what: 'a range with one end', change: (c) => (c.diagram.wingLoading = ['200 N/m^2']), path: 'diagram.wingLoading', message: /two values \[low, high\]/ },

@@ -4,6 +4,9 @@ import {
   defaultProbabilityGrid,
   probabilityFrontier,
   probabilityMap,
+  probabilityMapRun,
+  sampleParts,
+  MONTE_CARLO_BLOCK,
   typicalUncertainty,
   type CurveBand,
   type ProbabilityMap,
@@ -87,6 +90,49 @@ describe('probabilityMap', () => {
       expect(again.designPoint).toEqual(first.designPoint);
     }
     expect(Buffer.from(run(43).probability.buffer)).not.toEqual(Buffer.from(first.probability.buffer));
+  });
+
+  it('gives bit-identical results from parts run apart and absorbed, however many parts and in whatever order', () => {
+    // What several workers do: each runs a range of whole blocks, one run absorbs them all.
+    const jet = demo('business-jet');
+    const params = ranged(
+      {
+        parameters: [
+          { field: 'aircraft.aero.configurations.clean.cd0', low: 0.018, high: 0.025 },
+          { field: 'aircraft.aero.configurations.landing.clMax', low: 2.0, high: 2.5, distribution: 'triangular' },
+        ],
+      },
+      jet.design,
+      jet.concept,
+    );
+    const grid = defaultProbabilityGrid(jet.design, 30, 40);
+    const options = { seed: 7, samples: 2300, grid };
+    const whole = probabilityMap(jet.design, params, options) as ProbabilityMap;
+    const assembled = (ranges: Array<{ first: number; end: number }>) => {
+      const total = probabilityMapRun(jet.design, params, options);
+      for (const part of ranges) {
+        const run = probabilityMapRun(jet.design, params, { ...options, part });
+        while (!run.step(333));
+        total.absorb(run.part());
+      }
+      return total.result();
+    };
+    const splits = [sampleParts(2300, 1), sampleParts(2300, 2), sampleParts(2300, 3), [...sampleParts(2300, 3)].reverse(), [{ first: 0, end: 777 }, { first: 777, end: 2300 }]];
+    expect(sampleParts(2300, 3)).toEqual([{ first: 0, end: 1000 }, { first: 1000, end: 1500 }, { first: 1500, end: 2300 }]);
+    for (const ranges of splits) {
+      const map = assembled(ranges);
+      expect(map.samples).toBe(2300);
+      expect(Buffer.from(map.probability.buffer)).toEqual(Buffer.from(whole.probability.buffer));
+      expect(map.designPoint).toEqual(whole.designPoint);
+      expect(map.optimumSpread).toEqual(whole.optimumSpread);
+    }
+  });
+
+  it('splits samples into parts of whole blocks, never more parts than blocks', () => {
+    expect(MONTE_CARLO_BLOCK).toBe(500);
+    expect(sampleParts(10000, 2)).toEqual([{ first: 0, end: 5000 }, { first: 5000, end: 10000 }]);
+    expect(sampleParts(400, 4)).toEqual([{ first: 0, end: 400 }]);
+    expect(sampleParts(1000, 3)).toEqual([{ first: 0, end: 500 }, { first: 500, end: 1000 }]);
   });
 
   it('converges as 1/sqrt(N): 64 times the samples, about an eighth of the error', () => {

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { parseConcept, probabilityMap } from '../../../core';
 import { KNOT_MPS } from '../../../core/units/factors';
-import { StudyRunner, type RunnerHost } from '../../../app/renderer/lib/studies/probability-runner';
-import type { StudyReply } from '../../../app/renderer/lib/studies/probability-protocol';
+import { prepareStudy, StudyRunner, type PartWorker, type RunnerHost } from '../../../app/renderer/lib/studies/probability-runner';
+import type { PartReply, PartRequest, StudyReply } from '../../../app/renderer/lib/studies/probability-protocol';
 import { setIn } from '../../../app/renderer/lib/concept/edit';
 import { stallOnly } from './fixtures';
 
@@ -65,6 +65,50 @@ describe('the chance study runner', () => {
     const whole = probabilityMap(parsed.design, parsed.uncertainty.parameters, { seed: 20261202, samples: 3000, grid: GRID });
     expect(Array.from(done.outcome.map.probability)).toEqual(Array.from(whole!.probability));
     expect(done.outcome.map.designPoint).toEqual(whole!.designPoint);
+  });
+
+  it('gives the same map, bit for bit, with 1, 2 or 3 helper threads as on its own', () => {
+    // Helper threads stood in for by queued calls that do what probability-part.worker.ts does.
+    const withHelpers = (count: number) => {
+      const host = testHost();
+      const started: PartRequest[] = [];
+      let terminated = 0;
+      const create = (): PartWorker => {
+        const worker: PartWorker = {
+          onmessage: null,
+          onerror: null,
+          terminate: () => void terminated++,
+          postMessage(request: PartRequest) {
+            started.push(request);
+            host.defer(() => {
+              const prepared = prepareStudy(request.concept, request.grid, request.part);
+              if (!prepared.ok) throw new Error(prepared.message);
+              while (!prepared.run.step(250)) worker.onmessage?.({ data: { type: 'progress', done: prepared.run.done() } as PartReply } as MessageEvent<PartReply>);
+              worker.onmessage?.({ data: { type: 'part', part: prepared.run.part() } as PartReply } as MessageEvent<PartReply>);
+            });
+          },
+        };
+        return worker;
+      };
+      new StudyRunner({ ...host, helpers: { count, create } }, 3).handle({ type: 'run', id: 9, concept: stallOnly(650, 1.6, 2.8, 2600), grid: GRID });
+      host.drain();
+      const done = host.replies.find((reply) => reply.type === 'done');
+      if (done?.type !== 'done') throw new Error(`no result: ${JSON.stringify(host.replies.at(-1))}`);
+      return { map: done.outcome.map, started, terminated, replies: host.replies };
+    };
+    const alone = withHelpers(0);
+    expect(alone.started).toEqual([]);
+    for (const count of [1, 2, 3]) {
+      const run = withHelpers(count);
+      expect(run.started).toHaveLength(count);
+      expect(run.terminated).toBe(count);
+      expect(run.map.samples).toBe(2600);
+      expect(Buffer.from(run.map.probability.buffer)).toEqual(Buffer.from(alone.map.probability.buffer));
+      expect(run.map.designPoint).toEqual(alone.map.designPoint);
+      expect(run.map.optimumSpread).toEqual(alone.map.optimumSpread);
+      const progress = run.replies.flatMap((reply) => (reply.type === 'progress' ? [reply.done] : []));
+      expect(Math.max(...progress)).toBe(2600);
+    }
   });
 
   it('stops at the next pause when cancelled, and reports how far it got', () => {

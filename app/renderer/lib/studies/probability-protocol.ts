@@ -4,7 +4,7 @@
  * plain data that the structured clone carries; the map's arrays are
  * transferred, not copied.
  */
-import type { ProbabilityGrid, ProbabilityMap } from '../../../../core';
+import type { ProbabilityGrid, ProbabilityMap, ProbabilityPart } from '../../../../core';
 
 export type StudyRequest =
   /** Runs the study of this concept document on this grid; a run already going is dropped. */
@@ -27,3 +27,15 @@ export type StudyReply =
   | { type: 'cancelled'; id: number; done: number; total: number }
   /** The message names the field when the concept is the problem. */
   | { type: 'failed'; id: number; message: string };
+
+/** To a helper thread: run samples [first, end) of the study of this concept on this grid. */
+export interface PartRequest {
+  concept: unknown;
+  grid: ProbabilityGrid;
+  part: { first: number; end: number };
+}
+
+export type PartReply =
+  | { type: 'progress'; done: number }
+  | { type: 'part'; part: ProbabilityPart }
+  | { type: 'failed'; message: string };
