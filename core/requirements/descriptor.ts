@@ -80,6 +80,8 @@ export interface RequirementDescriptor<
   /** A limit caps wing loading; a curve needs power or thrust. */
   drawnAs: 'limit' | 'curve';
   boundary(requirement: Resolved, aircraft: Aircraft): BoundaryOf<Kind>;
+  /** Distances [m] the requirement is made of, by segment, at wing loading w [Pa] with the sea-level loading given; absent for kinds without segments. */
+  segments?(requirement: Resolved, aircraft: Aircraft, wingLoadingPa: number, loading: number): Record<string, number>;
   /** The flight speed the boundary uses, in words (for the methods reference and the read-out). */
   speedText: string;
   /** The configuration it flies in when the file names none. */

@@ -12,6 +12,7 @@ import type { RequirementDescriptor, ResolvedOf } from './descriptor';
 import { landingGroundRoll } from './landing-ground-roll';
 import { stall } from './stall';
 import { sustainedTurn } from './sustained-turn';
+import { takeoffDistance } from './takeoff-distance';
 import { takeoffGroundRoll } from './takeoff-ground-roll';
 
 export const REQUIREMENT_DESCRIPTORS = [
@@ -23,6 +24,7 @@ export const REQUIREMENT_DESCRIPTORS = [
   climbGradient,
   ceiling,
   sustainedTurn,
+  takeoffDistance,
 ] as const;
 
 type Descriptor = (typeof REQUIREMENT_DESCRIPTORS)[number];

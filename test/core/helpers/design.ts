@@ -11,14 +11,15 @@ import type { LandingGroundRollRequirement } from '../../../core/constraints/lan
 import type { StallRequirement } from '../../../core/constraints/stall';
 import type { SustainedTurnRequirement } from '../../../core/constraints/sustained-turn';
 import type { TakeoffGroundRollRequirement } from '../../../core/constraints/takeoff-ground-roll';
+import type { TakeoffDistanceRequirement } from '../../../core/requirements/takeoff-distance';
 import { FOOT_PER_MINUTE_MPS } from '../../../core/units/factors';
 
 type Extra<R extends Requirement> = Partial<Omit<R, 'kind'>>;
 
 function common(kind: Requirement['kind'], id: string) {
-  const propellerEfficiency = kind === 'takeoff-ground-roll' ? 0.55 : kind === 'cruise' || kind === 'sustained-turn' ? 0.8 : 0.75;
+  const propellerEfficiency = kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' ? 0.55 : kind === 'cruise' || kind === 'sustained-turn' ? 0.8 : 0.75;
   const configuration =
-    kind === 'stall' || kind === 'landing-ground-roll' ? 'landing' : kind === 'takeoff-ground-roll' || kind === 'climb-gradient' ? 'takeoff' : 'clean';
+    kind === 'stall' || kind === 'landing-ground-roll' ? 'landing' : kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'climb-gradient' ? 'takeoff' : 'clean';
   return { id, enabled: true, altitudeM: 0, temperatureOffsetK: 0, massFraction: 1, powerSetting: 1, propellerEfficiency, configuration };
 }
 
@@ -46,6 +47,21 @@ export function takeoffRoll(distanceM: number, extra: Extra<TakeoffGroundRollReq
     rollingFriction: 0.04,
     clGroundRun: 0.5,
     liftoffSpeedFactor: 1.1,
+    ...extra,
+  };
+}
+
+export function takeoffDistance(distanceM: number, extra: Extra<TakeoffDistanceRequirement> = {}): TakeoffDistanceRequirement {
+  return {
+    ...common('takeoff-distance', 'takeoff-distance'),
+    kind: 'takeoff-distance',
+    distanceM,
+    obstacleHeightM: 50 * 0.3048,
+    rollingFriction: 0.04,
+    clGroundRun: 0.5,
+    liftoffSpeedFactor: 1.1,
+    rotationTimeS: 3,
+    climbPropellerEfficiency: 0.75,
     ...extra,
   };
 }
