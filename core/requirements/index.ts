@@ -4,6 +4,7 @@
  * file beside this one (named after the kind) and a line in the list below.
  */
 import type { z } from 'zod';
+import { balancedFieldLength } from './balanced-field-length';
 import { ceiling } from './ceiling';
 import { climbGradient } from './climb-gradient';
 import { climbRate } from './climb-rate';
@@ -25,6 +26,7 @@ export const REQUIREMENT_DESCRIPTORS = [
   ceiling,
   sustainedTurn,
   takeoffDistance,
+  balancedFieldLength,
 ] as const;
 
 type Descriptor = (typeof REQUIREMENT_DESCRIPTORS)[number];

@@ -12,14 +12,15 @@ import type { StallRequirement } from '../../../core/constraints/stall';
 import type { SustainedTurnRequirement } from '../../../core/constraints/sustained-turn';
 import type { TakeoffGroundRollRequirement } from '../../../core/constraints/takeoff-ground-roll';
 import type { TakeoffDistanceRequirement } from '../../../core/requirements/takeoff-distance';
+import type { BalancedFieldLengthRequirement } from '../../../core/requirements/balanced-field-length';
 import { FOOT_PER_MINUTE_MPS } from '../../../core/units/factors';
 
 type Extra<R extends Requirement> = Partial<Omit<R, 'kind'>>;
 
 function common(kind: Requirement['kind'], id: string) {
-  const propellerEfficiency = kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' ? 0.55 : kind === 'cruise' || kind === 'sustained-turn' ? 0.8 : 0.75;
+  const propellerEfficiency = kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'balanced-field-length' ? 0.55 : kind === 'cruise' || kind === 'sustained-turn' ? 0.8 : 0.75;
   const configuration =
-    kind === 'stall' || kind === 'landing-ground-roll' ? 'landing' : kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'climb-gradient' ? 'takeoff' : 'clean';
+    kind === 'stall' || kind === 'landing-ground-roll' ? 'landing' : kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'balanced-field-length' || kind === 'climb-gradient' ? 'takeoff' : 'clean';
   return { id, enabled: true, altitudeM: 0, temperatureOffsetK: 0, massFraction: 1, powerSetting: 1, propellerEfficiency, configuration };
 }
 
@@ -62,6 +63,18 @@ export function takeoffDistance(distanceM: number, extra: Extra<TakeoffDistanceR
     liftoffSpeedFactor: 1.1,
     rotationTimeS: 3,
     climbPropellerEfficiency: 0.75,
+    ...extra,
+  };
+}
+
+export function balancedField(distanceM: number, extra: Extra<BalancedFieldLengthRequirement> = {}): BalancedFieldLengthRequirement {
+  return {
+    ...common('balanced-field-length', 'bfl'),
+    kind: 'balanced-field-length',
+    distanceM,
+    obstacleHeightM: 35 * 0.3048,
+    v2SpeedFactor: 1.2,
+    averageThrustFraction: 0.75 * (10 / 9),
     ...extra,
   };
 }

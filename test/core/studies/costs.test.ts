@@ -72,6 +72,7 @@ describe('requirementCosts', () => {
       ceiling: 'altitude down',
       'sustained-turn': 'loadFactor down',
       'takeoff-distance': 'distance up',
+      'balanced-field-length': 'distance up',
     });
   });
 
