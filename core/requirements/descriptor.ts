@@ -20,6 +20,8 @@ export type EditorValue =
   | { type: 'number'; integer?: boolean }
   /** A fraction shown as a percentage (the file takes 0.024 or "2.4 %"). */
   | { type: 'percent' }
+  /** true or false; the file takes a JSON boolean. */
+  | { type: 'switch' }
   | { type: 'configuration' };
 
 export interface EditorField {

@@ -4,12 +4,14 @@
  * file beside this one (named after the kind) and a line in the list below.
  */
 import type { z } from 'zod';
+import { approachSpeed } from './approach-speed';
 import { balancedFieldLength } from './balanced-field-length';
 import { ceiling } from './ceiling';
 import { climbGradient } from './climb-gradient';
 import { climbRate } from './climb-rate';
 import { cruise } from './cruise';
 import type { RequirementDescriptor, ResolvedOf } from './descriptor';
+import { landingDistance } from './landing-distance';
 import { landingGroundRoll } from './landing-ground-roll';
 import { stall } from './stall';
 import { sustainedTurn } from './sustained-turn';
@@ -27,6 +29,8 @@ export const REQUIREMENT_DESCRIPTORS = [
   sustainedTurn,
   takeoffDistance,
   balancedFieldLength,
+  landingDistance,
+  approachSpeed,
 ] as const;
 
 type Descriptor = (typeof REQUIREMENT_DESCRIPTORS)[number];

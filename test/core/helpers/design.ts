@@ -13,6 +13,8 @@ import type { SustainedTurnRequirement } from '../../../core/constraints/sustain
 import type { TakeoffGroundRollRequirement } from '../../../core/constraints/takeoff-ground-roll';
 import type { TakeoffDistanceRequirement } from '../../../core/requirements/takeoff-distance';
 import type { BalancedFieldLengthRequirement } from '../../../core/requirements/balanced-field-length';
+import type { LandingDistanceRequirement } from '../../../core/requirements/landing-distance';
+import type { ApproachSpeedRequirement } from '../../../core/requirements/approach-speed';
 import { FOOT_PER_MINUTE_MPS } from '../../../core/units/factors';
 
 type Extra<R extends Requirement> = Partial<Omit<R, 'kind'>>;
@@ -20,7 +22,7 @@ type Extra<R extends Requirement> = Partial<Omit<R, 'kind'>>;
 function common(kind: Requirement['kind'], id: string) {
   const propellerEfficiency = kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'balanced-field-length' ? 0.55 : kind === 'cruise' || kind === 'sustained-turn' ? 0.8 : 0.75;
   const configuration =
-    kind === 'stall' || kind === 'landing-ground-roll' ? 'landing' : kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'balanced-field-length' || kind === 'climb-gradient' ? 'takeoff' : 'clean';
+    kind === 'stall' || kind === 'landing-ground-roll' || kind === 'landing-distance' || kind === 'approach-speed' ? 'landing' : kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'balanced-field-length' || kind === 'climb-gradient' ? 'takeoff' : 'clean';
   return { id, enabled: true, altitudeM: 0, temperatureOffsetK: 0, massFraction: 1, powerSetting: 1, propellerEfficiency, configuration };
 }
 
@@ -36,6 +38,8 @@ export function landingRoll(distanceM: number, extra: Extra<LandingGroundRollReq
     brakingFriction: 0.3,
     touchdownSpeedFactor: 1.15,
     freeRollTimeS: 0,
+    clGround: null,
+    liftDumping: false,
     ...extra,
   };
 }
@@ -77,6 +81,28 @@ export function balancedField(distanceM: number, extra: Extra<BalancedFieldLengt
     averageThrustFraction: 0.75 * (10 / 9),
     ...extra,
   };
+}
+
+export function landingDistance(distanceM: number, extra: Extra<LandingDistanceRequirement> = {}): LandingDistanceRequirement {
+  return {
+    ...common('landing-distance', 'landing-distance'),
+    kind: 'landing-distance',
+    distanceM,
+    obstacleHeightM: 50 * 0.3048,
+    fieldLengthFactor: 1,
+    approachSpeedFactor: 1.3,
+    touchdownSpeedFactor: 1.15,
+    approachAngleRad: (3 * Math.PI) / 180,
+    brakingFriction: 0.3,
+    freeRollTimeS: 2,
+    clGround: 0.5,
+    liftDumping: false,
+    ...extra,
+  };
+}
+
+export function approachSpeed(speedMps: number, extra: Extra<ApproachSpeedRequirement> = {}): ApproachSpeedRequirement {
+  return { ...common('approach-speed', 'approach'), kind: 'approach-speed', speedMps, speedFactor: 1.3, ...extra };
 }
 
 export function cruise(speedMps: number, extra: Extra<CruiseRequirement> = {}): CruiseRequirement {

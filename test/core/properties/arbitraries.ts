@@ -4,7 +4,7 @@
  */
 import fc from 'fast-check';
 import type { Design, PropulsionKind, Requirement } from '../../../core/model';
-import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffDistance, takeoffRoll, balancedField } from '../helpers/design';
+import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffDistance, takeoffRoll, balancedField, landingDistance, approachSpeed } from '../helpers/design';
 
 const kinds: PropulsionKind[] = ['piston', 'turbocharged-piston', 'turboprop', 'turbofan', 'electric'];
 

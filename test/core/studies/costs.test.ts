@@ -73,6 +73,8 @@ describe('requirementCosts', () => {
       'sustained-turn': 'loadFactor down',
       'takeoff-distance': 'distance up',
       'balanced-field-length': 'distance up',
+      'landing-distance': 'distance up',
+      'approach-speed': 'speed up',
     });
   });
 
