@@ -116,6 +116,7 @@ export const landingDistance = defineRequirement<'landing-distance', LandingDist
   }),
   drawnAs: 'limit',
   boundary: landingDistanceBoundary,
+  usesDrag: () => true,
   segments: (r, aircraft, w) => ({ ...landingDistanceSegments(r, aircraft, w) }),
   speedText: 'the approach speed k_app V_s,L at the obstacle',
   defaultConfiguration: 'landing',

@@ -36,6 +36,7 @@ export const landingGroundRoll = defineRequirement<'landing-ground-roll', Landin
   }),
   drawnAs: 'limit',
   boundary: landingGroundRollBoundary,
+  usesDrag: (r) => r.clGround !== null || r.liftDumping,
   speedText: 'the touchdown speed, k_TD times the landing stall speed',
   defaultConfiguration: 'landing',
   propeller: null,
