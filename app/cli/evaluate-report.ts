@@ -180,8 +180,9 @@ function speedSection(evaluation: Evaluation, system: UnitSystem): string[] {
     ['Minimum drag', `${speedText(speeds.minimumDrag, system)}${unflyable(speeds.minimumDrag)}`],
     ['Minimum power', `${speedText(speeds.minimumPower, system)}${unflyable(speeds.minimumPower)}`],
   ];
-  if (speeds.approach !== undefined) rows.push([`Approach (${speeds.approachBasis ?? '1.3 × landing stall'})`, speedText(speeds.approach, system)]);
-  return [...wrap(title, ''), ...table(rows)];
+  if (speeds.approach !== undefined) rows.push(['Approach', speedText(speeds.approach, system)]);
+  const basis = speeds.approach !== undefined ? wrap(`Approach speed: ${speeds.approachBasis ?? '1.3 × landing stall speed'}.`, '  ') : [];
+  return [...wrap(title, ''), ...table(rows), ...basis];
 }
 
 function warningSection(warnings: readonly WarningJson[]): string[] {
