@@ -9,6 +9,8 @@ export type BoundaryOf<Kind extends string> =
       id: string;
       kind: Kind;
       wingLoadingMaxPa: number;
+      /** Flight speed (TAS, m/s) of the condition the limit stands for at wing loading w; absent where none applies. */
+      speedAt?: (wingLoadingPa: number) => number;
     }
   | {
       type: 'curve';

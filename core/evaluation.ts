@@ -11,14 +11,22 @@ import type { RequirementKind } from './requirements';
 
 export const EVALUATION_FORMAT = 'loftpoint-evaluation/1';
 
-export interface LimitBoundaryJson {
+/** What each boundary adds at the optimum (absent without an optimum). */
+interface AtOptimumJson {
+  /** True airspeed [m/s] of the condition the requirement uses, at the optimum wing loading. */
+  speedAtOptimum?: number;
+  /** Distances [m] by segment at the optimum (take-off and landing distances). */
+  segmentsAtOptimum?: Record<string, number>;
+}
+
+export interface LimitBoundaryJson extends AtOptimumJson {
   id: string;
   kind: RequirementKind;
   label?: string;
   wingLoadingMax: number;
 }
 
-export interface CurveBoundaryJson {
+export interface CurveBoundaryJson extends AtOptimumJson {
   id: string;
   kind: RequirementKind;
   label?: string;
@@ -58,6 +66,8 @@ export interface SpeedsJson {
   minimumPower: number;
   /** Additions beyond DESIGN.md's three. */
   approach?: number;
+  /** How the approach speed was taken, in words (factor, configuration, mass). */
+  approachBasis?: string;
   stallByConfiguration?: Record<string, number>;
 }
 

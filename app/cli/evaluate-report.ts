@@ -13,7 +13,7 @@ import {
   type WarningJson,
 } from '../../core';
 import { kindTitle } from '../chart/palette';
-import { requirementValues } from '../report/requirement-values';
+import { requirementValues, segmentsText } from '../report/requirement-values';
 import { SIZING_CAUTION } from '../chart/caution';
 import { wrapText } from '../chart/text';
 import { oneLine } from './output-file';
@@ -85,12 +85,13 @@ function marginFor(margins: readonly MarginJson[] | undefined, id: string): stri
 function requirementSection(design: Design, evaluation: Evaluation, system: UnitSystem): string[] {
   const active = new Set(evaluation.optimum?.active ?? []);
   const hasDesignPoint = evaluation.designPoint !== undefined;
-  const header = ['id', 'kind', 'binds', 'margin at optimum', ...(hasDesignPoint ? ['margin at design point'] : [])];
+  const header = ['id', 'kind', 'binds', 'margin at optimum', 'speed at optimum (TAS)', ...(hasDesignPoint ? ['margin at design point'] : [])];
   const rows = evaluation.boundaries.map((boundary) => [
     boundary.id,
     kindTitle(boundary.kind),
     active.has(boundary.id) ? 'yes' : '',
     evaluation.optimum ? marginFor(evaluation.optimum.margins, boundary.id) : '—',
+    formatQuantity(boundary.speedAtOptimum, 'speed', system),
     ...(hasDesignPoint ? [marginFor(evaluation.designPoint?.margins, boundary.id)] : []),
   ]);
   const lines = table([header, ...rows]);
@@ -100,6 +101,7 @@ function requirementSection(design: Design, evaluation: Evaluation, system: Unit
     out.push(lines[i + 1]);
     const requirement = design.requirements.find((r) => r.id === boundary.id);
     if (requirement) out.push(...wrap(requirementValues(requirement, design.aircraft.propulsion.kind, system), '      '));
+    if (boundary.segmentsAtOptimum) out.push(...wrap(`At the optimum: ${segmentsText(boundary.segmentsAtOptimum, system)}`, '      '));
     if (boundary.label?.trim()) out.push(...wrap(boundary.label.trim(), '      '));
   });
   const disabled = design.requirements.filter((requirement) => !requirement.enabled).map((requirement) => requirement.id);
@@ -178,8 +180,9 @@ function speedSection(evaluation: Evaluation, system: UnitSystem): string[] {
     ['Minimum drag', `${speedText(speeds.minimumDrag, system)}${unflyable(speeds.minimumDrag)}`],
     ['Minimum power', `${speedText(speeds.minimumPower, system)}${unflyable(speeds.minimumPower)}`],
   ];
-  if (speeds.approach !== undefined) rows.push(['Approach (1.3 × landing stall)', speedText(speeds.approach, system)]);
-  return [...wrap(title, ''), ...table(rows)];
+  if (speeds.approach !== undefined) rows.push(['Approach', speedText(speeds.approach, system)]);
+  const basis = speeds.approach !== undefined ? wrap(`Approach speed: ${speeds.approachBasis ?? '1.3 × landing stall speed'}.`, '  ') : [];
+  return [...wrap(title, ''), ...table(rows), ...basis];
 }
 
 function warningSection(warnings: readonly WarningJson[]): string[] {

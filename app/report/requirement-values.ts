@@ -36,3 +36,11 @@ export function requirementValues(r: Requirement, kind: PropulsionKind, system: 
   if (ownAltitude && r.temperatureOffsetK !== 0) where.push(isaText(r.temperatureOffsetK, system));
   return [...descriptor.summary(r, system), ...where, ...conditions(r, kind)].join(' · ');
 }
+
+/** "ground roll 420 m + rotation 150 m + ... = 900 m". */
+export function segmentsText(segments: Record<string, number>, system: UnitSystem): string {
+  const words = (key: string) => key.replace(/[A-Z]/g, (c) => ` ${c.toLowerCase()}`);
+  const parts = Object.entries(segments).map(([key, metres]) => `${words(key)} ${formatQuantity(metres, 'length', system)}`);
+  const total = Object.values(segments).reduce((a, b) => a + b, 0);
+  return `${parts.join(' + ')} = ${formatQuantity(total, 'length', system)}`;
+}

@@ -117,11 +117,11 @@ export function speedsSection(ctx: ReportContext): string {
     ['Minimum drag', `${speed(speeds.minimumDrag)}${flag(speeds.minimumDrag)}`],
     ['Minimum power', `${speed(speeds.minimumPower)}${flag(speeds.minimumPower)}`],
   ];
-  if (speeds.approach !== undefined) rows.push(['Approach, 1.3 × landing stall (14 CFR 23.73)', speed(speeds.approach)]);
+  if (speeds.approach !== undefined) rows.push([`Approach, ${speeds.approachBasis ?? '1.3 × landing stall speed (14 CFR 23.73)'}`, speed(speeds.approach)]);
   const at = evaluation.designPoint?.wingLoading ?? evaluation.optimum?.wingLoading;
   const body = [
     facts(rows),
-    paragraph(`Equivalent airspeeds at ${ctx.wingLoading(at)}, sea level ISA, take-off mass.`, 'small muted'),
+    paragraph(`Equivalent airspeeds at ${ctx.wingLoading(at)}, sea level ISA, take-off mass (the approach speed at the mass it names).`, 'small muted'),
   ].join('\n');
   return section('speeds', 'Characteristic speeds', body);
 }

@@ -2,6 +2,7 @@
  * Stall speed requirement: a wing-loading limit.
  */
 import { RHO0 } from '../atmosphere';
+import { stallSpeed } from '../aero/speeds';
 import type { Aircraft } from '../aircraft';
 import type { BoundaryOf } from '../boundary';
 import type { RequirementCommon } from '../requirements/common';
@@ -26,5 +27,6 @@ export function stallBoundary(requirement: StallRequirement, aircraft: Aircraft)
     id: requirement.id,
     kind: requirement.kind,
     wingLoadingMaxPa: (0.5 * RHO0 * v * v * c.polar.clMax) / c.beta,
+    speedAt: (w: number): number => (w > 0 ? stallSpeed(c.beta * w, RHO0, c.polar.clMax) : NaN),
   };
 }

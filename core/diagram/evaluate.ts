@@ -12,6 +12,7 @@ import {
   type OptimumJson,
   type WarningJson,
 } from '../evaluation';
+import { requirementKind } from '../requirements';
 import { loadingAxis, type Design, type DesignPoint, type LoadingAxis } from '../model';
 import { assumptionWarnings } from './assumption-warnings';
 import { requirementBoundaries, type RequirementBoundary } from './boundaries';
@@ -69,6 +70,17 @@ function atOptimum(entries: readonly RequirementBoundary[], w: number, y: number
   return { active, margins };
 }
 
+/** Speed and segments of one boundary at the optimum; only finite numbers are written. */
+function boundaryAtOptimum({ requirement, boundary }: RequirementBoundary, aircraft: Design['aircraft'], w: number, y: number) {
+  const speed = boundary.speedAt?.(w);
+  const segments = requirementKind(requirement.kind).segments?.(requirement, aircraft, w, y);
+  const finiteSegments = segments && Object.values(segments).every(Number.isFinite) ? segments : undefined;
+  return {
+    ...(speed !== undefined && Number.isFinite(speed) ? { speedAtOptimum: speed } : {}),
+    ...(finiteSegments ? { segmentsAtOptimum: finiteSegments } : {}),
+  };
+}
+
 function designPointJson(entries: readonly RequirementBoundary[], axis: LoadingAxis, point: DesignPoint): DesignPointJson {
   const margins = marginsFor(entries, point.wingLoadingPa, point.loading);
   return { ...pointJson(axis, point.wingLoadingPa, point.loading), feasible: allMet(margins), margins };
@@ -119,6 +131,7 @@ export function evaluateDesign(design: Design): Evaluation {
   if (found) {
     const { wingLoadingPa: w, loading: y } = found;
     optimum = { ...pointJson(axis, w, y), ...atOptimum(entries, w, y), ...(found.unbounded ? { unbounded: true } : {}) };
+    entries.forEach((entry, i) => Object.assign(boundaries[i], boundaryAtOptimum(entry, aircraft, w, y)));
   }
   warnings.push(...optimumWarnings(found, range, curves.length, entries.length));
 
@@ -134,7 +147,7 @@ export function evaluateDesign(design: Design): Evaluation {
     optimum,
     ...(designPoint ? { designPoint } : {}),
     // At the design point, else the optimum; with neither, mid-range so the speeds stay defined.
-    speeds: reportedSpeeds(aircraft, sized?.w ?? 0.5 * (range[0] + range[1])),
+    speeds: reportedSpeeds(aircraft, sized?.w ?? 0.5 * (range[0] + range[1]), design.requirements),
     sizing: sized ? sizingAt(aircraft, axis, sized.w, sized.y) : null,
     warnings,
   };

@@ -20,6 +20,8 @@ export type EditorValue =
   | { type: 'number'; integer?: boolean }
   /** A fraction shown as a percentage (the file takes 0.024 or "2.4 %"). */
   | { type: 'percent' }
+  /** true or false; the file takes a JSON boolean. */
+  | { type: 'switch' }
   | { type: 'configuration' };
 
 export interface EditorField {
@@ -80,6 +82,10 @@ export interface RequirementDescriptor<
   /** A limit caps wing loading; a curve needs power or thrust. */
   drawnAs: 'limit' | 'curve';
   boundary(requirement: Resolved, aircraft: Aircraft): BoundaryOf<Kind>;
+  /** For a limit: whether it takes the aircraft's drag polar (aspect ratio, C_D0, Oswald efficiency), so studies vary it with them. Curves always do. */
+  usesDrag?(requirement: Resolved): boolean;
+  /** Distances [m] the requirement is made of, by segment, at wing loading w [Pa] with the sea-level loading given; absent for kinds without segments. */
+  segments?(requirement: Resolved, aircraft: Aircraft, wingLoadingPa: number, loading: number): Record<string, number>;
   /** The flight speed the boundary uses, in words (for the methods reference and the read-out). */
   speedText: string;
   /** The configuration it flies in when the file names none. */

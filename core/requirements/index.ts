@@ -4,14 +4,18 @@
  * file beside this one (named after the kind) and a line in the list below.
  */
 import type { z } from 'zod';
+import { approachSpeed } from './approach-speed';
+import { balancedFieldLength } from './balanced-field-length';
 import { ceiling } from './ceiling';
 import { climbGradient } from './climb-gradient';
 import { climbRate } from './climb-rate';
 import { cruise } from './cruise';
 import type { RequirementDescriptor, ResolvedOf } from './descriptor';
+import { landingDistance } from './landing-distance';
 import { landingGroundRoll } from './landing-ground-roll';
 import { stall } from './stall';
 import { sustainedTurn } from './sustained-turn';
+import { takeoffDistance } from './takeoff-distance';
 import { takeoffGroundRoll } from './takeoff-ground-roll';
 
 export const REQUIREMENT_DESCRIPTORS = [
@@ -23,6 +27,10 @@ export const REQUIREMENT_DESCRIPTORS = [
   climbGradient,
   ceiling,
   sustainedTurn,
+  takeoffDistance,
+  balancedFieldLength,
+  landingDistance,
+  approachSpeed,
 ] as const;
 
 type Descriptor = (typeof REQUIREMENT_DESCRIPTORS)[number];

@@ -17,6 +17,8 @@ const shape = {
   brakingFriction: z.number().gt(0).lte(1).optional(),
   touchdownSpeedFactor: speedFactor.optional(),
   freeRollTime: quantityField('time', { from: 0 }).optional(),
+  clGround: z.number().gte(0).lte(3).optional(),
+  liftDumping: z.boolean().optional(),
 };
 
 export const landingGroundRoll = defineRequirement<'landing-ground-roll', LandingGroundRollRequirement, typeof shape>({
@@ -29,9 +31,12 @@ export const landingGroundRoll = defineRequirement<'landing-ground-roll', Landin
     brakingFriction: r.brakingFriction ?? 0.3,
     touchdownSpeedFactor: r.touchdownSpeedFactor ?? 1.15,
     freeRollTimeS: si(r.freeRollTime, 'time', 0),
+    clGround: r.clGround ?? null,
+    liftDumping: r.liftDumping ?? false,
   }),
   drawnAs: 'limit',
   boundary: landingGroundRollBoundary,
+  usesDrag: (r) => r.clGround !== null || r.liftDumping,
   speedText: 'the touchdown speed, k_TD times the landing stall speed',
   defaultConfiguration: 'landing',
   propeller: null,
@@ -47,6 +52,8 @@ export const landingGroundRoll = defineRequirement<'landing-ground-roll', Landin
       defaultText: '0 s',
       advanced: true,
     },
+    { key: 'clGround', title: 'Lift coefficient in the braking roll', value: numberValue(), defaultText: 'no aerodynamic terms', advanced: true },
+    { key: 'liftDumping', title: 'Lift dumping', value: { type: 'switch' }, defaultText: 'off', advanced: true },
   ],
   newRequirement: { distance: '400 m' },
   summary: (r, system) => [`${formatQuantity(r.distanceM, 'length', system)} ground roll`, `μ braking ${plain(r.brakingFriction)}`],
@@ -63,6 +70,10 @@ A limit: the touchdown speed must be low enough to stop within the ground roll S
 - rho: air density at the field's pressure altitude and temperature offset.
 - k_TD: touchdown speed over landing stall speed, 1.15 by default (Raymer, *Aircraft Design: A Conceptual Approach*, ch. 17; from memory).
 - mu_B: braking friction, 0.3 by default (dry runway 0.3-0.5, wet 0.15-0.3, Raymer Table 17.1; from memory). t_fr: 0 s by default.
-- Aerodynamic drag and reverse thrust during the roll are left out, which errs on the long side; the air distance over the threshold is not included.
+- Without \`clGround\` or \`liftDumping\` (as in files written before they existed), aerodynamic lift and drag during the roll are left out. With them, the braking roll takes the aerodynamic lift C_L,g (0 with lift dumping) and the configuration's drag, idle thrust zero, by Raymer's closed form (ch. 17, eq. 17.101, from memory), and the limit is the largest wing loading whose free roll plus braking roll fits (bracketing root search):
+
+      S = V_TD t_fr + ln[K_T / (K_T + K_A V_TD^2)] / (2 g0 K_A),   K_T = -mu_B,   K_A = rho (mu_B C_L,g - C_D,g) / (2 beta w)
+
+- Reverse thrust is never credited; the air distance over the threshold is not included (see \`landing-distance\`).
 - Source: uniformly decelerated motion (kinematics), with Raymer's touchdown-speed ratio.`,
 });

@@ -9,6 +9,7 @@
  * that inherits it.
  */
 import type { ConfigurationPolar, Design, Requirement } from '../model';
+import { requirementKind } from '../requirements';
 import { isCurveKind, type FieldRef } from './uncertain-fields';
 
 /**
@@ -89,7 +90,8 @@ export function assigner(ref: FieldRef, targets: readonly string[]): (working: D
  * friction); every other kind uses the polar and the propulsion.
  */
 export function affectedRequirements(ref: FieldRef, design: Design, targets: readonly string[]): string[] {
-  const curves = design.requirements.filter((r) => isCurveKind(r.kind));
+  // Curves, and the limits that take the configuration's drag (their descriptor says so).
+  const curves = design.requirements.filter((r) => isCurveKind(r.kind) || requirementKind(r.kind).usesDrag?.(r) === true);
   if (ref.scope === 'requirement') return [ref.id];
   if (ref.scope === 'aircraft') return curves.map((r) => r.id);
   // A configuration the aircraft lacks is flown as clean (core/constraints/flight-condition.ts).

@@ -106,3 +106,29 @@ test('requirements can be added, switched off and removed; assumptions warn outs
   await expect(field.getByTestId('field-error')).toHaveCount(0);
   await window.expectNoNaN();
 });
+
+test('a landing distance over 50 ft edits like any requirement and lists its speed and segments at the optimum', async ({ window }) => {
+  await window.selectConcept('LP-2 two-seat trainer');
+  const card = await window.openRequirement('landing-grass');
+  const distance = card.getByLabel('Landing distance (field length with a factor)');
+  await expect(distance).toHaveValue(/^420$/);
+  const limit = window.byTest('limit-landing-grass');
+  const x = Number(await limit.getAttribute('x1'));
+
+  // A shorter landing distance allows less wing loading: the limit moves left.
+  await distance.fill('380');
+  await expect.poll(async () => Number(await limit.getAttribute('x1'))).toBeLessThan(x);
+  const shorter = Number(await limit.getAttribute('x1'));
+
+  // Lift dumping (a yes/no field under More) shortens the braking roll: the limit moves right again.
+  await card.locator('details').first().locator('summary').click();
+  await card.getByLabel('Lift dumping').selectOption('yes');
+  await expect.poll(async () => Number(await limit.getAttribute('x1'))).toBeGreaterThan(shorter);
+
+  // The design-point panel lists each requirement's speed at the optimum, and the landing's segments.
+  const row = window.page.locator('[data-testid="speed-at-optimum-row"][data-id="landing-grass"]');
+  await expect(row).toContainText(/\d+(\.\d+)? m\/s|kt/);
+  await expect(row.getByTestId('segments-at-optimum')).toContainText(/approach .* \+ flare .* \+ free roll .* \+ braking .* = /);
+  await window.shot('landing-distance');
+  await window.expectNoNaN();
+});

@@ -10,7 +10,7 @@ export const businessJet: DemoConcept = {
   title: 'LP-60 light business jet',
   summary:
     'A 7,400 kg twin-turbofan jet for six passengers: the 2.4 % second-segment climb with one engine out, ' +
-    'a 900 m take-off roll on a hot day, a 410 kt cruise at FL370 and a 43,000 ft ceiling.' +
+    'a 1,800 m balanced field on a hot day, a 1,400 m factored landing field, a 410 kt cruise at FL370 and a 43,000 ft ceiling.' +
     ` ${DEMO_CAUTION}`,
   concept: {
     format: 'loftpoint-concept/1',
@@ -38,12 +38,11 @@ export const businessJet: DemoConcept = {
         massFraction: 0.85,
       },
       {
-        id: 'takeoff-run',
-        kind: 'takeoff-ground-roll',
-        label: '900 m ground roll at sea level on an ISA+20 K day, paved runway (programme target)',
-        distance: '900 m',
+        id: 'takeoff-field',
+        kind: 'balanced-field-length',
+        label: 'Balanced field length 1,800 m over 35 ft at sea level on an ISA+20 K day (programme target; screen height of 14 CFR 25.113)',
+        distance: '1800 m',
         temperatureOffset: '20 K',
-        rollingFriction: 0.03,
       },
       {
         id: 'second-segment',
@@ -55,13 +54,22 @@ export const businessJet: DemoConcept = {
         configuration: 'second-segment',
       },
       {
-        id: 'landing-run',
-        kind: 'landing-ground-roll',
-        label: '750 m ground roll at landing mass on a dry runway (programme target)',
-        distance: '750 m',
+        id: 'landing-field',
+        kind: 'landing-distance',
+        label: 'Factored landing field length 1,400 m at landing mass, dry runway: landing distance over 50 ft at most 60 % of it (programme target)',
+        distance: '1400 m',
+        fieldLengthFactor: 0.6,
         massFraction: 0.85,
         brakingFriction: 0.4,
-        freeRollTime: '2 s',
+        liftDumping: true,
+      },
+      {
+        id: 'approach',
+        kind: 'approach-speed',
+        label: 'VREF at most 115 kt CAS at landing mass, flown at 1.23 VSR0 (14 CFR 25.125)',
+        speed: '115 kt',
+        speedFactor: 1.23,
+        massFraction: 0.85,
       },
       {
         id: 'cruise',

@@ -9,7 +9,7 @@ export const trainer: DemoConcept = {
   slug: 'trainer',
   title: 'LP-2 two-seat trainer',
   summary:
-    'A 750 kg two-seat piston trainer for a club on a grass field: stall at 45 kt in landing flaps, short grass rolls ' +
+    'A 750 kg two-seat piston trainer for a club on a grass field: stall at 45 kt in landing flaps, a short grass take-off roll and a 420 m landing over 50 ft ' +
     'on a warm day, a 110 kt cruise, a 700 ft/min climb and a 13,000 ft ceiling.' +
     ` ${DEMO_CAUTION}`,
   concept: {
@@ -47,12 +47,15 @@ export const trainer: DemoConcept = {
       },
       {
         id: 'landing-grass',
-        kind: 'landing-ground-roll',
-        label: '180 m ground roll on short grass, same field and day (club requirement)',
-        distance: '180 m',
+        kind: 'landing-distance',
+        label: '420 m landing distance over 50 ft onto short grass on a 5° approach, same field and day (club requirement)',
+        distance: '420 m',
+        obstacleHeight: '50 ft',
         altitude: '800 ft',
         temperatureOffset: '15 K',
+        approachAngle: '5 deg',
         brakingFriction: 0.25,
+        freeRollTime: '1 s',
       },
       {
         id: 'climb-83',

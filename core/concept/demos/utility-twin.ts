@@ -9,7 +9,7 @@ export const utilityTwin: DemoConcept = {
   slug: 'utility-twin',
   title: 'LP-19 utility twin',
   summary:
-    'A 5,700 kg twin turboprop for people and freight into a 2,200 m gravel strip on ISA+25 K days: short rolls, ' +
+    'A 5,700 kg twin turboprop for people and freight into a 2,200 m gravel strip on ISA+25 K days: a 900 m take-off over 50 ft, a short landing roll, ' +
     'the one-engine-out climb gradient from the strip, and a 230 kt cruise at 12,000 ft.' +
     ` ${DEMO_CAUTION}`,
   concept: {
@@ -38,9 +38,10 @@ export const utilityTwin: DemoConcept = {
       },
       {
         id: 'takeoff-strip',
-        kind: 'takeoff-ground-roll',
-        label: '550 m ground roll on gravel at 2,200 m elevation, ISA+25 K (operator requirement)',
-        distance: '550 m',
+        kind: 'takeoff-distance',
+        label: '900 m take-off distance over 50 ft from gravel at 2,200 m elevation, ISA+25 K, both engines (operator requirement)',
+        distance: '900 m',
+        obstacleHeight: '50 ft',
         altitude: '2200 m',
         temperatureOffset: '25 K',
         rollingFriction: 0.05,

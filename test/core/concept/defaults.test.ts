@@ -180,6 +180,9 @@ describe('parseConcept: defaults', () => {
       brakingFriction: 0.45,
       touchdownSpeedFactor: 1.3,
       freeRollTimeS: 3,
+      // Not written: aerodynamic terms left out, as files without them always meant.
+      clGround: null,
+      liftDumping: false,
     });
     // 1 psf = 47.880258980335843 Pa; 1 hp/lbf = 745.69987158227022 / 4.4482216152605 W/N (NIST SP 811).
     const psf = 47.880258980335843;

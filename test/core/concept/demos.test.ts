@@ -73,7 +73,7 @@ describe('DEMO_CONCEPTS', () => {
 });
 
 describe('demo scenarios', () => {
-  it('trainer: a 750 kg two-seat piston single, stall 45 kt CAS in landing flaps, grass rolls, climb and ceiling', () => {
+  it('trainer: a 750 kg two-seat piston single, stall 45 kt CAS in landing flaps, grass roll, landing over 50 ft, climb and ceiling', () => {
     const { design } = demo('trainer');
     expect(design.aircraft.takeoffMassKg).toBe(750);
     expect(design.aircraft.propulsion).toMatchObject({ kind: 'piston', engines: 1 });
@@ -82,7 +82,8 @@ describe('demo scenarios', () => {
     expect(stall).toMatchObject({ configuration: 'landing', speedMps: expect.closeTo((45 * 1852) / 3600, 9) });
     // Short grass: rolling friction about 0.05 (core/methods.md section 9, common practice).
     expect(requirement(design, 'takeoff-ground-roll')[0]).toMatchObject({ rollingFriction: 0.05 });
-    expect(requirement(design, 'landing-ground-roll')).toHaveLength(1);
+    // Landing over 50 ft, the screen height light-aircraft landing distances are given over (common practice); 1 ft = 0.3048 m.
+    expect(requirement(design, 'landing-distance')[0]).toMatchObject({ obstacleHeightM: expect.closeTo(15.24, 9), fieldLengthFactor: 1 });
     expect(requirement(design, 'cruise')).toHaveLength(1);
     expect(requirement(design, 'climb-rate')).toHaveLength(1);
     expect(requirement(design, 'ceiling')).toHaveLength(1);
@@ -93,8 +94,9 @@ describe('demo scenarios', () => {
   it('utility twin: two turboprops, a 2,200 m ISA+25 K strip and a one-engine-out gradient', () => {
     const { design } = demo('utility-twin');
     expect(design.aircraft.propulsion).toMatchObject({ kind: 'turboprop', engines: 2, lapseExponent: 0.75 });
-    const takeoff = requirement(design, 'takeoff-ground-roll')[0];
-    expect(takeoff).toMatchObject({ altitudeM: 2200, temperatureOffsetK: 25 });
+    // Take-off distance over 50 ft (common practice for the screen height of light aircraft); 1 ft = 0.3048 m.
+    const takeoff = requirement(design, 'takeoff-distance')[0];
+    expect(takeoff).toMatchObject({ altitudeM: 2200, temperatureOffsetK: 25, obstacleHeightM: expect.closeTo(15.24, 9) });
     expect(requirement(design, 'landing-ground-roll')[0]).toMatchObject({ altitudeM: 2200, temperatureOffsetK: 25 });
     // 14 CFR 23.2120(b)(3): 2 % one engine out at 400 ft (core/methods.md section 8, confirmed).
     const oei = requirement(design, 'climb-gradient')[0];
@@ -109,8 +111,12 @@ describe('demo scenarios', () => {
     expect(requirement(design, 'climb-gradient')[0]).toMatchObject({ gradient: 0.024, enginesInoperative: 1 });
     expect(requirement(design, 'cruise')[0].massFraction).toBeLessThan(1);
     expect(requirement(design, 'ceiling')).toHaveLength(1);
-    expect(requirement(design, 'takeoff-ground-roll')).toHaveLength(1);
-    expect(requirement(design, 'landing-ground-roll')).toHaveLength(1);
+    // Balanced field over 35 ft (14 CFR 25.113 screen height, from memory); 1 ft = 0.3048 m.
+    expect(requirement(design, 'balanced-field-length')[0]).toMatchObject({ obstacleHeightM: expect.closeTo(10.668, 9) });
+    // Factored landing field length: landing distance at most 60 % of the field (14 CFR 121.195(b), from memory).
+    expect(requirement(design, 'landing-distance')[0]).toMatchObject({ fieldLengthFactor: 0.6, massFraction: 0.85 });
+    // VREF at least 1.23 VSR0 (14 CFR 25.125, from memory).
+    expect(requirement(design, 'approach-speed')[0]).toMatchObject({ speedFactor: 1.23, massFraction: 0.85 });
     expect(design.designPoint).toBeDefined();
   });
 

@@ -10,7 +10,7 @@ interface BadCase {
   message: RegExp;
 }
 
-const KINDS = 'stall, landing-ground-roll, takeoff-ground-roll, cruise, climb-rate, climb-gradient, ceiling, sustained-turn';
+const KINDS = 'stall, landing-ground-roll, takeoff-ground-roll, cruise, climb-rate, climb-gradient, ceiling, sustained-turn, takeoff-distance, balanced-field-length, landing-distance, approach-speed';
 
 // Each bad input must give exactly one issue, at the field, saying what to write.
 const CASES: BadCase[] = [
@@ -48,7 +48,7 @@ const CASES: BadCase[] = [
     what: 'a field of another requirement kind',
     change: (c) => (c.requirements[1].distance = '300 m'),
     path: 'requirements[1].distance',
-    message: /"distance" belongs to landing-ground-roll, takeoff-ground-roll \(requirement "cruise"\)/,
+    message: /"distance" belongs to landing-ground-roll, takeoff-ground-roll, takeoff-distance, balanced-field-length, landing-distance \(requirement "cruise"\)/,
   },
   {
     what: 'an unknown requirement kind',

@@ -11,14 +11,18 @@ import type { LandingGroundRollRequirement } from '../../../core/constraints/lan
 import type { StallRequirement } from '../../../core/constraints/stall';
 import type { SustainedTurnRequirement } from '../../../core/constraints/sustained-turn';
 import type { TakeoffGroundRollRequirement } from '../../../core/constraints/takeoff-ground-roll';
+import type { TakeoffDistanceRequirement } from '../../../core/requirements/takeoff-distance';
+import type { BalancedFieldLengthRequirement } from '../../../core/requirements/balanced-field-length';
+import type { LandingDistanceRequirement } from '../../../core/requirements/landing-distance';
+import type { ApproachSpeedRequirement } from '../../../core/requirements/approach-speed';
 import { FOOT_PER_MINUTE_MPS } from '../../../core/units/factors';
 
 type Extra<R extends Requirement> = Partial<Omit<R, 'kind'>>;
 
 function common(kind: Requirement['kind'], id: string) {
-  const propellerEfficiency = kind === 'takeoff-ground-roll' ? 0.55 : kind === 'cruise' || kind === 'sustained-turn' ? 0.8 : 0.75;
+  const propellerEfficiency = kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'balanced-field-length' ? 0.55 : kind === 'cruise' || kind === 'sustained-turn' ? 0.8 : 0.75;
   const configuration =
-    kind === 'stall' || kind === 'landing-ground-roll' ? 'landing' : kind === 'takeoff-ground-roll' || kind === 'climb-gradient' ? 'takeoff' : 'clean';
+    kind === 'stall' || kind === 'landing-ground-roll' || kind === 'landing-distance' || kind === 'approach-speed' ? 'landing' : kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'balanced-field-length' || kind === 'climb-gradient' ? 'takeoff' : 'clean';
   return { id, enabled: true, altitudeM: 0, temperatureOffsetK: 0, massFraction: 1, powerSetting: 1, propellerEfficiency, configuration };
 }
 
@@ -34,6 +38,8 @@ export function landingRoll(distanceM: number, extra: Extra<LandingGroundRollReq
     brakingFriction: 0.3,
     touchdownSpeedFactor: 1.15,
     freeRollTimeS: 0,
+    clGround: null,
+    liftDumping: false,
     ...extra,
   };
 }
@@ -48,6 +54,55 @@ export function takeoffRoll(distanceM: number, extra: Extra<TakeoffGroundRollReq
     liftoffSpeedFactor: 1.1,
     ...extra,
   };
+}
+
+export function takeoffDistance(distanceM: number, extra: Extra<TakeoffDistanceRequirement> = {}): TakeoffDistanceRequirement {
+  return {
+    ...common('takeoff-distance', 'takeoff-distance'),
+    kind: 'takeoff-distance',
+    distanceM,
+    obstacleHeightM: 50 * 0.3048,
+    rollingFriction: 0.04,
+    clGroundRun: 0.5,
+    liftoffSpeedFactor: 1.1,
+    rotationTimeS: 3,
+    climbPropellerEfficiency: 0.75,
+    ...extra,
+  };
+}
+
+export function balancedField(distanceM: number, extra: Extra<BalancedFieldLengthRequirement> = {}): BalancedFieldLengthRequirement {
+  return {
+    ...common('balanced-field-length', 'bfl'),
+    kind: 'balanced-field-length',
+    distanceM,
+    obstacleHeightM: 35 * 0.3048,
+    v2SpeedFactor: 1.2,
+    averageThrustFraction: 0.75 * (10 / 9),
+    ...extra,
+  };
+}
+
+export function landingDistance(distanceM: number, extra: Extra<LandingDistanceRequirement> = {}): LandingDistanceRequirement {
+  return {
+    ...common('landing-distance', 'landing-distance'),
+    kind: 'landing-distance',
+    distanceM,
+    obstacleHeightM: 50 * 0.3048,
+    fieldLengthFactor: 1,
+    approachSpeedFactor: 1.3,
+    touchdownSpeedFactor: 1.15,
+    approachAngleRad: (3 * Math.PI) / 180,
+    brakingFriction: 0.3,
+    freeRollTimeS: 2,
+    clGround: 0.5,
+    liftDumping: false,
+    ...extra,
+  };
+}
+
+export function approachSpeed(speedMps: number, extra: Extra<ApproachSpeedRequirement> = {}): ApproachSpeedRequirement {
+  return { ...common('approach-speed', 'approach'), kind: 'approach-speed', speedMps, speedFactor: 1.3, ...extra };
 }
 
 export function cruise(speedMps: number, extra: Extra<CruiseRequirement> = {}): CruiseRequirement {

@@ -4,7 +4,7 @@
  */
 import fc from 'fast-check';
 import type { Design, PropulsionKind, Requirement } from '../../../core/model';
-import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffRoll } from '../helpers/design';
+import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffDistance, takeoffRoll, balancedField, landingDistance, approachSpeed } from '../helpers/design';
 
 const kinds: PropulsionKind[] = ['piston', 'turbocharged-piston', 'turboprop', 'turbofan', 'electric'];
 
@@ -73,6 +73,10 @@ export function requirementArb(engines: number): fc.Arbitrary<Requirement> {
     fc
       .record({ v: fc.double({ min: 20, max: 200, noNaN: true }), n: fc.double({ min: 1, max: 4, noNaN: true }), ...common })
       .map(({ v, n, ...c }) => sustainedTurn(v, n, c)),
+    fc
+      .record({ d: fc.double({ min: 60, max: 3000, noNaN: true }), h: fc.double({ min: 0, max: 20, noNaN: true }), ...common })
+      .map(({ d, h, ...c }) => takeoffDistance(d, { ...c, obstacleHeightM: h })),
+    fc.record({ d: fc.double({ min: 300, max: 4000, noNaN: true }), ...common }).map(({ d, ...c }) => balancedField(d, c)),
   );
 }
 

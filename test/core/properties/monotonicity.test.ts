@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { boundaryOf } from '../../../core/constraints';
 import type { Aircraft, Boundary } from '../../../core/model';
 import { aircraftArb } from './arbitraries';
-import { cruise, stall, takeoffRoll } from '../helpers/design';
+import { balancedField, cruise, landingDistance, stall, takeoffDistance, takeoffRoll } from '../helpers/design';
 
 const curve = (b: Boundary) => {
   if (b.type !== 'curve') throw new Error('expected a curve');
@@ -74,6 +74,62 @@ describe('boundaries move the way physics says', () => {
           }
         },
       ),
+    );
+  });
+
+  it('a higher, hotter, shorter or heavier take-off over an obstacle or balanced field needs more, where it can be met', () => {
+    // Lower density, less distance or more weight per area: more thrust or power (Raymer ch. 17; Torenbeek).
+    fc.assert(
+      fc.property(
+        aircraftArb,
+        fc.constantFrom('distance', 'balanced'),
+        fc.double({ min: 300, max: 3000, noNaN: true }),
+        fc.double({ min: 0, max: 2000, noNaN: true }),
+        fc.double({ min: 100, max: 1500, noNaN: true }),
+        fc.double({ min: 2, max: 20, noNaN: true }),
+        fc.double({ min: 300, max: 6000, noNaN: true }),
+        (ac, which, d, h, higher, hotter, w) => {
+          if (which === 'balanced' && ac.propulsion.engines < 2) return;
+          const make = (distanceM: number, extra: { altitudeM?: number; temperatureOffsetK?: number }) =>
+            which === 'distance' ? takeoffDistance(distanceM, { altitudeM: h, ...extra }) : balancedField(distanceM, { altitudeM: h, ...extra });
+          const at = (distanceM: number, extra: { altitudeM?: number; temperatureOffsetK?: number } = {}, wl = w) => curve(boundaryOf(make(distanceM, extra), ac))(wl);
+          const base = at(d);
+          if (!Number.isFinite(base)) return;
+          for (const worse of [at(d, { altitudeM: h + higher }), at(d, { temperatureOffsetK: hotter }), at(0.9 * d), at(d, {}, 1.1 * w)]) {
+            // Either at least as much is needed (to the root search's 1e-9 relative width; near the thrust at which the
+            // field length grows without bound the loading barely changes), or it can no longer be met at all (NaN).
+            if (Number.isFinite(worse)) expect(worse).toBeGreaterThanOrEqual(base * (1 - 1e-9));
+          }
+        },
+      ),
+      { numRuns: 60 },
+    );
+  });
+
+  it('a higher, hotter, shorter or heavier landing over an obstacle allows less wing loading', () => {
+    fc.assert(
+      fc.property(
+        aircraftArb,
+        fc.double({ min: 300, max: 3000, noNaN: true }),
+        fc.double({ min: 0, max: 2000, noNaN: true }),
+        fc.double({ min: 0.7, max: 0.95, noNaN: true }),
+        fc.boolean(),
+        (ac, d, h, beta, liftDumping) => {
+          const at = (distanceM: number, extra: { altitudeM?: number; temperatureOffsetK?: number; massFraction?: number } = {}) => {
+            const b = boundaryOf(landingDistance(distanceM, { altitudeM: h, massFraction: beta, liftDumping, ...extra }), ac);
+            if (b.type !== 'limit') throw new Error('expected a limit');
+            return b.wingLoadingMaxPa;
+          };
+          const base = at(d);
+          expect(Number.isFinite(base)).toBe(true);
+          if (!(base > 0)) return;
+          expect(at(d, { altitudeM: h + 500 })).toBeLessThan(base);
+          expect(at(d, { temperatureOffsetK: 15 })).toBeLessThan(base);
+          expect(at(0.9 * d)).toBeLessThan(base);
+          expect(at(d, { massFraction: beta + 0.05 })).toBeLessThan(base);
+        },
+      ),
+      { numRuns: 60 },
     );
   });
 });

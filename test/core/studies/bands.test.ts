@@ -54,11 +54,12 @@ describe('boundaryBands', () => {
   });
 
   it('switches to the ends one at a time plus all-low and all-high above 8 assumptions', () => {
-    const jet = demo('business-jet');
-    const block = typicalUncertainty(jet.design);
+    // The utility twin's take-off distance carries more assumptions than the jet's balanced field (which has no friction or ground-run C_L).
+    const twin = demo('utility-twin');
+    const block = typicalUncertainty(twin.design);
     block.parameters.push({ field: 'aircraft.aero.cdLinear', low: -0.01, high: 0.01, distribution: 'uniform' });
-    const params = ranged(block, jet.design, jet.concept);
-    const bands = boundaryBands(jet.design, params, [2000, 3000]);
+    const params = ranged(block, twin.design, twin.concept);
+    const bands = boundaryBands(twin.design, params, [2000, 3000]);
     for (const band of bands) {
       const k = band.fields.length;
       if (k > 8) expect([band.method, band.evaluated]).toEqual(['one-at-a-time', 2 * k + 3]);

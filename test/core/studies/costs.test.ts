@@ -71,6 +71,10 @@ describe('requirementCosts', () => {
       'climb-gradient': 'gradient down',
       ceiling: 'altitude down',
       'sustained-turn': 'loadFactor down',
+      'takeoff-distance': 'distance up',
+      'balanced-field-length': 'distance up',
+      'landing-distance': 'distance up',
+      'approach-speed': 'speed up',
     });
   });
 

@@ -72,7 +72,7 @@ describe('resolveUncertainty', () => {
     expect(issues[0].message).toMatch(/aircraft\.takeoffMass.*not an assumption that can carry a range/);
     expect(issues[1].message).toMatch(/no configuration "flaps20"/);
     expect(issues[2].message).toMatch(/no requirement has the id "nope"/);
-    expect(issues[3].message).toMatch(/rollingFriction belongs to a takeoff-ground-roll requirement/);
+    expect(issues[3].message).toMatch(/rollingFriction belongs to a takeoff-ground-roll or takeoff-distance requirement/);
   });
 
   it('refuses assumptions the concept does not use', () => {

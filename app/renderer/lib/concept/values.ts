@@ -6,7 +6,7 @@
 import { UNITS, parseQuantity, type UnitSystem } from '../../../../core';
 import type { FieldSpec } from './fields';
 
-export type ReadResult = { ok: true; value: string | number | undefined } | { ok: false; message: string };
+export type ReadResult = { ok: true; value: string | number | boolean | undefined } | { ok: false; message: string };
 
 const PRETTY_UNITS: Record<string, string> = { 'N/m^2': 'N/m²', 'lb/ft^2': 'lb/ft²', 'kg/m^2': 'kg/m²', degF: '°F', degC: '°C', deg: '°' };
 
@@ -47,6 +47,7 @@ export function storedSi(raw: unknown, spec: FieldSpec): number | null {
 export function displayText(raw: unknown, spec: FieldSpec, system: UnitSystem): string {
   if (raw === undefined || raw === null) return '';
   if (spec.value.type === 'configuration') return typeof raw === 'string' ? raw : '';
+  if (spec.value.type === 'switch') return raw === true ? 'yes' : raw === false ? 'no' : String(raw);
   const si = storedSi(raw, spec);
   if (si === null) return typeof raw === 'string' ? raw : String(raw);
   if (spec.value.type === 'quantity') {
@@ -68,6 +69,12 @@ export function readInput(text: string, spec: FieldSpec, system: UnitSystem): Re
   switch (spec.value.type) {
     case 'configuration':
       return { ok: true, value: trimmed };
+    case 'switch': {
+      const word = trimmed.toLowerCase();
+      if (['yes', 'on', 'true'].includes(word)) return { ok: true, value: true };
+      if (['no', 'off', 'false'].includes(word)) return { ok: true, value: false };
+      return { ok: false, message: `"${trimmed}" is not yes or no` };
+    }
     case 'number': {
       if (!BARE_NUMBER.test(trimmed)) return { ok: false, message: `"${trimmed}" is not a number` };
       const value = Number(trimmed);

@@ -65,7 +65,7 @@ export function pointReporter(design: Design, evaluation: Evaluation): PointRepo
       feasible: allMet(margins),
       margins: tightestFirst(margins),
       sizing: sizingAt(design.aircraft, axis, wingLoadingPa, loading),
-      speeds: reportedSpeeds(design.aircraft, wingLoadingPa),
+      speeds: reportedSpeeds(design.aircraft, wingLoadingPa, design.requirements),
     };
   };
 }
