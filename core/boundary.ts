@@ -9,6 +9,8 @@ export type BoundaryOf<Kind extends string> =
       id: string;
       kind: Kind;
       wingLoadingMaxPa: number;
+      /** The flight speed (TAS, m/s) the limit is set at, where it has one. */
+      speedMps?: number;
     }
   | {
       type: 'curve';

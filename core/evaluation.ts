@@ -16,6 +16,8 @@ export interface LimitBoundaryJson {
   kind: RequirementKind;
   label?: string;
   wingLoadingMax: number;
+  /** Flight Mach number of the requirement at the optimum's wing loading (TAS over the local speed of sound). */
+  machAtOptimum?: number;
 }
 
 export interface CurveBoundaryJson {
@@ -24,6 +26,8 @@ export interface CurveBoundaryJson {
   label?: string;
   /** [wing loading, required loading or null]. */
   points: Array<[number, number | null]>;
+  /** Flight Mach number of the requirement at the optimum's wing loading (TAS over the local speed of sound). */
+  machAtOptimum?: number;
 }
 
 export type BoundaryJson = LimitBoundaryJson | CurveBoundaryJson;

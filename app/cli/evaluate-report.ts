@@ -77,6 +77,11 @@ function table(rows: string[][], indent = '  '): string[] {
   );
 }
 
+/** "M0.75"; "—" where the requirement has no flight speed at the optimum. */
+function machText(mach: number | undefined): string {
+  return mach !== undefined && Number.isFinite(mach) ? `M${mach.toFixed(mach < 0.1 ? 3 : 2)}` : '—';
+}
+
 function marginFor(margins: readonly MarginJson[] | undefined, id: string): string {
   const found = margins?.find((margin) => margin.id === id);
   return found ? formatMargin(found.margin) : '—';
@@ -85,11 +90,12 @@ function marginFor(margins: readonly MarginJson[] | undefined, id: string): stri
 function requirementSection(design: Design, evaluation: Evaluation, system: UnitSystem): string[] {
   const active = new Set(evaluation.optimum?.active ?? []);
   const hasDesignPoint = evaluation.designPoint !== undefined;
-  const header = ['id', 'kind', 'binds', 'margin at optimum', ...(hasDesignPoint ? ['margin at design point'] : [])];
+  const header = ['id', 'kind', 'binds', 'Mach at optimum', 'margin at optimum', ...(hasDesignPoint ? ['margin at design point'] : [])];
   const rows = evaluation.boundaries.map((boundary) => [
     boundary.id,
     kindTitle(boundary.kind),
     active.has(boundary.id) ? 'yes' : '',
+    machText(boundary.machAtOptimum),
     evaluation.optimum ? marginFor(evaluation.optimum.margins, boundary.id) : '—',
     ...(hasDesignPoint ? [marginFor(evaluation.designPoint?.margins, boundary.id)] : []),
   ]);

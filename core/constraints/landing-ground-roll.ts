@@ -36,5 +36,6 @@ export function landingGroundRollBoundary(requirement: LandingGroundRollRequirem
     id: requirement.id,
     kind: requirement.kind,
     wingLoadingMaxPa: (0.5 * c.densityKgM3 * c.polar.clMax * vStall * vStall) / c.beta,
+    speedMps: vTouchdown,
   };
 }

@@ -26,5 +26,7 @@ export function stallBoundary(requirement: StallRequirement, aircraft: Aircraft)
     id: requirement.id,
     kind: requirement.kind,
     wingLoadingMaxPa: (0.5 * RHO0 * v * v * c.polar.clMax) / c.beta,
+    // The stall speed as TAS at the requirement's air (V = V_E / sqrt(sigma)).
+    speedMps: v * Math.sqrt(RHO0 / c.densityKgM3),
   };
 }

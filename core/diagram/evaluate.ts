@@ -21,6 +21,7 @@ import { designPointWarnings, optimumWarnings, speedWarnings } from './diagram-w
 import { wingLoadingCap, type CurveBoundary, type LimitBoundary } from './envelope';
 import { allMet, marginOf, marginsFor } from './margins';
 import { findOptimum } from './optimum';
+import { flightMachAt } from './flight-mach';
 import { sampleWingLoadings } from './sampling';
 import { sizingAt } from './sizing';
 import { reportedSpeeds } from './speeds';
@@ -119,6 +120,10 @@ export function evaluateDesign(design: Design): Evaluation {
   if (found) {
     const { wingLoadingPa: w, loading: y } = found;
     optimum = { ...pointJson(axis, w, y), ...atOptimum(entries, w, y), ...(found.unbounded ? { unbounded: true } : {}) };
+    entries.forEach((entry, i) => {
+      const mach = flightMachAt(entry, w);
+      if (mach !== undefined) boundaries[i].machAtOptimum = mach;
+    });
   }
   warnings.push(...optimumWarnings(found, range, curves.length, entries.length));
 

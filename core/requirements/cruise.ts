@@ -5,15 +5,15 @@ import { PROPELLER_CRUISE } from '../assumptions/typical-ranges';
 import { cruiseBoundary, type CruiseRequirement } from '../constraints/cruise';
 import { formatQuantity } from '../units/display';
 import { defineRequirement } from './descriptor';
-import { positiveSpeed, speedValue } from './fields';
+import { trueAirspeed, trueSpeedValue } from './fields';
 
 export type { CruiseRequirement };
 
-export const cruise = defineRequirement<'cruise', CruiseRequirement, { speed: typeof positiveSpeed }>({
+export const cruise = defineRequirement<'cruise', CruiseRequirement, { speed: typeof trueAirspeed }>({
   kind: 'cruise',
   title: 'Cruise speed',
   colour: '#2e7d5b', // pine
-  shape: { speed: positiveSpeed },
+  shape: { speed: trueAirspeed },
   resolve: (r, si) => ({ speedMps: si(r.speed, 'speed', NaN) }),
   drawnAs: 'curve',
   boundary: cruiseBoundary,
@@ -21,7 +21,7 @@ export const cruise = defineRequirement<'cruise', CruiseRequirement, { speed: ty
   defaultConfiguration: 'clean',
   propeller: { default: 0.8, typical: PROPELLER_CRUISE },
   atmosphere: { altitude: true, temperature: true },
-  editorFields: [{ key: 'speed', title: 'Cruise speed (TAS)', value: speedValue(), required: true }],
+  editorFields: [{ key: 'speed', title: 'Cruise speed (TAS)', value: trueSpeedValue(), required: true }],
   newRequirement: { speed: '150 kt', altitude: '8000 ft' },
   summary: (r, system) => [`${formatQuantity(r.speedMps, 'speed', system)} TAS`],
   costStep: { field: 'speedMps', conceptField: 'speed', relaxed: 'down' },

@@ -7,12 +7,12 @@ import { sustainedTurnBoundary, type SustainedTurnRequirement } from '../constra
 import { quantityField } from '../concept/quantity-field';
 import { formatQuantity } from '../units/display';
 import { defineRequirement } from './descriptor';
-import { numberValue, plain, positiveSpeed, speedValue } from './fields';
+import { numberValue, plain, trueAirspeed, trueSpeedValue } from './fields';
 
 export type { SustainedTurnRequirement };
 
 const shape = {
-  speed: positiveSpeed,
+  speed: trueAirspeed,
   loadFactor: z.number().gte(1).optional(),
   bankAngle: quantityField('angle', { from: 0, below: Math.PI / 2 }).optional(),
 };
@@ -34,7 +34,7 @@ export const sustainedTurn = defineRequirement<'sustained-turn', SustainedTurnRe
   propeller: { default: 0.8, typical: PROPELLER_CRUISE },
   atmosphere: { altitude: true, temperature: true },
   editorFields: [
-    { key: 'speed', title: 'Turn speed (TAS)', value: speedValue(), required: true },
+    { key: 'speed', title: 'Turn speed (TAS)', value: trueSpeedValue(), required: true },
     { key: 'loadFactor', title: 'Load factor', value: numberValue(), defaultText: 'from bank angle' },
     {
       key: 'bankAngle',

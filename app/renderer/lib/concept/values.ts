@@ -33,7 +33,7 @@ export function plainNumber(value: number): string {
 export function storedSi(raw: unknown, spec: FieldSpec): number | null {
   if (raw === undefined || raw === null) return null;
   if (spec.value.type === 'quantity') {
-    const parsed = parseQuantity(raw, spec.value.dimension);
+    const parsed = parseQuantity(raw, spec.value.dimension, { mach: spec.value.mach });
     return parsed.ok ? parsed.value : null;
   }
   if (spec.value.type === 'percent') {
@@ -49,6 +49,8 @@ export function displayText(raw: unknown, spec: FieldSpec, system: UnitSystem): 
   if (spec.value.type === 'configuration') return typeof raw === 'string' ? raw : '';
   const si = storedSi(raw, spec);
   if (si === null) return typeof raw === 'string' ? raw : String(raw);
+  // A Mach number or a flight level stays as typed: its value depends on the altitude, or is the trade's own way to say it.
+  if (typeof raw === 'string' && /^\s*(?:FL|M(?:ach)?\s*\d|M\.)/i.test(raw)) return raw.trim();
   if (spec.value.type === 'quantity') {
     const unit = spec.value.units[system];
     return plainNumber(si / UNITS[spec.value.dimension][unit]);
@@ -81,7 +83,7 @@ export function readInput(text: string, spec: FieldSpec, system: UnitSystem): Re
     }
     case 'quantity': {
       const written = BARE_NUMBER.test(trimmed) ? `${Number(trimmed)} ${spec.value.units[system]}` : trimmed;
-      const parsed = parseQuantity(written, spec.value.dimension);
+      const parsed = parseQuantity(written, spec.value.dimension, { mach: spec.value.mach });
       return parsed.ok ? { ok: true, value: written } : { ok: false, message: parsed.message };
     }
   }
