@@ -3,6 +3,7 @@
  * computes with them.
  */
 import { propulsionKind, type PropulsionKind } from './propulsion/kinds';
+import type { LapseModel } from './propulsion/turbine-lapse';
 
 export type { PropulsionKind };
 
@@ -23,6 +24,10 @@ export interface Propulsion {
   lapseExponent: number;
   /** Pressure altitude up to which a turbocharged piston holds rated power [m]. */
   criticalAltitudeM?: number;
+  /** Mach-aware turbine lapse, or `density` (sigma^m); absent: density. */
+  lapseModel?: LapseModel;
+  /** Throttle ratio TR: theta0 where a Mach-aware turbine lapse breaks (1 = sea-level standard day). */
+  throttleRatio?: number;
 }
 
 export interface Aircraft {

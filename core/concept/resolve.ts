@@ -5,6 +5,7 @@
 import type { WarningJson } from '../evaluation';
 import { loadingAxis, type Aircraft, type ConfigurationPolar, type Design, type DesignPoint } from '../model';
 import { PROPULSION_DESCRIPTORS, propulsionKind } from '../propulsion/kinds';
+import { DEFAULT_THROTTLE_RATIO } from '../propulsion/turbine-lapse';
 import { quantity } from '../units/quantity';
 import { DEFAULT_CD0_INCREMENT, DEFAULT_CD_LINEAR, DEFAULT_CONCEPT_NAME, DEFAULT_ENGINES, DEFAULT_SAMPLES } from './defaults';
 import { resolveRequirement } from './resolve-requirement';
@@ -38,8 +39,24 @@ function kindsWith(test: (d: (typeof PROPULSION_DESCRIPTORS)[number]) => boolean
 }
 
 function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircraft {
-  const { kind, engines, lapseExponent, criticalAltitude } = aircraft.propulsion;
+  const { kind, engines, lapseExponent, criticalAltitude, throttleRatio } = aircraft.propulsion;
   const descriptor = propulsionKind(kind);
+  // A file that states an exponent keeps the density model it was written for.
+  const lapseModel = aircraft.propulsion.lapseModel ?? (lapseExponent !== undefined ? 'density' : descriptor.lapseModels[0]);
+  if (lapseExponent !== undefined && lapseModel !== 'density') {
+    warnings.push({
+      code: 'field-ignored',
+      field: 'aircraft.propulsion.lapseExponent',
+      message: `ignored: the ${lapseModel} lapse model reads flight Mach and the air, not an exponent; write lapseModel "density" to use it`,
+    });
+  }
+  if (throttleRatio !== undefined && lapseModel === 'density') {
+    warnings.push({
+      code: 'field-ignored',
+      field: 'aircraft.propulsion.throttleRatio',
+      message: 'ignored: the throttle ratio belongs to a Mach-aware turbine lapse model, not the density model',
+    });
+  }
   if (criticalAltitude !== undefined && !descriptor.needsCriticalAltitude) {
     warnings.push({
       code: 'field-ignored',
@@ -64,6 +81,8 @@ function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircr
       engines: engines ?? DEFAULT_ENGINES,
       // A kind without an exponent never reads it; 1 keeps the model whole.
       lapseExponent: lapseExponent ?? descriptor.lapseExponent?.default ?? 1,
+      // The density model is the model's absence, so a design resolved from an older file is the same object as before.
+      ...(lapseModel !== 'density' ? { lapseModel, throttleRatio: throttleRatio ?? DEFAULT_THROTTLE_RATIO } : {}),
       ...(descriptor.needsCriticalAltitude && criticalAltitude !== undefined
         ? { criticalAltitudeM: quantity(criticalAltitude, 'length') }
         : {}),

@@ -13,8 +13,10 @@ export interface FlightCondition {
   densityKgM3: number;
   /** beta = W/W_TO. */
   beta: number;
-  /** alpha = lapse x power setting. */
+  /** alpha = lapse x power setting, static (Mach 0). */
   alpha: number;
+  /** alpha at a flight speed (TAS, m/s): a Mach-aware turbine lapse reads the Mach number. */
+  alphaAt: (speedMps: number) => number;
   polar: Polar;
   /** Propeller kinds convert T/W to shaft P/W. */
   propeller: boolean;
@@ -32,6 +34,14 @@ export function flightCondition(requirement: RequirementCommon, aircraft: Aircra
     densityKgM3: air.densityKgM3,
     beta: requirement.massFraction,
     alpha: availableFraction(aircraft.propulsion, requirement.altitudeM, requirement.temperatureOffsetK, requirement.powerSetting),
+    alphaAt: (speedMps: number): number =>
+      availableFraction(
+        aircraft.propulsion,
+        requirement.altitudeM,
+        requirement.temperatureOffsetK,
+        requirement.powerSetting,
+        speedMps / air.speedOfSoundMps,
+      ),
     polar,
     propeller: isPropellerDriven(aircraft.propulsion.kind),
     propellerEfficiency: requirement.propellerEfficiency,
