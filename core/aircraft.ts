@@ -4,6 +4,7 @@
  */
 import { propulsionKind, type PropulsionKind } from './propulsion/kinds';
 import type { LapseModel } from './propulsion/turbine-lapse';
+import type { WingCompressibility } from './aero/compressibility';
 
 export type { PropulsionKind };
 
@@ -38,6 +39,8 @@ export interface Aircraft {
   /** Always has `clean`; other names as the concept defines them. */
   configurations: Record<string, ConfigurationPolar>;
   propulsion: Propulsion;
+  /** Wing thickness, sweep and Korn factor; absent: compressibility drag is not modelled. */
+  compressibility?: WingCompressibility;
 }
 
 export function loadingAxis(kind: PropulsionKind): LoadingAxis {

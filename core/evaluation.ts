@@ -78,6 +78,8 @@ export interface WarningJson {
   /** Concept field path the warning is about, e.g. `aircraft.aero.configurations.clean.oswaldEfficiency`. */
   field: string;
   message: string;
+  /** "error" where the result cannot be trusted at all (a flight Mach above 1); absent: a warning. */
+  severity?: 'error';
 }
 
 export interface Evaluation {

@@ -190,7 +190,7 @@ function speedSection(evaluation: Evaluation, system: UnitSystem): string[] {
 
 function warningSection(warnings: readonly WarningJson[]): string[] {
   if (warnings.length === 0) return ['WARNINGS', '  None.'];
-  return [`WARNINGS (${warnings.length})`, ...warnings.flatMap((warning) => wrap(`${warning.field ? `${warning.field}: ` : ''}${warning.message}`, '  - ').map((line, i) => (i === 0 ? line : `    ${line.slice(4)}`)))];
+  return [`WARNINGS (${warnings.length})`, ...warnings.flatMap((warning) => wrap(`${warning.severity === 'error' ? 'ERROR ' : ''}${warning.field ? `${warning.field}: ` : ''}${warning.message}`, '  - ').map((line, i) => (i === 0 ? line : `    ${line.slice(4)}`)))];
 }
 
 function capitalise(text: string): string {

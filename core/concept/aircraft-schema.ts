@@ -41,6 +41,11 @@ const configurations = z
 export const aeroShape = {
   aspectRatio: z.number().gt(0),
   cdLinear: z.number().optional(),
+  /** Wing section t/c, for compressibility drag (with quarterChordSweep and kornFactor). */
+  thicknessRatio: z.number().gt(0).lt(0.3).optional(),
+  quarterChordSweep: quantityField('angle', { from: 0, below: Math.PI / 3 }).optional(),
+  /** Korn's technology factor: about 0.87 conventional, 0.95 supercritical sections. */
+  kornFactor: z.number().gte(0.7).lte(1).optional(),
   configurations,
 };
 

@@ -13,6 +13,9 @@ import type { ConceptJson } from './schema';
 
 type AircraftJson = ConceptJson['aircraft'];
 
+/** Korn's technology factor for conventional sections (from memory). */
+const DEFAULT_KORN_FACTOR = 0.87;
+
 /** Each configuration's cd0 = clean cd0 + increment; e and clMax default to clean's. */
 function resolveConfigurations(aero: AircraftJson['aero']): Record<string, ConfigurationPolar> {
   const { clean, ...others } = aero.configurations;
@@ -75,6 +78,15 @@ function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircr
     takeoffMassKg: quantity(aircraft.takeoffMass, 'mass'),
     aspectRatio: aircraft.aero.aspectRatio,
     cdLinear: aircraft.aero.cdLinear ?? DEFAULT_CD_LINEAR,
+    ...(aircraft.aero.thicknessRatio !== undefined
+      ? {
+          compressibility: {
+            thicknessRatio: aircraft.aero.thicknessRatio,
+            quarterChordSweepRad: quantity(aircraft.aero.quarterChordSweep ?? '0 deg', 'angle'),
+            kornFactor: aircraft.aero.kornFactor ?? DEFAULT_KORN_FACTOR,
+          },
+        }
+      : {}),
     configurations: resolveConfigurations(aircraft.aero),
     propulsion: {
       kind,

@@ -4,6 +4,7 @@
  */
 import { atmosphere } from '../atmosphere';
 import { polarOf, type Polar } from '../aero/drag-polar';
+import { waveDragIncrement } from '../aero/compressibility';
 import type { Aircraft } from '../aircraft';
 import type { RequirementCommon } from '../requirements/common';
 import { availableFraction } from '../propulsion/available-fraction';
@@ -18,6 +19,8 @@ export interface FlightCondition {
   /** alpha at a flight speed (TAS, m/s): a Mach-aware turbine lapse reads the Mach number. */
   alphaAt: (speedMps: number) => number;
   polar: Polar;
+  /** Wave-drag increment at a lift coefficient and flight speed (TAS); 0 where compressibility is not modelled. */
+  waveDragAt: (liftCoefficient: number, speedMps: number) => number;
   /** Propeller kinds convert T/W to shaft P/W. */
   propeller: boolean;
   propellerEfficiency: number;
@@ -29,6 +32,7 @@ export interface FlightCondition {
  */
 export function flightCondition(requirement: RequirementCommon, aircraft: Aircraft): FlightCondition {
   const air = atmosphere(requirement.altitudeM, requirement.temperatureOffsetK);
+  const wing = aircraft.compressibility;
   const polar = polarOf(aircraft, requirement.configuration) ?? (polarOf(aircraft, 'clean') as Polar);
   return {
     densityKgM3: air.densityKgM3,
@@ -43,6 +47,8 @@ export function flightCondition(requirement: RequirementCommon, aircraft: Aircra
         speedMps / air.speedOfSoundMps,
       ),
     polar,
+    waveDragAt: (cl: number, speedMps: number): number =>
+      wing ? waveDragIncrement(wing, cl, speedMps / air.speedOfSoundMps) : 0,
     propeller: isPropellerDriven(aircraft.propulsion.kind),
     propellerEfficiency: requirement.propellerEfficiency,
   };

@@ -6,7 +6,8 @@ import { shaftPowerLoading } from '../propulsion/propeller';
 import type { FlightCondition } from './flight-condition';
 
 /**
- * T_SL/W_TO = (beta/alpha)[q C_D0/(beta w) + K1 n + K n^2 beta w/q + P_s/V] (Mattingly).
+ * T_SL/W_TO = (beta/alpha)[q C_D0/(beta w) + K1 n + K n^2 beta w/q + P_s/V] (Mattingly);
+ * C_D0 includes the wave-drag increment above the critical Mach where the wing's compressibility is given.
  * NaN where no thrust can meet it: C_L above the configuration's C_Lmax, no
  * available thrust (alpha <= 0; alpha at the flight speed, for a Mach-aware lapse), or a non-positive wing loading or speed.
  */
@@ -26,7 +27,7 @@ export function thrustLoadingRequired(
   const p = c.polar;
   return (
     (c.beta / alpha) *
-    ((q * p.cd0) / weightLoading + p.k1 * loadFactor + p.k * loadFactor * cl + specificExcessPowerMps / speedMps)
+    ((q * (p.cd0 + c.waveDragAt(cl, speedMps))) / weightLoading + p.k1 * loadFactor + p.k * loadFactor * cl + specificExcessPowerMps / speedMps)
   );
 }
 

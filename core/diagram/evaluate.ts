@@ -22,6 +22,7 @@ import { wingLoadingCap, type CurveBoundary, type LimitBoundary } from './envelo
 import { allMet, marginOf, marginsFor } from './margins';
 import { findOptimum } from './optimum';
 import { flightMachAt } from './flight-mach';
+import { compressibilityWarnings } from './compressibility-warnings';
 import { sampleWingLoadings } from './sampling';
 import { sizingAt } from './sizing';
 import { reportedSpeeds } from './speeds';
@@ -130,6 +131,7 @@ export function evaluateDesign(design: Design): Evaluation {
   const point = design.designPoint;
   const designPoint = point ? designPointJson(entries, axis, point) : undefined;
   if (point) warnings.push(...designPointWarnings(point.wingLoadingPa, range));
+  warnings.push(...compressibilityWarnings(entries, design, found?.wingLoadingPa ?? point?.wingLoadingPa ?? 0.5 * (range[0] + range[1])));
   const sized = point ? { w: point.wingLoadingPa, y: point.loading } : found ? { w: found.wingLoadingPa, y: found.loading } : null;
   warnings.push(...speedWarnings(design));
   return {

@@ -20,6 +20,10 @@ export const businessJet: DemoConcept = {
       aero: {
         aspectRatio: 8.6,
         cdLinear: 0,
+        // Supercritical sections, 12 % thick, 15 degrees of sweep: wave drag by Korn and Lock.
+        thicknessRatio: 0.12,
+        quarterChordSweep: '15 deg',
+        kornFactor: 0.95,
         configurations: {
           clean: { cd0: 0.021, oswaldEfficiency: 0.8, clMax: 1.45 },
           takeoff: { cd0Increment: 0.035, oswaldEfficiency: 0.76, clMax: 1.85 },
