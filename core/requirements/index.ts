@@ -10,6 +10,7 @@ import { climbRate } from './climb-rate';
 import { cruise } from './cruise';
 import type { RequirementDescriptor, ResolvedOf } from './descriptor';
 import { landingGroundRoll } from './landing-ground-roll';
+import { maximumSpeed } from './maximum-speed';
 import { stall } from './stall';
 import { sustainedTurn } from './sustained-turn';
 import { takeoffGroundRoll } from './takeoff-ground-roll';
@@ -23,6 +24,7 @@ export const REQUIREMENT_DESCRIPTORS = [
   climbGradient,
   ceiling,
   sustainedTurn,
+  maximumSpeed,
 ] as const;
 
 type Descriptor = (typeof REQUIREMENT_DESCRIPTORS)[number];

@@ -14,7 +14,7 @@ import { PROPULSION_DESCRIPTORS } from '../../../core/propulsion/kinds';
 import { REQUIREMENT_DESCRIPTORS } from '../../../core/requirements';
 import { typicalRange } from '../../../core/studies/typical-ranges';
 import { DEMO_CONCEPTS, evaluateDesign, parseConcept } from '../../../core';
-import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffRoll } from '../helpers/design';
+import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, maximumSpeed, stall, sustainedTurn, takeoffRoll } from '../helpers/design';
 
 /** One requirement of every kind, on an aircraft with the usual configurations and an engine-out one. */
 function baseDesign(kind: PropulsionKind = 'piston'): Design {
@@ -28,7 +28,7 @@ function baseDesign(kind: PropulsionKind = 'piston'): Design {
         'engine-out': { cd0Increment: 0.004 },
       },
     }),
-    requirements: [stall(25), landingRoll(300), takeoffRoll(300), cruise(60), climbRate(3), climbGradient(0.02), ceiling(3000), sustainedTurn(50, 1.5)],
+    requirements: [stall(25), landingRoll(300), takeoffRoll(300), cruise(60), climbRate(3), climbGradient(0.02), ceiling(3000), sustainedTurn(50, 1.5), maximumSpeed(70)],
     rangePa: [200, 2000],
   });
 }

@@ -4,7 +4,7 @@
  */
 import fc from 'fast-check';
 import type { Design, PropulsionKind, Requirement } from '../../../core/model';
-import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffRoll } from '../helpers/design';
+import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, maximumSpeed, stall, sustainedTurn, takeoffRoll } from '../helpers/design';
 
 const kinds: PropulsionKind[] = ['piston', 'turbocharged-piston', 'turboprop', 'turbofan', 'electric'];
 
@@ -73,6 +73,9 @@ export function requirementArb(engines: number): fc.Arbitrary<Requirement> {
     fc
       .record({ v: fc.double({ min: 20, max: 200, noNaN: true }), n: fc.double({ min: 1, max: 4, noNaN: true }), ...common })
       .map(({ v, n, ...c }) => sustainedTurn(v, n, c)),
+    fc
+      .record({ v: fc.double({ min: 20, max: 260, noNaN: true }), h: fc.double({ min: 0, max: 12000, noNaN: true }), eas: fc.boolean(), ...common })
+      .map(({ v, h, eas, ...c }) => maximumSpeed(v, { ...c, altitudeM: h, equivalent: eas })),
   );
 }
 

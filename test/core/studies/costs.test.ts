@@ -71,6 +71,7 @@ describe('requirementCosts', () => {
       'climb-gradient': 'gradient down',
       ceiling: 'altitude down',
       'sustained-turn': 'loadFactor down',
+      'maximum-speed': 'speed down',
     });
   });
 
