@@ -4,6 +4,7 @@
  * thrust they mean, the characteristic speeds, the warnings and the caution.
  */
 import {
+  UNIT_SYSTEM_TITLES,
   formatMargin,
   formatQuantity,
   type Design,
@@ -66,7 +67,7 @@ function axisSection(design: Design, evaluation: Evaluation, system: UnitSystem)
     `Diagram    ${axisTitle(evaluation)} against wing loading`,
     `           (${what})`,
     `Aircraft   ${formatQuantity(design.aircraft.takeoffMassKg, 'mass', system)} take-off mass, ${kind}, ${engines} engine${engines === 1 ? '' : 's'}`,
-    `Units      ${system === 'us' ? 'US customary' : 'SI'}`,
+    `Units      ${UNIT_SYSTEM_TITLES[system]}`,
   ];
 }
 
