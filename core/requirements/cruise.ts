@@ -3,6 +3,7 @@
  */
 import { PROPELLER_CRUISE } from '../assumptions/typical-ranges';
 import { cruiseBoundary, type CruiseRequirement } from '../constraints/cruise';
+import { atmosphere } from '../atmosphere';
 import { formatQuantity } from '../units/display';
 import { defineRequirement } from './descriptor';
 import { trueAirspeed, trueSpeedValue } from './fields';
@@ -23,7 +24,12 @@ export const cruise = defineRequirement<'cruise', CruiseRequirement, { speed: ty
   atmosphere: { altitude: true, temperature: true },
   editorFields: [{ key: 'speed', title: 'Cruise speed (TAS)', value: trueSpeedValue(), required: true }],
   newRequirement: { speed: '150 kt', altitude: '8000 ft' },
-  summary: (r, system) => [`${formatQuantity(r.speedMps, 'speed', system)} TAS`],
+  // A jet's cruise reads as a Mach number first (M = V/a at its own air).
+  summary: (r, system) => {
+    const mach = r.speedMps / atmosphere(r.altitudeM, r.temperatureOffsetK).speedOfSoundMps;
+    const tas = `${formatQuantity(r.speedMps, 'speed', system)} TAS`;
+    return [mach >= 0.4 ? `M${mach.toFixed(2)} (${tas})` : tas];
+  },
   costStep: { field: 'speedMps', conceptField: 'speed', relaxed: 'down' },
   unattainableField: () => 'speed',
   typicalRanges: [],

@@ -117,13 +117,14 @@ const WHOLE: ReadonlySet<DisplayQuantity> = new Set(['speed', 'length', 'altitud
 
 /**
  * The working mix rounds as people say the numbers: whole knots and feet,
- * altitudes that are whole hundreds of feet as flight levels ("FL370"),
+ * altitudes from 3,000 ft that are whole hundreds of feet as flight levels
+ * ("FL370"; 3,000 ft is about the lowest transition altitude, common practice),
  * everything else to three significant figures.
  */
 function workingText(number: number, quantity: DisplayQuantity, unit: string): string {
   if (quantity === 'altitude') {
     const hundreds = number / 100;
-    if (number > 0 && Math.abs(hundreds - Math.round(hundreds)) < 1e-6 && Math.round(hundreds) < 1000) {
+    if (number >= 3000 && Math.abs(hundreds - Math.round(hundreds)) < 1e-6 && Math.round(hundreds) < 1000) {
       return `FL${String(Math.round(hundreds)).padStart(3, '0')}`;
     }
   }
