@@ -26,6 +26,8 @@ export interface CurveBoundaryJson {
   label?: string;
   /** [wing loading, required loading or null]. */
   points: Array<[number, number | null]>;
+  /** Wing loading above which the requirement cannot be flown (a sustained turn that stalls), drawn as its stall line. */
+  stallLimit?: number;
   /** Flight Mach number of the requirement at the optimum's wing loading (TAS over the local speed of sound). */
   machAtOptimum?: number;
 }

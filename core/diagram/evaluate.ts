@@ -111,6 +111,15 @@ export function evaluateDesign(design: Design): Evaluation {
       else if (y > envelope[i]) envelope[i] = y; // NaN stays NaN
     }
     curveMet.set(boundary.id, met);
+    const stall = boundary.stallLimitPa;
+    if (stall !== undefined && Number.isFinite(stall) && stall < range[1]) {
+      warnings.push({
+        code: 'turn-stalls',
+        field: `requirements[${entries.find((e) => e.boundary === boundary)?.index ?? 0}]`,
+        message: `Requirement "${boundary.id}" cannot be flown above a wing loading of ${Math.round(stall)} N/m^2: the lift coefficient it needs there is above C_Lmax. Its stall line is drawn as a limit.`,
+      });
+      return { ...head, points, stallLimit: stall };
+    }
     return { ...head, points };
   });
   warnings.push(...unattainableWarnings(entries, aircraft, curveMet, range[0]));

@@ -63,6 +63,6 @@ A curve: the master equation (section 6.1) with the turn's load factor n and P_s
 
 - The file gives either the load factor n or the bank angle phi (Anderson, *Introduction to Flight*, ch. 6, turning flight).
 - Propeller aircraft: eta_p 0.8 by default.
-- Where C_L = n beta w / q exceeds C_Lmax the turn cannot be flown at that wing loading and the curve has no value there.
+- Where C_L = n beta w / q exceeds C_Lmax the turn cannot be flown at that wing loading, whatever the thrust: its stall line w = q C_Lmax / (n beta) is drawn as a limit (\`stallLimit\` in the evaluation, a warning says so), and past it the margin is that of a limit, 1 - w/w_stall.
 - Source: Mattingly, Heiser and Pratt, *Aircraft Engine Design*, constraint analysis.`,
 });
