@@ -5,7 +5,7 @@ import { boundaryBands, typicalUncertainty, type CurveBand, type LimitBand } fro
 import { KNOT_MPS } from '../../../core/units/factors';
 import { assertRelative } from '../helpers/asserts';
 import { aircraft, cruise, design, stall } from '../helpers/design';
-import { DEMO_SLUGS, demo, ranged } from './fixtures';
+import { DEMO_SLUGS, demo, densityLapseJet, ranged } from './fixtures';
 
 const RHO0 = 1.225; // kg/m^3, sea-level density of the U.S. Standard Atmosphere 1976 (Table 1)
 const KT = 1852 / 3600; // m/s, NIST SP 811
@@ -54,7 +54,7 @@ describe('boundaryBands', () => {
   });
 
   it('switches to the ends one at a time plus all-low and all-high above 8 assumptions', () => {
-    const jet = demo('business-jet');
+    const jet = densityLapseJet();
     const block = typicalUncertainty(jet.design);
     block.parameters.push({ field: 'aircraft.aero.cdLinear', low: -0.01, high: 0.01, distribution: 'uniform' });
     const params = ranged(block, jet.design, jet.concept);
