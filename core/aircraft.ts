@@ -3,6 +3,8 @@
  * computes with them.
  */
 import { propulsionKind, type PropulsionKind } from './propulsion/kinds';
+import type { LapseModel } from './propulsion/turbine-lapse';
+import type { WingCompressibility } from './aero/compressibility';
 
 export type { PropulsionKind };
 
@@ -23,6 +25,10 @@ export interface Propulsion {
   lapseExponent: number;
   /** Pressure altitude up to which a turbocharged piston holds rated power [m]. */
   criticalAltitudeM?: number;
+  /** Mach-aware turbine lapse, or `density` (sigma^m); absent: density. */
+  lapseModel?: LapseModel;
+  /** Throttle ratio TR: theta0 where a Mach-aware turbine lapse breaks (1 = sea-level standard day). */
+  throttleRatio?: number;
 }
 
 export interface Aircraft {
@@ -33,6 +39,8 @@ export interface Aircraft {
   /** Always has `clean`; other names as the concept defines them. */
   configurations: Record<string, ConfigurationPolar>;
   propulsion: Propulsion;
+  /** Wing thickness, sweep and Korn factor; absent: compressibility drag is not modelled. */
+  compressibility?: WingCompressibility;
 }
 
 export function loadingAxis(kind: PropulsionKind): LoadingAxis {

@@ -20,4 +20,6 @@ export type BoundaryOf<Kind extends string> =
       required: (wingLoadingPa: number) => number;
       /** Flight speed (TAS, m/s) the curve uses at wing loading w; NaN where undefined. */
       speedAt: (wingLoadingPa: number) => number;
+      /** Wing loading above which it cannot be flown at all (C_L above C_Lmax at its speed), drawn as its stall line. */
+      stallLimitPa?: number;
     };

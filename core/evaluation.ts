@@ -24,6 +24,8 @@ export interface LimitBoundaryJson extends AtOptimumJson {
   kind: RequirementKind;
   label?: string;
   wingLoadingMax: number;
+  /** Flight Mach number of the requirement at the optimum's wing loading (TAS over the local speed of sound). */
+  machAtOptimum?: number;
 }
 
 export interface CurveBoundaryJson extends AtOptimumJson {
@@ -32,6 +34,10 @@ export interface CurveBoundaryJson extends AtOptimumJson {
   label?: string;
   /** [wing loading, required loading or null]. */
   points: Array<[number, number | null]>;
+  /** Wing loading above which the requirement cannot be flown (a sustained turn that stalls), drawn as its stall line. */
+  stallLimit?: number;
+  /** Flight Mach number of the requirement at the optimum's wing loading (TAS over the local speed of sound). */
+  machAtOptimum?: number;
 }
 
 export type BoundaryJson = LimitBoundaryJson | CurveBoundaryJson;
@@ -84,6 +90,8 @@ export interface WarningJson {
   /** Concept field path the warning is about, e.g. `aircraft.aero.configurations.clean.oswaldEfficiency`. */
   field: string;
   message: string;
+  /** "error" where the result cannot be trusted at all (a flight Mach above 1); absent: a warning. */
+  severity?: 'error';
 }
 
 export interface Evaluation {

@@ -16,6 +16,8 @@ export {
   fromDisplay,
   formatQuantity,
   formatMargin,
+  UNIT_SYSTEMS,
+  UNIT_SYSTEM_TITLES,
   type UnitSystem,
   type DisplayQuantity,
 } from './units/display';

@@ -13,12 +13,12 @@ export interface Domains {
 }
 
 /** Power loading W/P per displayed P/W: N/kW from W/N, lb/hp from hp/lb. */
-export function powerLoadingFactor(system: 'si' | 'us'): number {
-  return system === 'si' ? 1000 : 1;
+export function powerLoadingFactor(system: 'si' | 'us' | 'kt-ft'): number {
+  return system === 'us' ? 1 : 1000;
 }
 
-export function powerLoadingUnit(system: 'si' | 'us'): string {
-  return system === 'si' ? 'N/kW' : 'lb/hp';
+export function powerLoadingUnit(system: 'si' | 'us' | 'kt-ft'): string {
+  return system === 'us' ? 'lb/hp' : 'N/kW';
 }
 
 /** True when the vertical axis shows W/P: asked for, and the aircraft has propellers. */

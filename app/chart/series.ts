@@ -56,6 +56,19 @@ export function boundarySeries(
       };
       curves.push(curve);
       ordered.push(curve);
+      // A requirement that cannot be flown past a wing loading (a turn that stalls) shows that line as a limit.
+      if (boundary.stallLimit !== undefined && Number.isFinite(boundary.stallLimit)) {
+        const stall: LimitSeries = {
+          ...common,
+          id: `${boundary.id}-stall`,
+          label: `${label}: stalls beyond`,
+          plotLabel: `${common.plotLabel} stall`,
+          type: 'limit',
+          wingLoading: toDisplay(boundary.stallLimit, 'wingLoading', system),
+        };
+        limits.push(stall);
+        ordered.push(stall);
+      }
     }
   }
   return { curves, limits, boundaries: ordered };

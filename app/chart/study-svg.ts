@@ -30,7 +30,7 @@ export function studyDiagramSvg(evaluation: Evaluation, options: StudySvgOptions
   const bands = bandSeries(options.bands ?? [], evaluation.axis, system).filter(bandHasWidth);
   const contours = options.map ? probabilityContours(options.map, evaluation.axis, system, options.levels ?? PROBABILITY_LEVELS) : [];
   const what = evaluation.axis === 'thrustToWeight' ? 'thrust-to-weight' : options.powerLoading ? 'power loading W/P' : 'power-to-weight';
-  const units = system === 'us' ? 'US customary units' : 'SI units';
+  const units = system === 'us' ? 'US customary units' : system === 'kt-ft' ? 'knots and feet, SI for mass, area, force and power' : 'SI units';
   const shows = [bands.length > 0 ? 'boundary bands' : '', contours.length > 0 ? 'probability contours' : ''].filter(Boolean).join(' and ');
   const { bands: _bands, map, levels: _levels, runNote, contourInk, ...plain } = options;
   let drawn: { geometry: Geometry; marks: ContourMarks } | null = null;

@@ -101,7 +101,7 @@ function nothingFeasible(data: ChartData, scales: ChartScales): string {
 
 function heading(title: string, data: ChartData, scales: ChartScales, powerLoading: boolean, given?: string): string {
   const what = data.axis === 'thrustToWeight' ? 'thrust-to-weight' : powerLoading ? 'power loading W/P' : 'power-to-weight';
-  const units = data.system === 'us' ? 'US customary units' : 'SI units';
+  const units = data.system === 'us' ? 'US customary units' : data.system === 'kt-ft' ? 'knots and feet, SI for mass, area, force and power' : 'SI units';
   const subtitle = given ?? `Constraint diagram: ${what} against wing loading · sea-level rated, take-off weight · ${units}`;
   return [
     `<text x="${scales.plot.left}" y="30" font-size="18" font-weight="700" fill="${CHART_INKS.text}">${escapeXml(shorten(title, 80))}</text>`,

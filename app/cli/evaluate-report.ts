@@ -4,6 +4,7 @@
  * thrust they mean, the characteristic speeds, the warnings and the caution.
  */
 import {
+  UNIT_SYSTEM_TITLES,
   formatMargin,
   formatQuantity,
   type Design,
@@ -66,7 +67,7 @@ function axisSection(design: Design, evaluation: Evaluation, system: UnitSystem)
     `Diagram    ${axisTitle(evaluation)} against wing loading`,
     `           (${what})`,
     `Aircraft   ${formatQuantity(design.aircraft.takeoffMassKg, 'mass', system)} take-off mass, ${kind}, ${engines} engine${engines === 1 ? '' : 's'}`,
-    `Units      ${system === 'us' ? 'US customary' : 'SI'}`,
+    `Units      ${UNIT_SYSTEM_TITLES[system]}`,
   ];
 }
 
@@ -77,6 +78,11 @@ function table(rows: string[][], indent = '  '): string[] {
   );
 }
 
+/** "M0.75"; "—" where the requirement has no flight speed at the optimum. */
+function machText(mach: number | undefined): string {
+  return mach !== undefined && Number.isFinite(mach) ? `M${mach.toFixed(mach < 0.1 ? 3 : 2)}` : '—';
+}
+
 function marginFor(margins: readonly MarginJson[] | undefined, id: string): string {
   const found = margins?.find((margin) => margin.id === id);
   return found ? formatMargin(found.margin) : '—';
@@ -85,13 +91,14 @@ function marginFor(margins: readonly MarginJson[] | undefined, id: string): stri
 function requirementSection(design: Design, evaluation: Evaluation, system: UnitSystem): string[] {
   const active = new Set(evaluation.optimum?.active ?? []);
   const hasDesignPoint = evaluation.designPoint !== undefined;
-  const header = ['id', 'kind', 'binds', 'margin at optimum', 'speed at optimum (TAS)', ...(hasDesignPoint ? ['margin at design point'] : [])];
+  const header = ['id', 'kind', 'binds', 'margin at optimum', 'speed at optimum (TAS)', 'Mach at optimum', ...(hasDesignPoint ? ['margin at design point'] : [])];
   const rows = evaluation.boundaries.map((boundary) => [
     boundary.id,
     kindTitle(boundary.kind),
     active.has(boundary.id) ? 'yes' : '',
     evaluation.optimum ? marginFor(evaluation.optimum.margins, boundary.id) : '—',
     formatQuantity(boundary.speedAtOptimum, 'speed', system),
+    machText(boundary.machAtOptimum),
     ...(hasDesignPoint ? [marginFor(evaluation.designPoint?.margins, boundary.id)] : []),
   ]);
   const lines = table([header, ...rows]);
@@ -187,7 +194,7 @@ function speedSection(evaluation: Evaluation, system: UnitSystem): string[] {
 
 function warningSection(warnings: readonly WarningJson[]): string[] {
   if (warnings.length === 0) return ['WARNINGS', '  None.'];
-  return [`WARNINGS (${warnings.length})`, ...warnings.flatMap((warning) => wrap(`${warning.field ? `${warning.field}: ` : ''}${warning.message}`, '  - ').map((line, i) => (i === 0 ? line : `    ${line.slice(4)}`)))];
+  return [`WARNINGS (${warnings.length})`, ...warnings.flatMap((warning) => wrap(`${warning.severity === 'error' ? 'ERROR ' : ''}${warning.field ? `${warning.field}: ` : ''}${warning.message}`, '  - ').map((line, i) => (i === 0 ? line : `    ${line.slice(4)}`)))];
 }
 
 function capitalise(text: string): string {

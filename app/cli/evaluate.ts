@@ -1,5 +1,5 @@
 /**
- * `loftpoint evaluate FILE [--version N] [--json | --csv | --svg OUT] [--units si|us]`:
+ * `loftpoint evaluate FILE [--version N] [--json | --csv | --svg OUT] [--units si|us|kt-ft]`:
  * evaluate a concept (a JSON file, or a stored version of a project file)
  * and print a report, the evaluation JSON, the boundaries as CSV, or write
  * the diagram as SVG. The whole output is built before anything is printed,
@@ -35,7 +35,7 @@ export function registerEvaluate(program: Command, io: CliIO, setExitCode: SetEx
     .option('--json', 'print the evaluation as JSON (always SI units)')
     .option('--csv', 'print the sampled boundaries as CSV')
     .option('--svg <out>', 'write the constraint diagram to an SVG file')
-    .option('--units <system>', 'units of the report, CSV and SVG: si or us', 'si')
+    .option('--units <system>', 'units of the report, CSV and SVG: si, us or kt-ft', 'si')
     .option('--force', 'with --svg: replace an existing file even if Loftpoint did not write it (never a read-only one)')
     .action(async (file: string, options: EvaluateOptions) => {
       try {
@@ -72,8 +72,8 @@ async function runEvaluate(file: string, options: EvaluateOptions): Promise<stri
 
 function unitSystem(file: string, units: string | undefined): UnitSystem {
   const value = (units ?? 'si').trim().toLowerCase();
-  if (value === 'si' || value === 'us') return value;
-  throw new InputError(`must be si or us, not "${oneLine(units ?? '')}"`, file, '--units');
+  if (value === 'si' || value === 'us' || value === 'kt-ft') return value;
+  throw new InputError(`must be si, us or kt-ft, not "${oneLine(units ?? '')}"`, file, '--units');
 }
 
 /** Writes the diagram; an existing file is replaced only when Loftpoint wrote it as an SVG, or with --force. */

@@ -26,7 +26,7 @@ function versionNumber(text: string, argument: string): number {
 
 function unitsOption(value: string | undefined): UnitSystem | undefined {
   if (value === undefined) return undefined;
-  if (value !== 'si' && value !== 'us') throw new InputError(`"${value}" is not a unit system: use si or us`, undefined, '--units');
+  if (value !== 'si' && value !== 'us' && value !== 'kt-ft') throw new InputError(`"${value}" is not a unit system: use si, us or kt-ft`, undefined, '--units');
   return value;
 }
 
@@ -87,7 +87,7 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .option('--demo', 'add the demo concepts as first versions')
     .option('--name <name>', 'project name (default: the file name)')
     .option('--description <text>', 'project description')
-    .option('--units <system>', 'preferred units: si or us', 'si')
+    .option('--units <system>', 'preferred units: si, us or kt-ft', 'si')
     .action((file: string, options: { demo?: boolean; name?: string; description?: string; units?: string }) =>
       run(io, setExitCode, (service) => {
         const info = service.createProject({
@@ -171,7 +171,7 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .argument('<file>', 'the project file')
     .option('--json', 'print the versions as JSON')
     .option('--concept <name>', 'only this concept')
-    .option('--units <system>', 'si or us (default: the project preference)')
+    .option('--units <system>', 'si, us or kt-ft (default: the project preference)')
     .action((file: string, options: { json?: boolean; concept?: string; units?: string }) =>
       run(io, setExitCode, (service) => {
         const units = unitsOption(options.units);
@@ -201,7 +201,7 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .argument('<a>', 'the earlier version')
     .argument('<b>', 'the later version')
     .option('--json', 'print the comparison as JSON')
-    .option('--units <system>', 'si or us (default: the project preference)')
+    .option('--units <system>', 'si, us or kt-ft (default: the project preference)')
     .action((file: string, a: string, b: string, options: { json?: boolean; units?: string }) =>
       run(io, setExitCode, (service) => {
         const numbers = { a: versionNumber(a, 'A'), b: versionNumber(b, 'B') };

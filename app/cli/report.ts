@@ -1,5 +1,5 @@
 /**
- * `loftpoint report FILE [--version N] --out PATH [--units si|us] [--step 10%] [--samples N] [--seed N]`:
+ * `loftpoint report FILE [--version N] --out PATH [--units si|us|kt-ft] [--step 10%] [--samples N] [--seed N]`:
  * the design-review report of a concept (a JSON file, or a stored version of
  * a project file). PATH's extension picks the output: .html (self-contained),
  * .pdf (printed by headless Chromium), .svg or .png (the diagram with bands
@@ -52,7 +52,7 @@ export function registerReport(program: Command, io: CliIO, setExitCode: SetExit
     .option('--version <n>', 'the stored version to report (project files only)')
     .option('--out <path>', 'the file to write: .html, .pdf, .svg, .png or .csv (replaces only an earlier Loftpoint output)')
     .option('--force', 'replace an existing --out file even if Loftpoint did not write it (never a read-only one)')
-    .option('--units <system>', 'units of the report: si or us', 'si')
+    .option('--units <system>', 'units of the report: si, us or kt-ft', 'si')
     .option('--step <step>', 'how far each requirement is relaxed and tightened for its cost, e.g. 10%', '10%')
     .option('--samples <n>', 'Monte Carlo sample count (default: the concept’s, else 10000)')
     .option('--seed <n>', 'Monte Carlo seed (default: the concept’s, else 1)')
@@ -89,8 +89,8 @@ function outputKind(file: string, out: string | undefined): { target: string; ki
 
 function unitSystem(file: string, units: string | undefined): UnitSystem {
   const value = (units ?? 'si').trim().toLowerCase();
-  if (value === 'si' || value === 'us') return value;
-  throw new InputError(`must be si or us, not "${oneLine(units ?? '')}"`, file, '--units');
+  if (value === 'si' || value === 'us' || value === 'kt-ft') return value;
+  throw new InputError(`must be si, us or kt-ft, not "${oneLine(units ?? '')}"`, file, '--units');
 }
 
 /** "10%", "12.5 %" or a fraction "0.1"; strictly between 0 and 100 %. */

@@ -40,7 +40,7 @@ const service = createService();
 const windows = new Set<BrowserWindow>();
 /** Leading command-line entries that are the program itself. */
 const argvSkip = app.isPackaged ? 1 : 2;
-let units: 'si' | 'us' = 'si';
+let units: 'si' | 'us' | 'kt-ft' = 'si';
 let projectFile: string | null = null;
 let dirty = false;
 
@@ -163,7 +163,9 @@ function setupMenu(): void {
         app.clearRecentDocuments();
       },
       send: (command) => {
-        if (command === 'units-si' || command === 'units-us') units = command === 'units-si' ? 'si' : 'us';
+        if (command === 'units-si' || command === 'units-us' || command === 'units-kt-ft') {
+          units = command === 'units-si' ? 'si' : command === 'units-us' ? 'us' : 'kt-ft';
+        }
         send(command);
       },
       about: () => {

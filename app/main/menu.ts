@@ -20,7 +20,7 @@ export interface MenuActions {
 export interface MenuState {
   platform: NodeJS.Platform;
   recent: readonly string[];
-  units: 'si' | 'us';
+  units: 'si' | 'us' | 'kt-ft';
   /** Offer developer tools (unpackaged builds only). */
   developer: boolean;
 }
@@ -72,6 +72,7 @@ export function menuTemplate(actions: MenuActions, state: MenuState): MenuItemCo
       submenu: [
         { label: 'SI Units', type: 'radio', checked: state.units === 'si', click: () => actions.send('units-si') },
         { label: 'US Customary Units', type: 'radio', checked: state.units === 'us', click: () => actions.send('units-us') },
+        { label: 'Knots and Feet', type: 'radio', checked: state.units === 'kt-ft', click: () => actions.send('units-kt-ft') },
         { type: 'separator' },
         { label: 'Reset Diagram View', accelerator: 'CmdOrCtrl+0', click: () => actions.send('reset-view') },
         { label: 'History', accelerator: 'CmdOrCtrl+H', click: () => actions.send('show-history') },

@@ -16,10 +16,10 @@ export function isaText(offsetK: number, system: UnitSystem): string {
   return `ISA${offsetK > 0 ? '+' : '−'}${shown}`;
 }
 
-/** Where and how: altitude, day, weight, power setting, propeller efficiency, configuration. */
+/** How: weight, power setting, propeller efficiency, configuration. */
 function conditions(r: Requirement, kind: PropulsionKind): string[] {
   const out: string[] = [];
-  if (r.massFraction !== 1) out.push(`at ${percent(r.massFraction)} of take-off mass`);
+  if (r.massFraction !== 1) out.push(`${percent(r.massFraction)} of take-off mass`);
   if (r.powerSetting !== 1) out.push(`${percent(r.powerSetting)} ${propulsionKind(kind).propeller ? 'power' : 'thrust'}`);
   const usesPropeller = propulsionKind(kind).propeller && requirementKind(r.kind).propeller !== null;
   if (usesPropeller) out.push(`η prop ${plain(r.propellerEfficiency)}`);
@@ -27,14 +27,18 @@ function conditions(r: Requirement, kind: PropulsionKind): string[] {
   return out;
 }
 
-/** The requirement in one line: its kind's own values (from the descriptor), then where, then how. */
+/**
+ * The requirement in one line, as an engineer says it: its kind's own values
+ * (from the descriptor) at the altitude, then the day, weight, power and
+ * configuration: "110 kt TAS at FL060, ISA, 75 % power, clean configuration".
+ */
 export function requirementValues(r: Requirement, kind: PropulsionKind, system: UnitSystem): string {
   const descriptor = requirementKind(r.kind);
   // A kind whose own field is the altitude (a ceiling) states it in its summary.
   const ownAltitude = 'altitude' in descriptor.shape;
-  const where = ownAltitude ? [] : r.altitudeM !== 0 || r.temperatureOffsetK !== 0 ? [`${formatQuantity(r.altitudeM, 'altitude', system)}, ${isaText(r.temperatureOffsetK, system)}`] : [];
-  if (ownAltitude && r.temperatureOffsetK !== 0) where.push(isaText(r.temperatureOffsetK, system));
-  return [...descriptor.summary(r, system), ...where, ...conditions(r, kind)].join(' · ');
+  const [first, ...rest] = descriptor.summary(r, system);
+  const at = !ownAltitude && r.altitudeM !== 0 ? ` at ${formatQuantity(r.altitudeM, 'altitude', system)}` : '';
+  return [`${first ?? ''}${at}`, ...rest, isaText(r.temperatureOffsetK, system), ...conditions(r, kind)].join(', ');
 }
 
 /** "ground roll 420 m + rotation 150 m + ... = 900 m". */

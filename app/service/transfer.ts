@@ -33,7 +33,7 @@ const projectExport = z.strictObject({
   project: z.strictObject({
     name: z.string().min(1).max(200),
     description: z.string(),
-    units: z.enum(['si', 'us']),
+    units: z.enum(['si', 'us', 'kt-ft']),
     createdAt: isoTime,
   }),
   concepts: z.array(z.strictObject({ name: z.string().min(1).max(200), createdAt: isoTime })),

@@ -70,7 +70,7 @@ export type ServiceResult<T> = { ok: true; value: T } | { ok: false; error: Serv
 
 // ---------------------------------------------------------------- shared shapes
 
-export type UnitSystem = 'si' | 'us';
+export type UnitSystem = 'si' | 'us' | 'kt-ft';
 
 export interface ProjectInfo {
   /** Absolute path of the project file. */

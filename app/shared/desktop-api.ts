@@ -19,6 +19,7 @@ const WINDOW_COMMANDS = [
   'export-report-pdf',
   'units-si',
   'units-us',
+  'units-kt-ft',
   'reset-view',
   'show-history',
   /** The shell opened or created another project: reload everything. */
@@ -65,7 +66,7 @@ export interface PrintPdfRequest {
 
 /** What the page tells the shell so its menu and title follow the page. */
 export interface WindowStateReport {
-  units: 'si' | 'us';
+  units: 'si' | 'us' | 'kt-ft';
   /** The concept in view has changes not saved as a version. */
   dirty: boolean;
 }
@@ -73,7 +74,7 @@ export interface WindowStateReport {
 export function isWindowStateReport(value: unknown): value is WindowStateReport {
   if (typeof value !== 'object' || value === null || Array.isArray(value)) return false;
   const { units, dirty, ...rest } = value as Record<string, unknown>;
-  return Object.keys(rest).length === 0 && (units === 'si' || units === 'us') && typeof dirty === 'boolean';
+  return Object.keys(rest).length === 0 && (units === 'si' || units === 'us' || units === 'kt-ft') && typeof dirty === 'boolean';
 }
 
 export interface DesktopApi extends RemoteService {

@@ -6,7 +6,7 @@
 import { z } from 'zod';
 import type { ServiceMethod, ServiceRequest } from './contract';
 
-const units = z.enum(['si', 'us']);
+const units = z.enum(['si', 'us', 'kt-ft']);
 const file = z.string().min(1).max(4096);
 const version = z.number().int().positive();
 const text = (max: number) => z.string().max(max);

@@ -12,7 +12,7 @@ import type { OpenedFile } from './open';
 export interface ProjectRow {
   name: string;
   description: string;
-  units: 'si' | 'us';
+  units: 'si' | 'us' | 'kt-ft';
   createdAt: string;
 }
 

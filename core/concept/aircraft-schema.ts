@@ -4,6 +4,7 @@
  */
 import { z } from 'zod';
 import { PROPULSION_KINDS, type PropulsionKind } from '../model';
+import { LAPSE_MODELS } from '../propulsion/turbine-lapse';
 import { quantityField } from './quantity-field';
 
 /** e is a span efficiency: above 0, at most 1 (Oswald). */
@@ -40,6 +41,11 @@ const configurations = z
 export const aeroShape = {
   aspectRatio: z.number().gt(0),
   cdLinear: z.number().optional(),
+  /** Wing section t/c, for compressibility drag (with quarterChordSweep and kornFactor). */
+  thicknessRatio: z.number().gt(0).lt(0.3).optional(),
+  quarterChordSweep: quantityField('angle', { from: 0, below: Math.PI / 3 }).optional(),
+  /** Korn's technology factor: about 0.87 conventional, 0.95 supercritical sections. */
+  kornFactor: z.number().gte(0.7).lte(1).optional(),
   configurations,
 };
 
@@ -47,6 +53,10 @@ export const propulsionShape = {
   kind: z.enum(PROPULSION_KINDS as [PropulsionKind, ...PropulsionKind[]]),
   engines: z.number().int().gte(1).optional(),
   lapseExponent: z.number().gt(0).optional(),
+  /** Mach-aware turbine lapse model, or "density" for sigma^m (the kind's descriptor lists what it takes). */
+  lapseModel: z.enum(LAPSE_MODELS).optional(),
+  /** Throttle ratio TR of a Mach-aware turbine lapse: theta0 at the break, 1 to about 1.1. */
+  throttleRatio: z.number().gte(0.8).lte(1.5).optional(),
   criticalAltitude: quantityField('length', { from: 0 }).optional(),
 };
 

@@ -38,8 +38,17 @@ function requirementIssues(concept: ConceptJson): ConceptIssue[] {
 
 function aircraftIssues(concept: ConceptJson): ConceptIssue[] {
   const { propulsion } = concept.aircraft;
-  if (propulsionKind(propulsion.kind).needsCriticalAltitude && propulsion.criticalAltitude === undefined) {
+  const descriptor = propulsionKind(propulsion.kind);
+  if (descriptor.needsCriticalAltitude && propulsion.criticalAltitude === undefined) {
     return [{ path: 'aircraft.propulsion.criticalAltitude', message: `is required for a ${propulsion.kind} engine, e.g. "12000 ft"` }];
+  }
+  if (propulsion.lapseModel !== undefined && !descriptor.lapseModels.includes(propulsion.lapseModel)) {
+    return [
+      {
+        path: 'aircraft.propulsion.lapseModel',
+        message: `a ${propulsion.kind} engine takes lapseModel ${descriptor.lapseModels.map((m) => `"${m}"`).join(' or ')}, not "${propulsion.lapseModel}"`,
+      },
+    ];
   }
   return [];
 }

@@ -3,7 +3,7 @@
  * message come from parseQuantity, so the file and the UI say the same thing.
  */
 import { z } from 'zod';
-import { EXAMPLE, SI_UNIT, parseQuantity, type Dimension } from '../units/quantity';
+import { EXAMPLE, SI_UNIT, parseQuantity, type Dimension, type QuantityOptions } from '../units/quantity';
 
 /** Limits in SI; `above`/`below` exclude the value, `from`/`to` include it. */
 interface QuantityBounds {
@@ -29,9 +29,16 @@ function got(input: unknown, value: number, dimension: Dimension): string {
 }
 
 /** The message for a bad value, or undefined when the value is fine. */
-export function quantityProblem(input: unknown, dimension: Dimension, bounds: QuantityBounds = {}): string | undefined {
+export function quantityProblem(
+  input: unknown,
+  dimension: Dimension,
+  bounds: QuantityBounds = {},
+  options: QuantityOptions = {},
+): string | undefined {
   if (input === undefined) return `is required, e.g. "${EXAMPLE[dimension]}"`;
-  const parsed = parseQuantity(input, dimension);
+  const parsed = parseQuantity(input, dimension, options);
+  // A Mach number's speed depends on the altitude, so only its sign is checked here.
+  if (parsed.ok && parsed.mach !== undefined) return undefined;
   if (!parsed.ok) return parsed.message;
   const v = parsed.value;
   const { above, from, below, to } = bounds;
@@ -44,9 +51,9 @@ export function quantityProblem(input: unknown, dimension: Dimension, bounds: Qu
 }
 
 /** A field that must carry a unit of this dimension. */
-export function quantityField(dimension: Dimension, bounds?: QuantityBounds) {
-  return z.custom<string>((input) => quantityProblem(input, dimension, bounds) === undefined, {
-    error: (issue) => quantityProblem(issue.input, dimension, bounds) ?? 'is not valid',
+export function quantityField(dimension: Dimension, bounds?: QuantityBounds, options?: QuantityOptions) {
+  return z.custom<string>((input) => quantityProblem(input, dimension, bounds, options) === undefined, {
+    error: (issue) => quantityProblem(issue.input, dimension, bounds, options) ?? 'is not valid',
   });
 }
 

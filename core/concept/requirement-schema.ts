@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import { REQUIREMENT_DESCRIPTORS, requirementKind, type RequirementKind } from '../requirements';
-import { altitude, fraction } from '../requirements/fields';
+import { altitude, percentFraction } from '../requirements/fields';
 import { quantityField } from './quantity-field';
 
 const commonRequirementShape = {
@@ -17,9 +17,9 @@ const commonRequirementShape = {
   enabled: z.boolean().optional(),
   altitude: altitude.optional(),
   temperatureOffset: quantityField('temperatureDifference', { from: -60, to: 60 }).optional(),
-  massFraction: fraction.optional(),
-  powerSetting: fraction.optional(),
-  propellerEfficiency: fraction.optional(),
+  massFraction: percentFraction.optional(),
+  powerSetting: percentFraction.optional(),
+  propellerEfficiency: percentFraction.optional(),
   configuration: z.string().min(1).optional(),
 };
 

@@ -5,7 +5,8 @@
  */
 import type { WarningJson } from '../evaluation';
 import type { Requirement } from '../model';
-import { quantity, type Dimension } from '../units/quantity';
+import { atmosphere } from '../atmosphere';
+import { parseQuantity, quantity, type Dimension } from '../units/quantity';
 import { requirementKind } from '../requirements';
 import { REQUIREMENT_DEFAULTS as D } from './defaults';
 import type { RequirementJson } from './schema';
@@ -38,17 +39,27 @@ export function resolveRequirement(
   warnings: WarningJson[],
 ): Requirement {
   const descriptor = requirementKind(r.kind);
+  const altitudeM = si(r.altitude, 'length', D.altitudeM);
+  const temperatureOffsetK = si(r.temperatureOffset, 'temperatureDifference', D.temperatureOffsetK);
   const common = {
     id: r.id,
     ...(r.label !== undefined ? { label: r.label } : {}),
     enabled: r.enabled ?? D.enabled,
-    altitudeM: si(r.altitude, 'length', D.altitudeM),
-    temperatureOffsetK: si(r.temperatureOffset, 'temperatureDifference', D.temperatureOffsetK),
-    massFraction: r.massFraction ?? D.massFraction,
-    powerSetting: r.powerSetting ?? D.powerSetting,
+    altitudeM,
+    temperatureOffsetK,
+    massFraction: si(r.massFraction, 'fraction', D.massFraction),
+    powerSetting: si(r.powerSetting, 'fraction', D.powerSetting),
     // A kind without propeller efficiency keeps the climb value, unused.
-    propellerEfficiency: r.propellerEfficiency ?? descriptor.propeller?.default ?? D.propellerEfficiency,
+    propellerEfficiency: si(r.propellerEfficiency, 'fraction', descriptor.propeller?.default ?? D.propellerEfficiency),
     configuration: configurationOf(r, index, configurations, warnings),
   };
-  return { ...common, kind: r.kind, ...descriptor.resolve(r, si) } as Requirement;
+  // A Mach number becomes TAS with the speed of sound at this requirement's altitude and temperature.
+  const here = (value: string | number | undefined, dimension: Dimension, fallback: number): number => {
+    if (dimension === 'speed' && typeof value === 'string') {
+      const parsed = parseQuantity(value, 'speed', { mach: true });
+      if (parsed.ok && parsed.mach !== undefined) return parsed.mach * atmosphere(altitudeM, temperatureOffsetK).speedOfSoundMps;
+    }
+    return si(value, dimension, fallback);
+  };
+  return { ...common, kind: r.kind, ...descriptor.resolve(r, here) } as Requirement;
 }

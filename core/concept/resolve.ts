@@ -5,12 +5,16 @@
 import type { WarningJson } from '../evaluation';
 import { loadingAxis, type Aircraft, type ConfigurationPolar, type Design, type DesignPoint } from '../model';
 import { PROPULSION_DESCRIPTORS, propulsionKind } from '../propulsion/kinds';
+import { DEFAULT_THROTTLE_RATIO } from '../propulsion/turbine-lapse';
 import { quantity } from '../units/quantity';
 import { DEFAULT_CD0_INCREMENT, DEFAULT_CD_LINEAR, DEFAULT_CONCEPT_NAME, DEFAULT_ENGINES, DEFAULT_SAMPLES } from './defaults';
 import { resolveRequirement } from './resolve-requirement';
 import type { ConceptJson } from './schema';
 
 type AircraftJson = ConceptJson['aircraft'];
+
+/** Korn's technology factor for conventional sections (from memory). */
+const DEFAULT_KORN_FACTOR = 0.87;
 
 /** Each configuration's cd0 = clean cd0 + increment; e and clMax default to clean's. */
 function resolveConfigurations(aero: AircraftJson['aero']): Record<string, ConfigurationPolar> {
@@ -38,8 +42,24 @@ function kindsWith(test: (d: (typeof PROPULSION_DESCRIPTORS)[number]) => boolean
 }
 
 function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircraft {
-  const { kind, engines, lapseExponent, criticalAltitude } = aircraft.propulsion;
+  const { kind, engines, lapseExponent, criticalAltitude, throttleRatio } = aircraft.propulsion;
   const descriptor = propulsionKind(kind);
+  // A file that states an exponent keeps the density model it was written for.
+  const lapseModel = aircraft.propulsion.lapseModel ?? (lapseExponent !== undefined ? 'density' : descriptor.lapseModels[0]);
+  if (lapseExponent !== undefined && lapseModel !== 'density') {
+    warnings.push({
+      code: 'field-ignored',
+      field: 'aircraft.propulsion.lapseExponent',
+      message: `ignored: the ${lapseModel} lapse model reads flight Mach and the air, not an exponent; write lapseModel "density" to use it`,
+    });
+  }
+  if (throttleRatio !== undefined && lapseModel === 'density') {
+    warnings.push({
+      code: 'field-ignored',
+      field: 'aircraft.propulsion.throttleRatio',
+      message: 'ignored: the throttle ratio belongs to a Mach-aware turbine lapse model, not the density model',
+    });
+  }
   if (criticalAltitude !== undefined && !descriptor.needsCriticalAltitude) {
     warnings.push({
       code: 'field-ignored',
@@ -58,12 +78,23 @@ function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircr
     takeoffMassKg: quantity(aircraft.takeoffMass, 'mass'),
     aspectRatio: aircraft.aero.aspectRatio,
     cdLinear: aircraft.aero.cdLinear ?? DEFAULT_CD_LINEAR,
+    ...(aircraft.aero.thicknessRatio !== undefined
+      ? {
+          compressibility: {
+            thicknessRatio: aircraft.aero.thicknessRatio,
+            quarterChordSweepRad: quantity(aircraft.aero.quarterChordSweep ?? '0 deg', 'angle'),
+            kornFactor: aircraft.aero.kornFactor ?? DEFAULT_KORN_FACTOR,
+          },
+        }
+      : {}),
     configurations: resolveConfigurations(aircraft.aero),
     propulsion: {
       kind,
       engines: engines ?? DEFAULT_ENGINES,
       // A kind without an exponent never reads it; 1 keeps the model whole.
       lapseExponent: lapseExponent ?? descriptor.lapseExponent?.default ?? 1,
+      // The density model is the model's absence, so a design resolved from an older file is the same object as before.
+      ...(lapseModel !== 'density' ? { lapseModel, throttleRatio: throttleRatio ?? DEFAULT_THROTTLE_RATIO } : {}),
       ...(descriptor.needsCriticalAltitude && criticalAltitude !== undefined
         ? { criticalAltitudeM: quantity(criticalAltitude, 'length') }
         : {}),

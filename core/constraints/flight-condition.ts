@@ -4,6 +4,7 @@
  */
 import { atmosphere } from '../atmosphere';
 import { polarOf, type Polar } from '../aero/drag-polar';
+import { waveDragIncrement } from '../aero/compressibility';
 import type { Aircraft } from '../aircraft';
 import type { RequirementCommon } from '../requirements/common';
 import { availableFraction } from '../propulsion/available-fraction';
@@ -13,9 +14,13 @@ export interface FlightCondition {
   densityKgM3: number;
   /** beta = W/W_TO. */
   beta: number;
-  /** alpha = lapse x power setting. */
+  /** alpha = lapse x power setting, static (Mach 0). */
   alpha: number;
+  /** alpha at a flight speed (TAS, m/s): a Mach-aware turbine lapse reads the Mach number. */
+  alphaAt: (speedMps: number) => number;
   polar: Polar;
+  /** Wave-drag increment at a lift coefficient and flight speed (TAS); 0 where compressibility is not modelled. */
+  waveDragAt: (liftCoefficient: number, speedMps: number) => number;
   /** Propeller kinds convert T/W to shaft P/W. */
   propeller: boolean;
   propellerEfficiency: number;
@@ -27,12 +32,23 @@ export interface FlightCondition {
  */
 export function flightCondition(requirement: RequirementCommon, aircraft: Aircraft): FlightCondition {
   const air = atmosphere(requirement.altitudeM, requirement.temperatureOffsetK);
+  const wing = aircraft.compressibility;
   const polar = polarOf(aircraft, requirement.configuration) ?? (polarOf(aircraft, 'clean') as Polar);
   return {
     densityKgM3: air.densityKgM3,
     beta: requirement.massFraction,
     alpha: availableFraction(aircraft.propulsion, requirement.altitudeM, requirement.temperatureOffsetK, requirement.powerSetting),
+    alphaAt: (speedMps: number): number =>
+      availableFraction(
+        aircraft.propulsion,
+        requirement.altitudeM,
+        requirement.temperatureOffsetK,
+        requirement.powerSetting,
+        speedMps / air.speedOfSoundMps,
+      ),
     polar,
+    waveDragAt: (cl: number, speedMps: number): number =>
+      wing ? waveDragIncrement(wing, cl, speedMps / air.speedOfSoundMps) : 0,
     propeller: isPropellerDriven(aircraft.propulsion.kind),
     propellerEfficiency: requirement.propellerEfficiency,
   };

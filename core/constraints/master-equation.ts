@@ -6,9 +6,10 @@ import { shaftPowerLoading } from '../propulsion/propeller';
 import type { FlightCondition } from './flight-condition';
 
 /**
- * T_SL/W_TO = (beta/alpha)[q C_D0/(beta w) + K1 n + K n^2 beta w/q + P_s/V] (Mattingly).
+ * T_SL/W_TO = (beta/alpha)[q C_D0/(beta w) + K1 n + K n^2 beta w/q + P_s/V] (Mattingly);
+ * C_D0 includes the wave-drag increment above the critical Mach where the wing's compressibility is given.
  * NaN where no thrust can meet it: C_L above the configuration's C_Lmax, no
- * available thrust (alpha <= 0), or a non-positive wing loading or speed.
+ * available thrust (alpha <= 0; alpha at the flight speed, for a Mach-aware lapse), or a non-positive wing loading or speed.
  */
 export function thrustLoadingRequired(
   c: FlightCondition,
@@ -17,15 +18,16 @@ export function thrustLoadingRequired(
   loadFactor: number,
   specificExcessPowerMps: number,
 ): number {
-  if (!(wingLoadingPa > 0) || !(speedMps > 0) || !(c.alpha > 0)) return NaN;
+  const alpha = c.alphaAt(speedMps);
+  if (!(wingLoadingPa > 0) || !(speedMps > 0) || !(alpha > 0)) return NaN;
   const weightLoading = c.beta * wingLoadingPa;
   const q = 0.5 * c.densityKgM3 * speedMps * speedMps;
   const cl = (loadFactor * weightLoading) / q;
   if (!(cl <= c.polar.clMax)) return NaN;
   const p = c.polar;
   return (
-    (c.beta / c.alpha) *
-    ((q * p.cd0) / weightLoading + p.k1 * loadFactor + p.k * loadFactor * cl + specificExcessPowerMps / speedMps)
+    (c.beta / alpha) *
+    ((q * (p.cd0 + c.waveDragAt(cl, speedMps))) / weightLoading + p.k1 * loadFactor + p.k * loadFactor * cl + specificExcessPowerMps / speedMps)
   );
 }
 

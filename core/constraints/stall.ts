@@ -27,6 +27,7 @@ export function stallBoundary(requirement: StallRequirement, aircraft: Aircraft)
     id: requirement.id,
     kind: requirement.kind,
     wingLoadingMaxPa: (0.5 * RHO0 * v * v * c.polar.clMax) / c.beta,
-    speedAt: (w: number): number => (w > 0 ? stallSpeed(c.beta * w, RHO0, c.polar.clMax) : NaN),
+    // The stall speed as TAS at the requirement's air, for the condition's speed and Mach.
+    speedAt: (w: number): number => (w > 0 ? stallSpeed(c.beta * w, c.densityKgM3, c.polar.clMax) : NaN),
   };
 }

@@ -25,5 +25,7 @@ export function sustainedTurnBoundary(requirement: SustainedTurnRequirement, air
     kind: requirement.kind,
     required: (w: number): number => loadingRequired(c, w, v, n, 0),
     speedAt: (): number => v,
+    // n beta w / q = C_Lmax: above this wing loading the turn stalls at its speed, whatever the thrust.
+    stallLimitPa: (0.5 * c.densityKgM3 * v * v * c.polar.clMax) / (n * c.beta),
   };
 }

@@ -42,13 +42,16 @@ export function takeoffGroundRollBoundary(requirement: TakeoffGroundRollRequirem
     id: requirement.id,
     kind: requirement.kind,
     required(w: number): number {
-      if (!(w > 0) || !(c.alpha > 0)) return NaN;
+      if (!(w > 0)) return NaN;
       const weightLoading = c.beta * w;
       const vLof = liftoffSpeed(w);
       const vMean = MEAN_ROLL_SPEED_FRACTION * vLof;
+      // A Mach-aware lapse is taken at the mean roll speed, where the forces are.
+      const alpha = c.alphaAt(vMean);
+      if (!(alpha > 0)) return NaN;
       const qMean = 0.5 * c.densityKgM3 * vMean * vMean;
       const thrust =
-        (c.beta / c.alpha) *
+        (c.beta / alpha) *
         ((vLof * vLof) / twoGS + (qMean * cdg) / weightLoading + mu * (1 - (qMean * clg) / weightLoading));
       return c.propeller ? shaftPowerLoading(thrust, vMean, c.propellerEfficiency) : thrust;
     },

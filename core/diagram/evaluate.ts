@@ -22,6 +22,8 @@ import { designPointWarnings, optimumWarnings, speedWarnings } from './diagram-w
 import { wingLoadingCap, type CurveBoundary, type LimitBoundary } from './envelope';
 import { allMet, marginOf, marginsFor } from './margins';
 import { findOptimum } from './optimum';
+import { flightMachAt } from './flight-mach';
+import { compressibilityWarnings } from './compressibility-warnings';
 import { sampleWingLoadings } from './sampling';
 import { sizingAt } from './sizing';
 import { reportedSpeeds } from './speeds';
@@ -121,6 +123,15 @@ export function evaluateDesign(design: Design): Evaluation {
       else if (y > envelope[i]) envelope[i] = y; // NaN stays NaN
     }
     curveMet.set(boundary.id, met);
+    const stall = boundary.stallLimitPa;
+    if (stall !== undefined && Number.isFinite(stall) && stall < range[1]) {
+      warnings.push({
+        code: 'turn-stalls',
+        field: `requirements[${entries.find((e) => e.boundary === boundary)?.index ?? 0}]`,
+        message: `Requirement "${boundary.id}" cannot be flown above a wing loading of ${Math.round(stall)} N/m^2: the lift coefficient it needs there is above C_Lmax. Its stall line is drawn as a limit.`,
+      });
+      return { ...head, points, stallLimit: stall };
+    }
     return { ...head, points };
   });
   warnings.push(...unattainableWarnings(entries, aircraft, curveMet, range[0]));
@@ -131,13 +142,18 @@ export function evaluateDesign(design: Design): Evaluation {
   if (found) {
     const { wingLoadingPa: w, loading: y } = found;
     optimum = { ...pointJson(axis, w, y), ...atOptimum(entries, w, y), ...(found.unbounded ? { unbounded: true } : {}) };
-    entries.forEach((entry, i) => Object.assign(boundaries[i], boundaryAtOptimum(entry, aircraft, w, y)));
+    entries.forEach((entry, i) => {
+      Object.assign(boundaries[i], boundaryAtOptimum(entry, aircraft, w, y));
+      const mach = flightMachAt(entry, w);
+      if (mach !== undefined) boundaries[i].machAtOptimum = mach;
+    });
   }
   warnings.push(...optimumWarnings(found, range, curves.length, entries.length));
 
   const point = design.designPoint;
   const designPoint = point ? designPointJson(entries, axis, point) : undefined;
   if (point) warnings.push(...designPointWarnings(point.wingLoadingPa, range));
+  warnings.push(...compressibilityWarnings(entries, design, found?.wingLoadingPa ?? point?.wingLoadingPa ?? 0.5 * (range[0] + range[1])));
   const sized = point ? { w: point.wingLoadingPa, y: point.loading } : found ? { w: found.wingLoadingPa, y: found.loading } : null;
   warnings.push(...speedWarnings(design));
   return {

@@ -18,6 +18,9 @@ export function marginOf(boundary: Boundary, wingLoadingPa: number, loading: num
     const limit = boundary.wingLoadingMaxPa;
     return limit > 0 ? 1 - wingLoadingPa / limit : -1;
   }
+  // Past a curve's stall line it is a limit: 1 - w/w_stall, not "no thrust can meet it".
+  const stall = boundary.stallLimitPa;
+  if (stall !== undefined && stall > 0 && wingLoadingPa > stall) return 1 - wingLoadingPa / stall;
   const required = boundary.required(wingLoadingPa);
   if (!Number.isFinite(required)) return -1;
   if (required <= 0) return 1;

@@ -6,13 +6,13 @@ import { PROPELLER_CLIMB } from '../assumptions/typical-ranges';
 import { climbRateBoundary, type ClimbRateRequirement } from '../constraints/climb-rate';
 import { formatQuantity } from '../units/display';
 import { defineRequirement } from './descriptor';
-import { numberValue, positiveSpeed, rateValue, speedFactor, speedValue } from './fields';
+import { numberValue, positiveSpeed, trueAirspeed, rateValue, speedFactor, trueSpeedValue } from './fields';
 
 export type { ClimbRateRequirement };
 
 const shape = {
   rate: positiveSpeed,
-  speed: positiveSpeed.optional(),
+  speed: trueAirspeed.optional(),
   minimumSpeedFactor: speedFactor.optional(),
 };
 
@@ -34,7 +34,7 @@ export const climbRate = defineRequirement<'climb-rate', ClimbRateRequirement, t
   atmosphere: { altitude: true, temperature: true },
   editorFields: [
     { key: 'rate', title: 'Rate of climb', value: rateValue(), required: true },
-    { key: 'speed', title: 'Climb speed (TAS)', value: speedValue(), defaultText: 'best-rate speed', advanced: true },
+    { key: 'speed', title: 'Climb speed (TAS)', value: trueSpeedValue(), defaultText: 'best-rate speed', advanced: true },
     { key: 'minimumSpeedFactor', title: 'Least speed / stall speed', value: numberValue(), defaultText: '1.2', advanced: true },
   ],
   newRequirement: { rate: '800 ft/min' },

@@ -3,17 +3,18 @@
  */
 import { PROPELLER_CRUISE } from '../assumptions/typical-ranges';
 import { cruiseBoundary, type CruiseRequirement } from '../constraints/cruise';
+import { atmosphere } from '../atmosphere';
 import { formatQuantity } from '../units/display';
 import { defineRequirement } from './descriptor';
-import { positiveSpeed, speedValue } from './fields';
+import { trueAirspeed, trueSpeedValue } from './fields';
 
 export type { CruiseRequirement };
 
-export const cruise = defineRequirement<'cruise', CruiseRequirement, { speed: typeof positiveSpeed }>({
+export const cruise = defineRequirement<'cruise', CruiseRequirement, { speed: typeof trueAirspeed }>({
   kind: 'cruise',
   title: 'Cruise speed',
   colour: '#2e7d5b', // pine
-  shape: { speed: positiveSpeed },
+  shape: { speed: trueAirspeed },
   resolve: (r, si) => ({ speedMps: si(r.speed, 'speed', NaN) }),
   drawnAs: 'curve',
   boundary: cruiseBoundary,
@@ -21,9 +22,14 @@ export const cruise = defineRequirement<'cruise', CruiseRequirement, { speed: ty
   defaultConfiguration: 'clean',
   propeller: { default: 0.8, typical: PROPELLER_CRUISE },
   atmosphere: { altitude: true, temperature: true },
-  editorFields: [{ key: 'speed', title: 'Cruise speed (TAS)', value: speedValue(), required: true }],
+  editorFields: [{ key: 'speed', title: 'Cruise speed (TAS)', value: trueSpeedValue(), required: true }],
   newRequirement: { speed: '150 kt', altitude: '8000 ft' },
-  summary: (r, system) => [`${formatQuantity(r.speedMps, 'speed', system)} TAS`],
+  // A jet's cruise reads as a Mach number first (M = V/a at its own air).
+  summary: (r, system) => {
+    const mach = r.speedMps / atmosphere(r.altitudeM, r.temperatureOffsetK).speedOfSoundMps;
+    const tas = `${formatQuantity(r.speedMps, 'speed', system)} TAS`;
+    return [mach >= 0.4 ? `M${mach.toFixed(2)} (${tas})` : tas];
+  },
   costStep: { field: 'speedMps', conceptField: 'speed', relaxed: 'down' },
   unattainableField: () => 'speed',
   typicalRanges: [],

@@ -16,7 +16,7 @@ import type { RequirementCommon } from './common';
 /** How the editor shows one field. */
 export type EditorValue =
   /** Written with a unit in the file; shown in the unit of the chosen system. */
-  | { type: 'quantity'; dimension: Dimension; units: { si: string; us: string } }
+  | { type: 'quantity'; dimension: Dimension; units: { si: string; us: string }; mach?: boolean }
   | { type: 'number'; integer?: boolean }
   /** A fraction shown as a percentage (the file takes 0.024 or "2.4 %"). */
   | { type: 'percent' }

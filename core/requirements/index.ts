@@ -13,6 +13,7 @@ import { cruise } from './cruise';
 import type { RequirementDescriptor, ResolvedOf } from './descriptor';
 import { landingDistance } from './landing-distance';
 import { landingGroundRoll } from './landing-ground-roll';
+import { maximumSpeed } from './maximum-speed';
 import { stall } from './stall';
 import { sustainedTurn } from './sustained-turn';
 import { takeoffDistance } from './takeoff-distance';
@@ -31,6 +32,7 @@ export const REQUIREMENT_DESCRIPTORS = [
   balancedFieldLength,
   landingDistance,
   approachSpeed,
+  maximumSpeed,
 ] as const;
 
 type Descriptor = (typeof REQUIREMENT_DESCRIPTORS)[number];

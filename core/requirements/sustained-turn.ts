@@ -7,12 +7,12 @@ import { sustainedTurnBoundary, type SustainedTurnRequirement } from '../constra
 import { quantityField } from '../concept/quantity-field';
 import { formatQuantity } from '../units/display';
 import { defineRequirement } from './descriptor';
-import { numberValue, plain, positiveSpeed, speedValue } from './fields';
+import { numberValue, plain, trueAirspeed, trueSpeedValue } from './fields';
 
 export type { SustainedTurnRequirement };
 
 const shape = {
-  speed: positiveSpeed,
+  speed: trueAirspeed,
   loadFactor: z.number().gte(1).optional(),
   bankAngle: quantityField('angle', { from: 0, below: Math.PI / 2 }).optional(),
 };
@@ -34,7 +34,7 @@ export const sustainedTurn = defineRequirement<'sustained-turn', SustainedTurnRe
   propeller: { default: 0.8, typical: PROPELLER_CRUISE },
   atmosphere: { altitude: true, temperature: true },
   editorFields: [
-    { key: 'speed', title: 'Turn speed (TAS)', value: speedValue(), required: true },
+    { key: 'speed', title: 'Turn speed (TAS)', value: trueSpeedValue(), required: true },
     { key: 'loadFactor', title: 'Load factor', value: numberValue(), defaultText: 'from bank angle' },
     {
       key: 'bankAngle',
@@ -63,6 +63,6 @@ A curve: the master equation (section 6.1) with the turn's load factor n and P_s
 
 - The file gives either the load factor n or the bank angle phi (Anderson, *Introduction to Flight*, ch. 6, turning flight).
 - Propeller aircraft: eta_p 0.8 by default.
-- Where C_L = n beta w / q exceeds C_Lmax the turn cannot be flown at that wing loading and the curve has no value there.
+- Where C_L = n beta w / q exceeds C_Lmax the turn cannot be flown at that wing loading, whatever the thrust: its stall line w = q C_Lmax / (n beta) is drawn as a limit (\`stallLimit\` in the evaluation, a warning says so), and past it the margin is that of a limit, 1 - w/w_stall.
 - Source: Mattingly, Heiser and Pratt, *Aircraft Engine Design*, constraint analysis.`,
 });

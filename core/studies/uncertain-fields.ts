@@ -46,6 +46,10 @@ export function fieldRef(field: string, design: Design): { ok: true; ref: FieldR
       const users = PROPULSION_DESCRIPTORS.filter((d) => d.lapseExponent !== null).map((d) => d.kind);
       return { ok: false, message: `a ${kind} concept has no lapse exponent (only ${users.join(' and ')} use one)` };
     }
+    const model = design.aircraft.propulsion.lapseModel ?? 'density';
+    if (model !== 'density') {
+      return { ok: false, message: `this concept's ${model} lapse model reads flight Mach and the air, not an exponent; give lapseModel "density" to range the exponent` };
+    }
     return { ok: true, ref: { scope: 'aircraft', key: 'lapseExponent' } };
   }
   if (field.startsWith(CONFIGURATIONS)) return configurationRef(field.slice(CONFIGURATIONS.length), design);

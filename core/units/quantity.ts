@@ -16,6 +16,7 @@ import {
   PSF_PA,
   RANKINE_K,
 } from './factors';
+import { A0 } from '../atmosphere';
 import { shortened } from '../shortened';
 
 export type Dimension =
@@ -80,7 +81,28 @@ export const EXAMPLE: Record<Dimension, string> = {
   fraction: '2.4 %',
 };
 
-export type ParsedQuantity = { ok: true; value: number } | { ok: false; message: string };
+/**
+ * A parsed value. A speed written as a Mach number ("M0.78") carries `mach`;
+ * its `value` is then Mach x the sea-level speed of sound, for range checks
+ * only: resolution turns it into TAS at the requirement's own altitude.
+ */
+export type ParsedQuantity = { ok: true; value: number; mach?: number } | { ok: false; message: string };
+
+/** What a field accepts beyond its units: a speed field that takes a Mach number ("M0.78"). */
+export interface QuantityOptions {
+  mach?: boolean;
+}
+
+/** Units written as the inverse of the dimension (power loading W/P for P/W), with the factor of their SI inverse. */
+const INVERSE_UNITS: Partial<Record<Dimension, Record<string, number>>> = {
+  // W/P in lb/hp: pound-weight per horsepower, N/W; in kg/kW: kilogram-weight per kilowatt.
+  powerToWeight: { 'lb/hp': POUND_FORCE_N / HORSEPOWER_W, 'kg/kW': G0 / 1000 },
+};
+
+/** "FL370": flight level, hundreds of feet of pressure altitude (ICAO Annex 2; common practice). */
+const FLIGHT_LEVEL = /^\s*FL\s*(\d{1,3})\s*$/i;
+/** "M0.78", "M 0.78" or "Mach 0.78". */
+const MACH = /^\s*(?:M|Mach)\s*(\d*\.?\d+)\s*$/i;
 
 /**
  * Magnitudes (in SI) the methods can compute with: squares, cubes and
@@ -126,14 +148,14 @@ const ALIASES: Record<string, string> = {
 };
 
 function listUnits(dimension: Dimension): string {
-  return Object.keys(UNITS[dimension]).join(', ');
+  return [...Object.keys(UNITS[dimension]), ...Object.keys(INVERSE_UNITS[dimension] ?? {})].join(', ');
 }
 
 /**
  * Parse a dimensional value. Numbers are allowed bare only for dimensionless
  * kinds (thrustToWeight, fraction); everything else must carry a unit.
  */
-export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuantity {
+export function parseQuantity(input: unknown, dimension: Dimension, options: QuantityOptions = {}): ParsedQuantity {
   const dimensionless = dimension === 'fraction' || dimension === 'thrustToWeight';
   if (typeof input === 'number') {
     if (!Number.isFinite(input)) return { ok: false, message: `is ${input}; give a finite number` };
@@ -148,6 +170,17 @@ export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuant
     return { ok: false, message: `must be a string with a unit, e.g. "${EXAMPLE[dimension]}"` };
   }
   const shown = shortened(input);
+  const level = dimension === 'length' ? FLIGHT_LEVEL.exec(input) : null;
+  if (level) return { ok: true, value: Number(level[1]) * 100 * FOOT_M };
+  const mach = dimension === 'speed' ? MACH.exec(input) : null;
+  if (mach) {
+    if (!options.mach) {
+      return { ok: false, message: `"${shown}": a Mach number is taken only for a true airspeed; write this speed with a unit, e.g. "${EXAMPLE.speed}"` };
+    }
+    const number = Number(mach[1]);
+    if (!(number > 0) || number > 10) return { ok: false, message: `"${shown}": write a Mach number above 0 and at most 10, e.g. "M0.78"` };
+    return { ok: true, value: number * A0, mach: number };
+  }
   const match = NUMBER.exec(input);
   if (!match) {
     return { ok: false, message: `"${shown}" is not a number with a unit, e.g. "${EXAMPLE[dimension]}"` };
@@ -168,6 +201,13 @@ export function parseQuantity(input: unknown, dimension: Dimension): ParsedQuant
       ok: false,
       message: `"${shown}" has no unit; write it with one, e.g. "${EXAMPLE[dimension]}" (units: ${listUnits(dimension)})`,
     };
+  }
+  const inverse = INVERSE_UNITS[dimension];
+  if (inverse && Object.hasOwn(inverse, unit)) {
+    if (!(magnitude > 0)) return { ok: false, message: `"${shown}": a power loading must be greater than 0, e.g. "10 lb/hp"` };
+    const value = 1 / (magnitude * inverse[unit]);
+    if (outOfRange(value)) return { ok: false, message: rangeMessage(`"${shown}"`, dimension) };
+    return { ok: true, value };
   }
   // Own keys only: "45 constructor" must not find Object.prototype.constructor.
   if (!Object.hasOwn(UNITS[dimension], unit)) return { ok: false, message: unknownUnitMessage(shown, shortened(unit, 30), dimension) };

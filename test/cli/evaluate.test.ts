@@ -439,7 +439,7 @@ describe('loftpoint evaluate: bad input', () => {
   });
 
   it('an unknown --units value', async () => {
-    await expectInputError(['evaluate', demoFile('trainer'), '--units', 'metric'], demoFile('trainer'), '--units', /si or us.*metric/);
+    await expectInputError(['evaluate', demoFile('trainer'), '--units', 'metric'], demoFile('trainer'), '--units', /si, us or kt-ft.*metric/);
   });
 
   it('--version on a concept JSON file', async () => {

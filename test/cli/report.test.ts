@@ -168,7 +168,7 @@ describe('loftpoint report with bad input', () => {
 
   it('refuses bad units, steps, sample counts and seeds', async () => {
     const out = at('x.html');
-    await expectRefused([trainer, '--out', out, '--units', 'imperial'], trainer, '--units', /must be si or us, not "imperial"/);
+    await expectRefused([trainer, '--out', out, '--units', 'imperial'], trainer, '--units', /must be si, us or kt-ft, not "imperial"/);
     await expectRefused([trainer, '--out', out, '--step', '0%'], trainer, '--step', /percentage between 0 and 100/);
     await expectRefused([trainer, '--out', out, '--step', 'lots'], trainer, '--step', /not "lots"/);
     await expectRefused([trainer, '--out', out, '--step', '10'], trainer, '--step', /"10" is ambiguous/);

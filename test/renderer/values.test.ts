@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { requirementFieldSpecs, type FieldSpec } from '../../app/renderer/lib/concept/fields';
-import { displayText, plainNumber, prettyUnit, readInput, storedSi } from '../../app/renderer/lib/concept/values';
+import { convertedText, displayText, plainNumber, prettyUnit, readInput, storedSi } from '../../app/renderer/lib/concept/values';
 import { REQUIREMENT_KINDS, parseConcept, DEMO_CONCEPTS } from '../../core';
 import { requirementFields } from '../../core/concept/requirement-schema';
 
@@ -11,13 +11,19 @@ const gradient = spec('climb-gradient', 'gradient');
 const engines = spec('climb-gradient', 'enginesInoperative');
 
 describe('displayText', () => {
-  it('shows a stored value in the unit of the chosen system', () => {
-    // 1 kt = 1852/3600 m/s exactly (NIST SP 811): 45 kt = 23.15 m/s.
-    expect(displayText('45 kt', stallSpeed, 'si')).toBe('23.15');
+  it('shows a stored value as typed, with the value in the chosen system beside it when the units differ', () => {
+    // 1 kt = 1852/3600 m/s exactly (NIST SP 811): 45 kt = 23.15 m/s, shown to 3 figures beside (23.2).
+    expect(displayText('45 kt', stallSpeed, 'si')).toBe('45 kt');
+    expect(convertedText('45 kt', stallSpeed, 'si')).toBe('= 23.2 m/s');
     expect(displayText('45 kt', stallSpeed, 'us')).toBe('45');
-    // 1 ft = 0.3048 m exactly (NIST SP 811): 1500 ft = 457.2 m.
-    expect(displayText('1500 ft', distance, 'si')).toBe('457.2');
-    expect(displayText('457.2 m', distance, 'us')).toBe('1500');
+    expect(convertedText('45 kt', stallSpeed, 'us')).toBe('');
+    expect(displayText('45 kt', stallSpeed, 'kt-ft')).toBe('45');
+    // 1 ft = 0.3048 m exactly (NIST SP 811): 1500 ft = 457.2 m; 250 m = 820.2 ft, whole feet in the working mix.
+    expect(displayText('1500 ft', distance, 'si')).toBe('1500 ft');
+    expect(convertedText('1500 ft', distance, 'si')).toBe('= 457 m');
+    expect(displayText('1500 ft', distance, 'kt-ft')).toBe('1500');
+    expect(convertedText('250 m', distance, 'kt-ft')).toBe('= 820 ft');
+    expect(displayText('457.2 m', distance, 'si')).toBe('457.2');
     expect(displayText('2.4 %', gradient, 'si')).toBe('2.4');
     expect(displayText(0.024, gradient, 'us')).toBe('2.4');
     expect(displayText(undefined, stallSpeed, 'si')).toBe('');

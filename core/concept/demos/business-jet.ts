@@ -10,7 +10,7 @@ export const businessJet: DemoConcept = {
   title: 'LP-60 light business jet',
   summary:
     'A 7,400 kg twin-turbofan jet for six passengers: the 2.4 % second-segment climb with one engine out, ' +
-    'a 1,800 m balanced field on a hot day, a 1,400 m factored landing field, a 410 kt cruise at FL370 and a 43,000 ft ceiling.' +
+    'a 1,800 m balanced field on a hot day, a 1,400 m factored landing field, a M0.72 cruise at FL370 and a FL430 ceiling, with the Mach-dependent turbofan thrust lapse.' +
     ` ${DEMO_CAUTION}`,
   concept: {
     format: 'loftpoint-concept/1',
@@ -20,6 +20,10 @@ export const businessJet: DemoConcept = {
       aero: {
         aspectRatio: 8.6,
         cdLinear: 0,
+        // Supercritical sections, 12 % thick, 15 degrees of sweep: wave drag by Korn and Lock.
+        thicknessRatio: 0.12,
+        quarterChordSweep: '15 deg',
+        kornFactor: 0.95,
         configurations: {
           clean: { cd0: 0.021, oswaldEfficiency: 0.8, clMax: 1.45 },
           takeoff: { cd0Increment: 0.035, oswaldEfficiency: 0.76, clMax: 1.85 },
@@ -27,7 +31,7 @@ export const businessJet: DemoConcept = {
           landing: { cd0Increment: 0.07, oswaldEfficiency: 0.7, clMax: 2.25 },
         },
       },
-      propulsion: { kind: 'turbofan', engines: 2, lapseExponent: 1 },
+      propulsion: { kind: 'turbofan', engines: 2, lapseModel: 'high-bypass', throttleRatio: 1 },
     },
     requirements: [
       {
@@ -74,21 +78,21 @@ export const businessJet: DemoConcept = {
       {
         id: 'cruise',
         kind: 'cruise',
-        label: '410 kt TAS at 37,000 ft, maximum cruise thrust, mid-fuel (programme target)',
-        speed: '410 kt',
-        altitude: '37000 ft',
+        label: 'High-speed cruise at FL370, maximum cruise thrust, mid-fuel (programme target)',
+        speed: 'M0.72',
+        altitude: 'FL370',
         massFraction: 0.88,
         powerSetting: 0.9,
       },
       {
         id: 'ceiling',
         kind: 'ceiling',
-        label: 'Cruise ceiling 43,000 ft at 300 ft/min (common practice for jets)',
-        altitude: '43000 ft',
+        label: 'Cruise ceiling at 300 ft/min (common practice for jets)',
+        altitude: 'FL430',
         rate: '300 ft/min',
         massFraction: 0.9,
       },
     ],
-    designPoint: { wingLoading: '3400 N/m^2', thrustToWeight: 0.31 },
+    designPoint: { wingLoading: '3400 N/m^2', thrustToWeight: 0.5 },
   },
 };

@@ -5,6 +5,7 @@
  * core/propulsion/kinds/index.ts lists every kind.
  */
 import type { TypicalRange } from '../../assumptions/typical-range';
+import type { LapseModel } from '../turbine-lapse';
 
 /** The propulsion inputs a lapse model may read (SI). */
 export interface LapseInputs {
@@ -24,6 +25,12 @@ export interface PropulsionDescriptor<Kind extends string = string> {
   lapse(sigma: number, inputs: LapseInputs): number;
   /** The lapse exponent's default and typical range; null: the kind uses no exponent. */
   lapseExponent: { default: number; typical: TypicalRange } | null;
+  /**
+   * The lapse models the propulsion block may name (`lapseModel`); the first is the
+   * default when the file names neither a model nor a lapse exponent (a file
+   * that gives an exponent keeps the density model).
+   */
+  lapseModels: readonly LapseModel[];
   /** True: the concept must give aircraft.propulsion.criticalAltitude. */
   needsCriticalAltitude: boolean;
   /** Which clean CD0 class of the typical-range table the studies try first (index into its bands). */

@@ -10,6 +10,7 @@ export const electric = definePropulsion({
   propeller: true,
   lapse: () => electricLapse(),
   lapseExponent: null,
+  lapseModels: ['density'],
   needsCriticalAltitude: false,
   cd0Band: 3,
   methods: '- **electric**: alpha = 1 at every altitude (a motor needs no air; battery limits are outside the diagram).',

@@ -10,6 +10,7 @@ export const piston = definePropulsion({
   propeller: true,
   lapse: (sigma) => pistonLapse(sigma),
   lapseExponent: null,
+  lapseModels: ['density'],
   needsCriticalAltitude: false,
   cd0Band: 0,
   methods: '- **piston**: alpha = sigma - (1 - sigma)/7.55 = 1.132 sigma - 0.132 (Gagg and Ferrar, NACA, 1934, as given by Gudmundsson, *General Aviation Aircraft Design*; from memory).',

@@ -12,6 +12,7 @@ export const turbochargedPiston = definePropulsion({
   // sigma_crit is the standard day's (dT = 0) at the critical altitude.
   lapse: (sigma, inputs) => turbochargedPistonLapse(sigma, atmosphere(inputs.criticalAltitudeM ?? 0, 0).sigma),
   lapseExponent: null,
+  lapseModels: ['density'],
   needsCriticalAltitude: true,
   cd0Band: 0,
   methods:

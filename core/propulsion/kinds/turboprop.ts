@@ -20,7 +20,11 @@ export const turboprop = definePropulsion({
       bands: [band(0.7, 0.9, 'turboprop lapse exponent 0.7-0.9 (common practice)')],
     },
   },
+  lapseModels: ['density'],
   needsCriticalAltitude: false,
   cd0Band: 0,
-  methods: '- **turboprop**: alpha = sigma^m, m = 0.75 by default (common practice, 0.7-0.9).',
+  methods:
+    '- **turboprop**: alpha = sigma^m, m = 0.75 by default (common practice, 0.7-0.9), a lapse of shaft power. ' +
+    "Mattingly's turboprop model is a lapse of installed thrust that includes the propeller, which Loftpoint counts through eta_p, " +
+    'so it is not offered here; no Mach effect on shaft power is modelled.',
 });

@@ -14,7 +14,7 @@ import { PROPULSION_DESCRIPTORS } from '../../../core/propulsion/kinds';
 import { REQUIREMENT_DESCRIPTORS } from '../../../core/requirements';
 import { typicalRange } from '../../../core/studies/typical-ranges';
 import { DEMO_CONCEPTS, evaluateDesign, parseConcept } from '../../../core';
-import { aircraft, approachSpeed, balancedField, ceiling, climbGradient, climbRate, cruise, design, landingDistance, landingRoll, stall, sustainedTurn, takeoffDistance, takeoffRoll } from '../helpers/design';
+import { aircraft, approachSpeed, balancedField, ceiling, climbGradient, climbRate, cruise, design, landingDistance, landingRoll, maximumSpeed, stall, sustainedTurn, takeoffDistance, takeoffRoll } from '../helpers/design';
 
 /** One requirement of every kind, on an aircraft with the usual configurations and an engine-out one. */
 function baseDesign(kind: PropulsionKind = 'piston'): Design {
@@ -41,6 +41,7 @@ function baseDesign(kind: PropulsionKind = 'piston'): Design {
       balancedField(1200),
       landingDistance(600),
       approachSpeed(35),
+      maximumSpeed(70),
     ],
     rangePa: [200, 2000],
   });

@@ -10,7 +10,7 @@ interface BadCase {
   message: RegExp;
 }
 
-const KINDS = 'stall, landing-ground-roll, takeoff-ground-roll, cruise, climb-rate, climb-gradient, ceiling, sustained-turn, takeoff-distance, balanced-field-length, landing-distance, approach-speed';
+const KINDS = 'stall, landing-ground-roll, takeoff-ground-roll, cruise, climb-rate, climb-gradient, ceiling, sustained-turn, takeoff-distance, balanced-field-length, landing-distance, approach-speed, maximum-speed';
 
 // Each bad input must give exactly one issue, at the field, saying what to write.
 const CASES: BadCase[] = [

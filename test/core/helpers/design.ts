@@ -10,6 +10,7 @@ import type { CruiseRequirement } from '../../../core/constraints/cruise';
 import type { LandingGroundRollRequirement } from '../../../core/constraints/landing-ground-roll';
 import type { StallRequirement } from '../../../core/constraints/stall';
 import type { SustainedTurnRequirement } from '../../../core/constraints/sustained-turn';
+import type { MaximumSpeedRequirement } from '../../../core/requirements/maximum-speed';
 import type { TakeoffGroundRollRequirement } from '../../../core/constraints/takeoff-ground-roll';
 import type { TakeoffDistanceRequirement } from '../../../core/requirements/takeoff-distance';
 import type { BalancedFieldLengthRequirement } from '../../../core/requirements/balanced-field-length';
@@ -20,7 +21,7 @@ import { FOOT_PER_MINUTE_MPS } from '../../../core/units/factors';
 type Extra<R extends Requirement> = Partial<Omit<R, 'kind'>>;
 
 function common(kind: Requirement['kind'], id: string) {
-  const propellerEfficiency = kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'balanced-field-length' ? 0.55 : kind === 'cruise' || kind === 'sustained-turn' ? 0.8 : 0.75;
+  const propellerEfficiency = kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'balanced-field-length' ? 0.55 : kind === 'cruise' || kind === 'sustained-turn' || kind === 'maximum-speed' ? 0.8 : 0.75;
   const configuration =
     kind === 'stall' || kind === 'landing-ground-roll' || kind === 'landing-distance' || kind === 'approach-speed' ? 'landing' : kind === 'takeoff-ground-roll' || kind === 'takeoff-distance' || kind === 'balanced-field-length' || kind === 'climb-gradient' ? 'takeoff' : 'clean';
   return { id, enabled: true, altitudeM: 0, temperatureOffsetK: 0, massFraction: 1, powerSetting: 1, propellerEfficiency, configuration };
@@ -119,6 +120,10 @@ export function climbGradient(gradient: number, extra: Extra<ClimbGradientRequir
 
 export function ceiling(altitudeM: number, extra: Extra<CeilingRequirement> = {}): CeilingRequirement {
   return { ...common('ceiling', 'ceiling'), kind: 'ceiling', altitudeM, rateMps: 100 * FOOT_PER_MINUTE_MPS, minimumSpeedFactor: 1.2, ...extra };
+}
+
+export function maximumSpeed(speedMps: number, extra: Extra<MaximumSpeedRequirement> = {}): MaximumSpeedRequirement {
+  return { ...common('maximum-speed', 'top-speed'), kind: 'maximum-speed', speedMps, equivalent: false, ...extra };
 }
 
 export function sustainedTurn(speedMps: number, loadFactor: number, extra: Extra<SustainedTurnRequirement> = {}): SustainedTurnRequirement {

@@ -4,7 +4,7 @@
  */
 import fc from 'fast-check';
 import type { Design, PropulsionKind, Requirement } from '../../../core/model';
-import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffDistance, takeoffRoll, balancedField, landingDistance, approachSpeed } from '../helpers/design';
+import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, maximumSpeed, stall, sustainedTurn, takeoffDistance, takeoffRoll, balancedField, landingDistance, approachSpeed } from '../helpers/design';
 
 const kinds: PropulsionKind[] = ['piston', 'turbocharged-piston', 'turboprop', 'turbofan', 'electric'];
 
@@ -77,6 +77,9 @@ export function requirementArb(engines: number): fc.Arbitrary<Requirement> {
       .record({ d: fc.double({ min: 60, max: 3000, noNaN: true }), h: fc.double({ min: 0, max: 20, noNaN: true }), ...common })
       .map(({ d, h, ...c }) => takeoffDistance(d, { ...c, obstacleHeightM: h })),
     fc.record({ d: fc.double({ min: 300, max: 4000, noNaN: true }), ...common }).map(({ d, ...c }) => balancedField(d, c)),
+    fc
+      .record({ v: fc.double({ min: 20, max: 260, noNaN: true }), h: fc.double({ min: 0, max: 12000, noNaN: true }), eas: fc.boolean(), ...common })
+      .map(({ v, h, eas, ...c }) => maximumSpeed(v, { ...c, altitudeM: h, equivalent: eas })),
   );
 }
 

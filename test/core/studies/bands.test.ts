@@ -5,7 +5,7 @@ import { boundaryBands, typicalUncertainty, type CurveBand, type LimitBand } fro
 import { KNOT_MPS } from '../../../core/units/factors';
 import { assertRelative } from '../helpers/asserts';
 import { aircraft, cruise, design, stall } from '../helpers/design';
-import { DEMO_SLUGS, demo, ranged } from './fixtures';
+import { DEMO_SLUGS, demo, densityLapseJet, ranged } from './fixtures';
 
 const RHO0 = 1.225; // kg/m^3, sea-level density of the U.S. Standard Atmosphere 1976 (Table 1)
 const KT = 1852 / 3600; // m/s, NIST SP 811

@@ -75,6 +75,7 @@ describe('requirementCosts', () => {
       'balanced-field-length': 'distance up',
       'landing-distance': 'distance up',
       'approach-speed': 'speed up',
+      'maximum-speed': 'speed down',
     });
   });
 

@@ -22,6 +22,17 @@ export function demo(slug: string): Demo {
   return { slug, concept: parsed.concept, design: parsed.design };
 }
 
+/** The business jet with thrust in proportion to density (lapse exponent 1), for studies that range the exponent. */
+export function densityLapseJet(): Demo {
+  const found = DEMO_CONCEPTS.find((d) => d.slug === 'business-jet');
+  if (!found) throw new Error('no business-jet demo');
+  const concept = structuredClone(found.concept) as ConceptJson;
+  concept.aircraft.propulsion = { kind: 'turbofan', engines: 2, lapseModel: 'density', lapseExponent: 1 };
+  const parsed = parseConcept(concept);
+  if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
+  return { slug: 'business-jet', concept: parsed.concept, design: parsed.design };
+}
+
 export const DEMO_SLUGS = DEMO_CONCEPTS.map((d) => d.slug);
 
 /** Resolve a block that must be valid; fails the test with the issues otherwise. */

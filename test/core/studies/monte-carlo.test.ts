@@ -13,7 +13,7 @@ import {
 } from '../../../core/studies';
 import { KNOT_MPS } from '../../../core/units/factors';
 import { design, stall } from '../helpers/design';
-import { demo, ranged } from './fixtures';
+import { demo, densityLapseJet, ranged } from './fixtures';
 
 const RHO0 = 1.225; // kg/m^3, U.S. Standard Atmosphere 1976, Table 1
 const V = 45 * KNOT_MPS;
@@ -163,7 +163,7 @@ describe('probabilityMap', () => {
   });
 
   it('never lowers the chance as loading rises, and matches the boundary bands at their edges (business jet)', () => {
-    const jet = demo('business-jet');
+    const jet = densityLapseJet();
     const params = ranged(
       {
         parameters: [

@@ -28,8 +28,10 @@ describe('the Ranges panel rows', () => {
     expect(groups[0].rows.find((row) => row.field === 'aircraft.aero.cdLinear')?.typical).toBeNull();
   });
 
-  it('shows a turbofan concept its lapse exponent with the published turbofan range', () => {
+  it('shows a turbofan concept on the density lapse its lapse exponent with the published turbofan range, and one on the Mach-aware lapse none', () => {
+    expect(rangeGroups(designOf(demoDocument('business-jet')), demoDocument('business-jet')).flatMap((g) => g.rows).some((r) => r.field === 'aircraft.propulsion.lapseExponent')).toBe(false);
     const document = demoDocument('business-jet');
+    (document as unknown as { aircraft: { propulsion: Record<string, unknown> } }).aircraft.propulsion = { kind: 'turbofan', engines: 2, lapseModel: 'density', lapseExponent: 1 };
     const rows = rangeGroups(designOf(document), document).flatMap((group) => group.rows);
     const lapse = rows.find((row) => row.field === 'aircraft.propulsion.lapseExponent');
     // core/methods.md section 5: turbofan lapse exponent 0.6-1 (common range).

@@ -3,7 +3,7 @@
  * of the chosen system; what a person types is read in that unit unless they
  * write one ("45 kt"), and goes back into the file with its unit.
  */
-import { UNITS, parseQuantity, type UnitSystem } from '../../../../core';
+import { UNITS, parseQuantity, type Dimension, type UnitSystem } from '../../../../core';
 import type { FieldSpec } from './fields';
 
 export type ReadResult = { ok: true; value: string | number | boolean | undefined } | { ok: false; message: string };
@@ -15,9 +15,18 @@ export function prettyUnit(unit: string): string {
   return PRETTY_UNITS[unit] ?? unit;
 }
 
+/**
+ * A quantity field's unit in a system: the working mix (kt-ft) takes the US
+ * unit for speeds, rates and lengths (kt, ft/min, ft) and the SI one for the rest.
+ */
+export function unitIn(value: { dimension: Dimension; units: { si: string; us: string } }, system: UnitSystem): string {
+  if (system !== 'kt-ft') return value.units[system];
+  return value.dimension === 'speed' || value.dimension === 'length' ? value.units.us : value.units.si;
+}
+
 /** The unit a field is shown in, in the file's own spelling; '' when it has none. */
 export function fieldUnit(spec: FieldSpec, system: UnitSystem): string {
-  if (spec.value.type === 'quantity') return spec.value.units[system];
+  if (spec.value.type === 'quantity') return unitIn(spec.value, system);
   if (spec.value.type === 'percent') return '%';
   return '';
 }
@@ -33,7 +42,7 @@ export function plainNumber(value: number): string {
 export function storedSi(raw: unknown, spec: FieldSpec): number | null {
   if (raw === undefined || raw === null) return null;
   if (spec.value.type === 'quantity') {
-    const parsed = parseQuantity(raw, spec.value.dimension);
+    const parsed = parseQuantity(raw, spec.value.dimension, { mach: spec.value.mach });
     return parsed.ok ? parsed.value : null;
   }
   if (spec.value.type === 'percent') {
@@ -50,12 +59,35 @@ export function displayText(raw: unknown, spec: FieldSpec, system: UnitSystem): 
   if (spec.value.type === 'switch') return raw === true ? 'yes' : raw === false ? 'no' : String(raw);
   const si = storedSi(raw, spec);
   if (si === null) return typeof raw === 'string' ? raw : String(raw);
+  // A value stays as typed when it is written in another unit (the converted value shows beside it).
+  if (typedElsewhere(raw, spec, system)) return String(raw).trim();
   if (spec.value.type === 'quantity') {
-    const unit = spec.value.units[system];
+    const unit = unitIn(spec.value, system);
     return plainNumber(si / UNITS[spec.value.dimension][unit]);
   }
   if (spec.value.type === 'percent') return plainNumber(si * 100);
   return plainNumber(si);
+}
+
+/** The number and unit of a stored quantity, when it is written in a unit other than the system's for the field. */
+function typedElsewhere(raw: unknown, spec: FieldSpec, system: UnitSystem): boolean {
+  if (typeof raw !== 'string' || spec.value.type !== 'quantity') return false;
+  const written = raw.trim().replace(/^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?\s*/, '');
+  return written !== unitIn(spec.value, system);
+}
+
+/**
+ * Beside a value typed in another unit: the same value in the system's unit,
+ * rounded as the system shows it ("= 56.6 m/s"); '' when there is nothing to add.
+ */
+export function convertedText(raw: unknown, spec: FieldSpec, system: UnitSystem): string {
+  if (!typedElsewhere(raw, spec, system) || spec.value.type !== 'quantity') return '';
+  const parsed = parseQuantity(raw, spec.value.dimension, { mach: spec.value.mach });
+  if (!parsed.ok || parsed.mach !== undefined) return '';
+  const unit = unitIn(spec.value, system);
+  const shown = parsed.value / UNITS[spec.value.dimension][unit];
+  const whole = system === 'kt-ft' && (unit === 'kt' || unit === 'ft' || unit === 'ft/min') && Math.abs(shown) >= 10;
+  return `= ${whole ? Math.round(shown).toLocaleString('en-US') : String(Number(shown.toPrecision(3)))} ${prettyUnit(unit)}`;
 }
 
 const BARE_NUMBER = /^\s*[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?\s*$/;
@@ -87,8 +119,8 @@ export function readInput(text: string, spec: FieldSpec, system: UnitSystem): Re
       return parsed.ok ? { ok: true, value: `${Number(written.replace('%', '').trim())} %` } : { ok: false, message: parsed.message };
     }
     case 'quantity': {
-      const written = BARE_NUMBER.test(trimmed) ? `${Number(trimmed)} ${spec.value.units[system]}` : trimmed;
-      const parsed = parseQuantity(written, spec.value.dimension);
+      const written = BARE_NUMBER.test(trimmed) ? `${Number(trimmed)} ${unitIn(spec.value, system)}` : trimmed;
+      const parsed = parseQuantity(written, spec.value.dimension, { mach: spec.value.mach });
       return parsed.ok ? { ok: true, value: written } : { ok: false, message: parsed.message };
     }
   }

@@ -15,7 +15,7 @@ interface Stored {
 function load(storage: Storage | undefined): Stored {
   try {
     const value = JSON.parse(storage?.getItem(KEY) ?? '{}') as Partial<Stored>;
-    return { units: value.units === 'us' ? 'us' : 'si', powerLoading: value.powerLoading === true };
+    return { units: value.units === 'us' || value.units === 'kt-ft' ? value.units : 'si', powerLoading: value.powerLoading === true };
   } catch {
     return { units: 'si', powerLoading: false };
   }
