@@ -37,7 +37,9 @@ export function requirementValues(r: Requirement, kind: PropulsionKind, system: 
   // A kind whose own field is the altitude (a ceiling) states it in its summary.
   const ownAltitude = 'altitude' in descriptor.shape;
   const [first, ...rest] = descriptor.summary(r, system);
-  const at = !ownAltitude && r.altitudeM !== 0 ? ` at ${formatQuantity(r.altitudeM, 'altitude', system)}` : '';
+  const altitude = !ownAltitude && r.altitudeM !== 0 ? formatQuantity(r.altitudeM, 'altitude', system) : '';
+  // "n 1.41 at 31 kt TAS, 2,034 ft" rather than two "at"s in a row.
+  const at = altitude === '' ? '' : (first ?? '').includes(' at ') ? `, ${altitude}` : ` at ${altitude}`;
   return [`${first ?? ''}${at}`, ...rest, isaText(r.temperatureOffsetK, system), ...conditions(r, kind)].join(', ');
 }
 
