@@ -24,7 +24,7 @@ describe('loftpoint evaluate --units kt-ft', () => {
     expect(text).toContain('M0.72 (413 kt TAS) at FL370, ISA');
     expect(text).toContain('300 ft/min at FL430');
     // 900 m = 2,953 ft (1 ft = 0.3048 m exactly): whole feet.
-    expect(text).toContain('2,953 ft ground roll');
+    expect(text).toContain('5,906 ft balanced field');
     expect(text).toContain('7,400 kg take-off mass');
     expect(text).toMatch(/Wing loading\s+3,480 N\/m²/);
     expect(text).toMatch(/certification requirements come from the applicable authority/);

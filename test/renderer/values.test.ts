@@ -81,7 +81,9 @@ describe('field specs', () => {
             const shown = displayText(raw, field, system);
             const read = readInput(shown, field, system);
             expect(read.ok, `${demo.slug} ${requirement.id}.${field.key} ${system}`).toBe(true);
-            if (read.ok) expect(storedSi(read.value, field)! / storedSi(raw, field)!).toBeCloseTo(1, 4);
+            if (!read.ok) continue;
+            if (field.value.type === 'switch') expect(read.value).toBe(raw);
+            else expect(storedSi(read.value, field)! / storedSi(raw, field)!).toBeCloseTo(1, 4);
           }
         }
       });
