@@ -305,6 +305,13 @@ test.describe('desktop contract with a stand-in for Electron (NOT Electron): bui
     expect(menuItem('US Customary Units').checked).toBe(false);
     await byTest('units-us').click();
     await expect.poll(() => menuItem('US Customary Units').checked).toBe(true);
+    click('Knots and Feet');
+    await expect(byTest('units-kt-ft')).toHaveAttribute('aria-pressed', 'true');
+    await byTest('units-us').click();
+    await expect.poll(() => menuItem('US Customary Units').checked).toBe(true);
+    expect(menuItem('Knots and Feet').checked).toBe(false);
+    await byTest('units-kt-ft').click();
+    await expect.poll(() => menuItem('Knots and Feet').checked).toBe(true);
     click('SI Units');
     await expect(byTest('units-si')).toHaveAttribute('aria-pressed', 'true');
   });

@@ -9,11 +9,11 @@ test('the knots-and-feet working units: values as typed, converted beside, fligh
   await expect(cruise.getByTestId('requirement-values')).toContainText('M0.72 (413 kt TAS) at FL370');
   await expect(window.byTest('requirement-ceiling').getByTestId('requirement-values')).toContainText('at FL430');
   await window.shot('kt-ft-requirements');
-  // A field written in metres shows as typed, with whole feet beside it (900 m = 2,953 ft, 1 ft = 0.3048 m).
-  const roll = await window.openRequirement('takeoff-run');
-  const converted = roll.getByTestId('field-converted').first();
-  await expect(converted).toHaveText('= 2,953 ft');
-  await expect(roll.locator('input.num').first()).toHaveValue('900 m');
+  // A field written in metres shows as typed, with whole feet beside it (1,800 m = 5,906 ft, 1 ft = 0.3048 m).
+  const field = await window.openRequirement('takeoff-field');
+  const converted = field.getByTestId('field-converted').first();
+  await expect(converted).toHaveText('= 5,906 ft');
+  await expect(field.locator('input.num').first()).toHaveValue('1800 m');
   await window.shot('kt-ft-fields');
   await expect(page.getByText(/licensed engineering review/).first()).toBeVisible();
   await window.expectNoNaN();
