@@ -30,7 +30,7 @@ describe('takeoffGroundRollBoundary', () => {
   });
 
   // Typical jet take-off cases (core/methods.md section 9 ranges); the mean-acceleration form at 0.7 V_LOF
-  // is within about 1 % of Raymer's closed form (core/methods.md section 6; ref.py): checked here to 2 %.
+  // is within about 1 % of Raymer's closed form (core/methods.md section 6, take-off notes): checked here to 2 %.
   const cases: Array<{ dcd0: number; clMax: number; mu: number; distance: number; w: number }> = [
     { dcd0: 0.015, clMax: 1.8, mu: 0.04, distance: 600, w: 1500 },
     { dcd0: 0.015, clMax: 1.8, mu: 0.04, distance: 600, w: 5000 },
