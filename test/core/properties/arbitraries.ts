@@ -10,6 +10,10 @@ import type { Design, PropulsionKind, Requirement } from '../../../core/model';
 import { impossibleInputs } from '../../../core/diagram';
 import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffRoll } from '../helpers/design';
 
+/** Evenly spread over [min, max] (fc.double spreads over the bit patterns, so mostly near zero). */
+const evenly = (min: number, max: number): fc.Arbitrary<number> =>
+  fc.noBias(fc.integer({ min: 0, max: 1_000_000 })).map((i) => min + ((max - min) * i) / 1_000_000);
+
 const kinds: PropulsionKind[] = ['piston', 'turbocharged-piston', 'turboprop', 'turbofan', 'electric'];
 
 export const aircraftArb = fc
@@ -18,7 +22,7 @@ export const aircraftArb = fc
     engines: fc.integer({ min: 1, max: 4 }),
     takeoffMassKg: fc.double({ min: 20, max: 60000, noNaN: true }),
     aspectRatio: fc.double({ min: 4, max: 20, noNaN: true }),
-    cdLinear: fc.oneof(fc.double({ min: -0.01, max: 0.01, noNaN: true }), fc.double({ min: -0.2, max: 0.2, noNaN: true })),
+    cdLinear: fc.oneof(fc.double({ min: -0.01, max: 0.01, noNaN: true }), evenly(-0.2, 0.2)),
     cd0: fc.double({ min: 0.012, max: 0.05, noNaN: true }),
     e: fc.double({ min: 0.65, max: 0.95, noNaN: true }),
     clMax: fc.double({ min: 1.0, max: 1.8, noNaN: true }),
@@ -63,7 +67,7 @@ export function requirementArb(engines: number): fc.Arbitrary<Requirement> {
       .record({
         d: fc.double({ min: 40, max: 2500, noNaN: true }),
         mu: fc.double({ min: 0, max: 0.5, noNaN: true }),
-        clg: fc.oneof(fc.double({ min: 0, max: 0.8, noNaN: true }), fc.double({ min: 0, max: 3.5, noNaN: true })),
+        clg: fc.oneof(fc.double({ min: 0, max: 0.8, noNaN: true }), evenly(0, 3.5)),
         kLof: fc.double({ min: 1, max: 1.6, noNaN: true }),
         ...common,
       })

@@ -5,18 +5,23 @@ import type { CurveBoundaryJson } from '../../../core/evaluation';
 import type { Design } from '../../../core/model';
 import { anyDesignArb } from './arbitraries';
 
-/** Why a design is impossible, by hand: least drag C_D0 - K1^2/(4K) <= 0, C_L,g >= C_Lmax, or lift above weight at 0.7 V_LOF. */
-function impossibleByHand(d: Design): boolean {
+/**
+ * Why a design is impossible, by hand: least drag C_D0 - K1^2/(4K) <= 0 (the polar's minimum at
+ * C_L = -K1/(2K)), or a ground run with C_L,g >= C_Lmax, or lift above weight at 0.7 V_LOF,
+ * (0.7 k_LOF)^2 C_L,g / C_Lmax >= 1 with some rolling friction.
+ */
+function impossibleByHand(d: Design): RegExp | null {
   for (const name of Object.keys(d.aircraft.configurations)) {
     const p = polarOf(d.aircraft, name) as Polar;
-    if (p.cd0 - (p.k1 * p.k1) / (4 * p.k) <= 0) return true;
+    if (p.cd0 - (p.k1 * p.k1) / (4 * p.k) <= 0) return /least drag/;
   }
-  return d.requirements.some((r) => {
+  const groundRun = d.requirements.some((r) => {
     if (!r.enabled || r.kind !== 'takeoff-ground-roll') return false;
     const clMax = (polarOf(d.aircraft, r.configuration) as Polar).clMax;
     const k = 0.7 * r.liftoffSpeedFactor;
     return r.clGroundRun >= clMax || (r.rollingFriction > 0 && (k * k * r.clGroundRun) / clMax >= 1);
   });
+  return groundRun ? /C_Lmax|negative rolling friction/ : null;
 }
 
 describe('impossible inputs over the full accepted ranges', () => {
@@ -24,9 +29,11 @@ describe('impossible inputs over the full accepted ranges', () => {
     fc.assert(
       fc.property(anyDesignArb, (design) => {
         const issues = impossibleInputs(design);
-        if (impossibleByHand(design)) {
+        const why = impossibleByHand(design);
+        if (why) {
           expect(issues.length).toBeGreaterThan(0);
           for (const issue of issues) expect(issue.field).toMatch(/^(aircraft\.aero\.cdLinear|requirements\[\d+\]\.clGroundRun)$/);
+          expect(issues.map((i) => i.message).join(' | ')).toMatch(why);
           return;
         }
         // Accepted: every plotted required loading is positive, and so is the optimum's power or thrust.
