@@ -26,6 +26,17 @@ describe('Workspace', () => {
     expect(workspace.current).toBe(good);
   });
 
+  it('holds every problem at once, a misspelt field before the missing one it was meant to be', () => {
+    const workspace = new Workspace(trainer());
+    const aero = { ...(workspace.document.aircraft as { aero: Record<string, unknown> }).aero };
+    aero.aspectRatoi = aero.aspectRatio;
+    delete aero.aspectRatio;
+    workspace.edit(setIn(workspace.document, ['aircraft', 'aero'], aero));
+    workspace.edit(setIn(workspace.document, ['aircraft', 'takeoffMass'], '-5 kg'));
+    expect(workspace.issues.map((i) => i.path)).toEqual(['aircraft.takeoffMass', 'aircraft.aero.aspectRatoi', 'aircraft.aero.aspectRatio']);
+    expect(workspace.issues[1].message).toMatch(/did you mean "aspectRatio"/);
+  });
+
   it('moves the point while dragging without touching the document, and commits one step', () => {
     const workspace = new Workspace(trainer());
     const document = workspace.document;
