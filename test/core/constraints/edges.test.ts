@@ -4,7 +4,7 @@
  * from a division by zero or a negative wing loading, speed or engine count.
  */
 import { describe, expect, it } from 'vitest';
-import { propellerBestRateSpeed } from '../../../core/constraints/best-rate-speed';
+import { jetBestRateSpeed, propellerBestRateSpeed } from '../../../core/constraints/best-rate-speed';
 import { climbGradientBoundary } from '../../../core/constraints/climb-gradient';
 import { climbRateBoundary } from '../../../core/constraints/climb-rate';
 import { engineOutFactor } from '../../../core/constraints/engine-out';
@@ -75,5 +75,21 @@ describe('engineOutFactor', () => {
     expect(engineOutFactor(4, 1)).toBeCloseTo(4 / 3, 15);
     expect(engineOutFactor(2, -1)).toBeNaN();
     expect(engineOutFactor(2, 2)).toBeNaN();
+  });
+});
+
+describe('jetBestRateSpeed at a steep climb', () => {
+  it('finds the positive root of 2aV^4 - RC V - 2b = 0 even where Newton from V_md would head the wrong way', () => {
+    // The jet's best-rate speed maximises (T/W - D/W) V; d/dV of D V/W = a V^3 + b/V with a = rho C_D0/(2 w),
+    // b = 2 K w/rho gives the quartic (hand derivation, core/methods.md section 6). With a = 4.08e-6, b = 245
+    // (C_D0 0.02, K 0.05, w 3000 Pa, sea level) V_md = (b/a)^(1/4) = 88 m/s, and at 2^(1/4) V_md the quartic's
+    // slope 8 a V^3 - RC is negative for RC = 50 m/s: a start there would run left, to no positive root.
+    const a = (1.225 * 0.02) / (2 * 3000);
+    const b = (2 * 0.05 * 3000) / 1.225;
+    for (const rate of [0, 10, 50, 120]) {
+      const v = jetBestRateSpeed(a, b, rate);
+      expect(v).toBeGreaterThan(0);
+      expect(Math.abs(2 * a * v ** 4 - rate * v - 2 * b)).toBeLessThan(1e-9 * 2 * b);
+    }
   });
 });
