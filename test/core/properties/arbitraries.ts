@@ -7,7 +7,7 @@
  */
 import fc from 'fast-check';
 import type { Design, PropulsionKind, Requirement } from '../../../core/model';
-import { impossibleInputs } from '../../../core/diagram';
+import { impossibleInputs, minimumDragCoefficient, polarOf, type Polar } from '../../../core/diagram';
 import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, stall, sustainedTurn, takeoffRoll } from '../helpers/design';
 
 /** Evenly spread over [min, max] (fc.double spreads over the bit patterns, so mostly near zero). */
@@ -16,7 +16,8 @@ const evenly = (min: number, max: number): fc.Arbitrary<number> =>
 
 const kinds: PropulsionKind[] = ['piston', 'turbocharged-piston', 'turboprop', 'turbofan', 'electric'];
 
-export const aircraftArb = fc
+/** Any aircraft, with polars possible or not. */
+export const anyAircraftArb = fc
   .record({
     kind: fc.constantFrom(...kinds),
     engines: fc.integer({ min: 1, max: 4 }),
@@ -49,6 +50,11 @@ export const aircraftArb = fc
       criticalAltitudeM: a.criticalAltitudeM,
     }),
   );
+
+/** Aircraft whose every polar has a positive least drag, C_D0 - K1^2/(4K) > 0 (what the concept reader accepts). */
+export const aircraftArb = anyAircraftArb.filter((a) =>
+  Object.keys(a.configurations).every((name) => minimumDragCoefficient(polarOf(a, name) as Polar) > 0),
+);
 
 const common = {
   altitudeM: fc.double({ min: 0, max: 3000, noNaN: true }),
@@ -91,7 +97,7 @@ export function requirementArb(engines: number): fc.Arbitrary<Requirement> {
 }
 
 /** Any design the generators make, possible or not. */
-export const anyDesignArb: fc.Arbitrary<Design> = aircraftArb.chain((ac) =>
+export const anyDesignArb: fc.Arbitrary<Design> = anyAircraftArb.chain((ac) =>
   fc
     .record({
       requirements: fc.array(requirementArb(ac.propulsion.engines), { minLength: 1, maxLength: 8 }),
