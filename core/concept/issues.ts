@@ -107,21 +107,35 @@ function requirementId(path: readonly PropertyKey[], document: unknown): string 
   return typeof id === 'string' && id !== '' && path[2] !== 'id' ? id : undefined;
 }
 
-/** One issue per offending field, in document order, first finding per field kept. */
+/**
+ * One issue per offending field, in document order, first finding per field
+ * kept; except that an unknown field whose nearest known name is missing comes
+ * just before that missing field, since the slip explains it.
+ */
 export function translateIssues(issues: readonly ZodIssue[], document: unknown): ConceptIssue[] {
   const result: ConceptIssue[] = [];
+  /** Unknown fields by the path of the known field they were probably meant to be. */
+  const meantFor = new Map<string, ConceptIssue[]>();
   const seen = new Set<string>();
-  const add = (path: readonly PropertyKey[], message: string) => {
+  const add = (path: readonly PropertyKey[], message: string, meant?: string) => {
     const text = fieldPath(path);
     if (seen.has(text)) return;
     seen.add(text);
     const id = requirementId(path, document);
-    result.push({ path: text, message: id ? `${message} (requirement "${id}")` : message });
+    const entry = { path: text, message: id ? `${message} (requirement "${id}")` : message };
+    result.push(entry);
+    if (meant !== undefined) meantFor.set(meant, [...(meantFor.get(meant) ?? []), entry]);
   };
   for (const issue of issues) {
     if (issue.code === 'unrecognized_keys') {
-      for (const key of issue.keys) add([...issue.path, key], unknownField(issue.path, key, document));
+      const here = fieldsAt(issue.path, document);
+      for (const key of issue.keys) {
+        const guess = here && closestName(key, here);
+        add([...issue.path, key], unknownField(issue.path, key, document), guess ? fieldPath([...issue.path, guess]) : undefined);
+      }
     } else add(issue.path, messageFor(issue, issue.path));
   }
-  return result;
+  if (meantFor.size === 0) return result;
+  const moved = new Set([...meantFor.entries()].filter(([path]) => seen.has(path)).flatMap(([, entries]) => entries));
+  return result.flatMap((entry) => (moved.has(entry) ? [] : [...(meantFor.get(entry.path)?.filter((u) => moved.has(u)) ?? []), entry]));
 }

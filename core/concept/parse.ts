@@ -11,6 +11,7 @@ import { translateIssues } from './issues';
 import { parseJsonText } from './json-text';
 import { migrateConcept } from './migrate';
 import { resolveConcept } from './resolve';
+import { impossibleInputs } from '../diagram/impossible-inputs';
 import { conceptSchema, type ConceptJson } from './schema';
 import { LARGEST_MAGNITUDE, SMALLEST_MAGNITUDE, outOfRange } from '../units/quantity';
 import { resolveUncertainty, type UncertainParameter } from '../studies/uncertainty-schema';
@@ -64,6 +65,8 @@ export function parseConcept(input: unknown): ParsedConcept {
     const issues = checkConcept(checked.data);
     if (issues.length) return { ok: false, issues };
     const { design, warnings } = resolveConcept(checked.data);
+    const impossible = impossibleInputs(design);
+    if (impossible.length) return { ok: false, issues: impossible.map(({ field, message }) => ({ path: field, message })) };
     // A copy of what was written keeps its key order and leaves the caller's object alone.
     const concept = structuredClone(migrated.concept) as ConceptJson;
     // Every note from reading (migration, then resolution) travels with the design, so the evaluation carries each once.

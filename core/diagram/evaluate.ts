@@ -30,9 +30,9 @@ import { reportedSpeeds } from './speeds';
 
 /** Relative distance within which a requirement counts as active at the optimum (core/methods.md section 7). */
 export const ACTIVE_TOLERANCE = 1e-3;
-const DEFAULT_SAMPLES = 201;
+export const DEFAULT_SAMPLES = 201;
 
-function plotRange(design: Design, entries: readonly RequirementBoundary[], warnings: WarningJson[]): [number, number] {
+export function plotRange(design: Design, entries: readonly RequirementBoundary[], warnings: WarningJson[]): [number, number] {
   const given = design.diagram.wingLoadingRangePa;
   if (given && Number.isFinite(given[0]) && Number.isFinite(given[1]) && given[0] > 0 && given[1] > given[0]) {
     return [given[0], given[1]];

@@ -12,6 +12,7 @@ export { envelopeAt, wingLoadingCap, type CurveBoundary, type LimitBoundary, typ
 export { findOptimum, SEARCH_GRID_POINTS, COARSE_GRID_POINTS, TIE_TOLERANCE, type Optimum, type EnvelopeSamples } from './optimum';
 export { reportedSpeeds, APPROACH_SPEED_FACTOR } from './speeds';
 export { sizingAt } from './sizing';
+export { impossibleInputs, type ImpossibleInput } from './impossible-inputs';
 export { assumptionWarnings } from './assumption-warnings';
 
 export * from '../aero';

@@ -11,7 +11,9 @@ export const FEASIBLE_TOLERANCE = 1e-9;
 
 /**
  * Limit: 1 - w/w_lim. Curve: y/y_i(w) - 1, which is -1 where the curve cannot
- * be met at any loading; a non-positive requirement is met by any loading (1).
+ * be met at any loading. A non-positive required loading is no requirement an
+ * aircraft can have (the concept reader rejects the inputs that give one), so
+ * it counts as not met (-1) rather than as met by any margin.
  */
 export function marginOf(boundary: Boundary, wingLoadingPa: number, loading: number): number {
   if (boundary.type === 'limit') {
@@ -22,10 +24,9 @@ export function marginOf(boundary: Boundary, wingLoadingPa: number, loading: num
   const stall = boundary.stallLimitPa;
   if (stall !== undefined && stall > 0 && wingLoadingPa > stall) return 1 - wingLoadingPa / stall;
   const required = boundary.required(wingLoadingPa);
-  if (!Number.isFinite(required)) return -1;
-  if (required <= 0) return 1;
+  if (!Number.isFinite(required) || !(required > 0)) return -1;
   const margin = loading / required - 1;
-  return Number.isFinite(margin) ? margin : 1;
+  return Number.isFinite(margin) ? margin : -1;
 }
 
 export function marginsFor(entries: readonly RequirementBoundary[], wingLoadingPa: number, loading: number): MarginJson[] {

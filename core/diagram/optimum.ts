@@ -141,5 +141,16 @@ export function findOptimum(
     const tiesFurtherRight = y <= tieLimit(bestY) && w > bestW;
     if (lower || tiesFurtherRight) [bestW, bestY] = [w, y];
   }
+  // The tie rule over the whole span: on a flat envelope the grid's rounding
+  // wobble makes many local minima, and the one at the largest wing loading
+  // need not be among the candidates. Any grid point right of the best that
+  // ties with it wins, moved right across the tie.
+  const limit = tieLimit(bestY);
+  for (let i = ws.length - 1; i >= 0 && ws[i] > bestW; i--) {
+    if (ys[i] <= limit) {
+      bestW = i < ws.length - 1 ? lastWithin(f, ws[i], ws[i + 1], limit) : ws[i];
+      break;
+    }
+  }
   return { wingLoadingPa: bestW, loading: f(bestW), unbounded: unbounded(bestW) };
 }

@@ -397,6 +397,28 @@ describe('loftpoint evaluate: bad input', () => {
     await expectInputError(['evaluate', file], file, 'requirements[0].speed', /unit/);
   });
 
+  it('a linear drag term that makes the least drag negative', async () => {
+    // Trainer demo's clean polar: C_D0 0.029, e 0.79, AR 7.4: K1^2/(4K) = 0.01 x pi 0.79 7.4/4 = 0.0459 > 0.029.
+    const file = variant('negative-drag.json', (c) => (c.aircraft.aero.cdLinear = -0.1));
+    await expectInputError(['evaluate', file], file, 'aircraft.aero.cdLinear', /least drag .* not positive/);
+  });
+
+  it('a ground-run lift coefficient at or above C_Lmax', async () => {
+    const file = variant('ground-run-cl.json', (c) => {
+      const roll = c.requirements.find((r: { kind: string }) => r.kind === 'takeoff-ground-roll');
+      roll.clGroundRun = 2.5;
+    });
+    await expectInputError(['evaluate', file], file, '', /clGroundRun: 2\.5 is at or above the takeoff C_Lmax/);
+  });
+
+  it('a misspelt field, named before the missing field it was meant to be', async () => {
+    const file = variant('misspelt.json', (c) => {
+      c.aircraft.aero.aspectRatoi = c.aircraft.aero.aspectRatio;
+      delete c.aircraft.aero.aspectRatio;
+    });
+    await expectInputError(['evaluate', file], file, 'aircraft.aero.aspectRatoi', /did you mean "aspectRatio"\?/);
+  });
+
   it('an unknown field', async () => {
     const file = variant('unknown-field.json', (c) => (c.aircraft.wingspan = '10 m'));
     await expectInputError(['evaluate', file], file, 'aircraft.wingspan', /unknown field/);

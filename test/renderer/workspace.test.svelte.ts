@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { Workspace } from '../../app/renderer/lib/state/workspace.svelte';
-import { setIn, type ConceptDocument } from '../../app/renderer/lib/concept/edit';
+import { setIn, type ConceptDocument, type Json } from '../../app/renderer/lib/concept/edit';
 import { DEMO_CONCEPTS } from '../../core';
 
 const trainer = () => structuredClone(DEMO_CONCEPTS.find((demo) => demo.slug === 'trainer')!.concept) as unknown as ConceptDocument;
@@ -24,6 +24,17 @@ describe('Workspace', () => {
     workspace.edit(setIn(workspace.document, ['aircraft', 'takeoffMass'], '-5 kg'));
     expect(workspace.issues[0].path).toBe('aircraft.takeoffMass');
     expect(workspace.current).toBe(good);
+  });
+
+  it('holds every problem at once, a misspelt field before the missing one it was meant to be', () => {
+    const workspace = new Workspace(trainer());
+    const aero = { ...(workspace.document.aircraft as { aero: Record<string, Json> }).aero };
+    aero.aspectRatoi = aero.aspectRatio;
+    delete aero.aspectRatio;
+    workspace.edit(setIn(workspace.document, ['aircraft', 'aero'], aero));
+    workspace.edit(setIn(workspace.document, ['aircraft', 'takeoffMass'], '-5 kg'));
+    expect(workspace.issues.map((i) => i.path)).toEqual(['aircraft.takeoffMass', 'aircraft.aero.aspectRatoi', 'aircraft.aero.aspectRatio']);
+    expect(workspace.issues[1].message).toMatch(/did you mean "aspectRatio"/);
   });
 
   it('moves the point while dragging without touching the document, and commits one step', () => {

@@ -86,3 +86,15 @@ describe('characteristic lift coefficients with a linear term', () => {
     });
   }
 });
+
+describe('bestRangeLiftCoefficient with a linear term', () => {
+  it('maximises sqrt(C_L)/C_D with K1 = +/-0.03 (jet best range, Anderson; checked against neighbours)', () => {
+    for (const k1 of [-0.03, 0.03]) {
+      const polar = { cd0: 0.025, k1, k: 0.045, clMax: 1.5 };
+      const merit = (cl: number) => Math.sqrt(cl) / (polar.cd0 + k1 * cl + polar.k * cl * cl);
+      const best = bestRangeLiftCoefficient(polar);
+      expect(merit(best)).toBeGreaterThan(merit(best * 1.01));
+      expect(merit(best)).toBeGreaterThan(merit(best * 0.99));
+    }
+  });
+});

@@ -35,3 +35,14 @@ describe('oswaldEstimate', () => {
     expect(oswaldSweptWing(8, 45 * deg)).toBeLessThan(oswaldSweptWing(8, 35 * deg));
   });
 });
+
+describe('oswaldSweptWing', () => {
+  it('gives 0.5459 at AR 8 and 35 deg, 0.3753 at AR 10 and 40 deg (Raymer eq. 12.49 worked by hand)', () => {
+    // e = 4.61(1 - 0.045 AR^0.68)(cos L_LE)^0.15 - 3.1 (Raymer 4th ed., eq. 12.49, from memory). By hand:
+    // AR 8: 8^0.68 = 4.1125, 1 - 0.18506 = 0.81494, cos 35 deg^0.15 = 0.97052; 4.61 x 0.81494 x 0.97052 - 3.1 = 0.5461.
+    const deg = Math.PI / 180;
+    assertInDelta(oswaldSweptWing(8, 35 * deg), 0.5461, 5e-4);
+    // AR 10: 10^0.68 = 4.7863, 1 - 0.21538 = 0.78462, cos 40 deg^0.15 = 0.96081; 4.61 x 0.78462 x 0.96085 - 3.1 = 0.3753.
+    assertInDelta(oswaldSweptWing(10, 40 * deg), 0.3753, 5e-4);
+  });
+});

@@ -4,14 +4,17 @@ import { KNOT_MPS, PSF_PA } from '../../../core/units/factors';
 import { assertRelative } from '../helpers/asserts';
 
 describe('stallSpeed', () => {
-  it('gives 61 kt at the wing loading that 1/2 rho0 V^2 C_Lmax gives in US customary units', () => {
-    // 61 kt CAS (14 CFR 23.49(c), pre-Amdt 23-64, confirmed) with C_Lmax 2.0, worked in US units:
+  it('gives 61 kt at 25.195 lb/ft^2 with C_Lmax 2.0 (worked in US customary units)', () => {
+    // 61 kt CAS (14 CFR 23.49(c), pre-Amdt 23-64, confirmed) with C_Lmax 2.0, worked in US units by hand:
     // rho0 = 0.0023769 slug/ft^3 (Anderson, Introduction to Flight, App. B, standard sea level),
     // 61 kt = 102.956 ft/s, W/S = 0.5 x 0.0023769 x 102.956^2 x 2.0 = 25.195 lb/ft^2.
-    const speedFtS = (61 * 6076.12) / 3600;
-    const wingLoadingPsf = 0.5 * 0.0023769 * speedFtS * speedFtS * 2.0;
-    assertRelative(wingLoadingPsf, 25.195, 1e-4);
-    assertRelative(stallSpeed(wingLoadingPsf * PSF_PA, 1.225, 2.0), 61 * KNOT_MPS, 1e-4);
+    assertRelative(stallSpeed(25.195 * PSF_PA, 1.225, 2.0), 61 * KNOT_MPS, 1e-4);
+  });
+
+  it('gives 40 m/s at 1470 Pa with C_Lmax 1.5 at sea level, and 40/sqrt(0.5) m/s at half the density', () => {
+    // By hand: V_s = sqrt(2 x 1470 / (1.225 x 1.5)) = sqrt(1600) = 40 m/s; V scales as 1/sqrt(rho).
+    assertRelative(stallSpeed(1470, 1.225, 1.5), 40, 1e-12);
+    assertRelative(stallSpeed(1470, 0.6125, 1.5), 40 / Math.sqrt(0.5), 1e-12);
   });
 });
 

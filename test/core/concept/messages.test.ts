@@ -61,3 +61,24 @@ describe('plain numbers too large to compute with', () => {
     expect(issues[0].message).toMatch(/too large a number to compute with/);
   });
 });
+
+describe('a misspelt field', () => {
+  it('is reported before the missing field it was meant to be, with the nearest known name', () => {
+    // "aspectRatoi" is two transposed letters from "aspectRatio" (edit distance 2, Levenshtein 1966).
+    const concept = trainer();
+    concept.aircraft.aero.aspectRatoi = concept.aircraft.aero.aspectRatio;
+    delete concept.aircraft.aero.aspectRatio;
+    const issues = issuesOf(JSON.stringify(concept));
+    expect(issues.map((i) => i.path)).toEqual(['aircraft.aero.aspectRatoi', 'aircraft.aero.aspectRatio']);
+    expect(issues[0].message).toMatch(/did you mean "aspectRatio"\?/);
+    expect(issues[1].message).toMatch(/is required/);
+  });
+
+  it('keeps document order for an unknown field with no missing partner', () => {
+    const concept = trainer();
+    concept.aircraft.aero.aspectRatoi = 8;
+    concept.requirements[0].speeed = '40 kt';
+    const paths = issuesOf(JSON.stringify(concept)).map((i) => i.path);
+    expect(paths).toEqual(['aircraft.aero.aspectRatoi', 'requirements[0].speeed']);
+  });
+});

@@ -1,8 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { minimumPowerLiftCoefficient } from '../../../core/aero/lift-coefficients';
-import { dragCoefficient } from '../../../core/aero/drag-polar';
 import { atmosphere } from '../../../core/atmosphere';
-import { flightCondition } from '../../../core/constraints';
 import { ceilingBoundary } from '../../../core/constraints/ceiling';
 import { climbRateBoundary } from '../../../core/constraints/climb-rate';
 import { FOOT_PER_MINUTE_MPS } from '../../../core/units/factors';
@@ -22,15 +19,21 @@ describe('ceilingBoundary', () => {
     assertRelative(curve.required(4000), (2 * Math.sqrt(k * 0.02)) / atmosphere(12000).sigma, 1e-9);
   });
 
-  it('needs P/W = V_mp (C_D/C_L)_mp / (eta alpha) at the absolute ceiling of a propeller', () => {
-    // Absolute ceiling of a propeller aircraft at minimum power required (Anderson, Introduction to Flight, from memory).
+  it('needs P/W = V_mp (C_D/C_L)_mp / eta at the absolute ceiling of an electric aircraft (alpha = 1)', () => {
+    // Absolute ceiling at minimum power required: with C_D = C_D0 + K C_L^2, C_L,mp = sqrt(3 C_D0/K) and
+    // C_D,mp = 4 C_D0 (Anderson, Introduction to Flight, from memory); P/W = V C_D/C_L / eta.
+    // Density at 6000 m by hand from the standard troposphere (U.S. Standard Atmosphere 1976):
+    // T = 288.15 - 0.0065 x 6000 = 249.15 K, rho = 1.2250 (249.15/288.15)^4.25588 = 0.65970 kg/m^3.
     const electric = aircraft({ kind: 'electric', aspectRatio: 8, clean });
-    const requirement = ceiling(6000, { rateMps: 0 });
-    const curve = curveOf(ceilingBoundary(requirement, electric));
-    const c = flightCondition(requirement, electric);
-    const cl = minimumPowerLiftCoefficient(c.polar);
-    const v = Math.sqrt((2 * 800) / (c.densityKgM3 * cl));
-    assertRelative(curve.required(800), (v * dragCoefficient(c.polar, cl)) / cl / 0.75, 1e-12);
+    const curve = curveOf(ceilingBoundary(ceiling(6000, { rateMps: 0 }), electric));
+    const rho = 1.225 * Math.pow(249.15 / 288.15, 4.25588);
+    assertRelative(rho, 0.6597, 1e-4);
+    const k = 1 / (Math.PI * 0.8 * 8);
+    const cl = Math.sqrt((3 * 0.02) / k);
+    for (const w of [400, 800, 1600]) {
+      const v = Math.sqrt((2 * w) / (rho * cl));
+      assertRelative(curve.required(w), (v * 4 * 0.02) / cl / 0.75, 1e-5, `w ${w}`);
+    }
   });
 
   it('is the 100 ft/min climb at the ceiling altitude at the best-rate speed', () => {
@@ -41,9 +44,14 @@ describe('ceilingBoundary', () => {
     for (const w of [800, 1600, 2400]) expect(atCeiling.required(w)).toBe(asClimb.required(w));
   });
 
-  it('cannot be met where a piston engine has no power left', () => {
-    // Gagg-Ferrar reaches zero at sigma = 0.117, about 20 km.
-    const curve = curveOf(ceilingBoundary(ceiling(21000), aircraft()));
-    expect(curve.required(700)).toBeNaN();
+  it('cannot be met where a piston engine has no power left, from 16.93 km', () => {
+    // Gagg-Ferrar, alpha = 1.132 sigma - 0.132 (Gudmundsson, from memory), is zero at sigma = 0.132/1.132 = 0.11661.
+    // Standard stratosphere (U.S. Standard Atmosphere 1976), 11-20 km isothermal at 216.65 K:
+    // sigma = 0.29708 exp(-g0 (h - 11000)/(R 216.65)), R T/g0 = 287.053 x 216.65/9.80665 = 6341.6 m, so
+    // h = 11000 + 6341.6 ln(0.29708/0.11661) = 11000 + 6341.6 x 0.93517 = 16930 m.
+    const at = (altitudeM: number) => curveOf(ceilingBoundary(ceiling(altitudeM), aircraft())).required(700);
+    expect(at(16850)).toBeGreaterThan(0);
+    expect(at(17010)).toBeNaN();
+    expect(at(21000)).toBeNaN();
   });
 });

@@ -37,3 +37,22 @@ describe('landingGroundRollBoundary', () => {
     assertRelative(limitOf(landingGroundRollBoundary(landingRoll(450, { massFraction: 0.9 }), aircraft())), base / 0.9, 1e-15);
   });
 });
+
+describe('landingGroundRollBoundary with a free roll', () => {
+  it('leaves room for t_fr of free roll: V_TD t_fr + V_TD^2/(2 mu_B g0) = S at the limit', () => {
+    // Kinematics: free roll at V_TD for t_fr, then braking at a = mu_B g0; V_TD = 1.15 V_s (Raymer, from memory).
+    const w = limitOf(landingGroundRollBoundary(landingRoll(450, { freeRollTimeS: 3 }), aircraft()));
+    const touchdown = 1.15 * Math.sqrt((2 * w) / (1.225 * 2.1));
+    // rho0 = 1.2250 kg/m^3 to 5 figures (U.S. Standard Atmosphere 1976): 1e-4 on a distance.
+    assertRelative(touchdown * 3 + (touchdown * touchdown) / (2 * 0.3 * G0), 450, 1e-4);
+  });
+
+  it('is 1830.4 Pa for 450 m, mu_B 0.3, 3 s free roll, C_Lmax 2.1 at sea level (worked by hand)', () => {
+    // a = 2.941995 m/s^2, a t = 8.825985; V_TD = -8.825985 + sqrt(77.8980 + 2647.7955) = 43.3822 m/s;
+    // V_s = 43.3822/1.15 = 37.7236 m/s; w = 0.5 x 1.225 x 2.1 x 37.7236^2 = 1830.43 Pa.
+    const w = limitOf(landingGroundRollBoundary(landingRoll(450, { freeRollTimeS: 3 }), aircraft()));
+    const noFreeRoll = limitOf(landingGroundRollBoundary(landingRoll(450), aircraft()));
+    assertRelative(w, 1830.43, 1e-5);
+    expect(w).toBeLessThan(noFreeRoll);
+  });
+});

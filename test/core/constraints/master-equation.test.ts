@@ -82,3 +82,29 @@ describe('sustainedTurnBoundary', () => {
     expect(curve.required(wAtClMax * 1.001)).toBeNaN();
   });
 });
+
+describe('sustainedTurnBoundary with a linear drag term', () => {
+  it('needs T/W = n C_D/C_L with C_D = C_D0 + K1 C_L + K C_L^2 at C_L = n w/q (n = 2, K1 = -0.01)', () => {
+    // Level turn: L = nW, T = D, so T/W = n D/L = n C_D/C_L (Anderson, Introduction to Flight, turning flight);
+    // the linear term therefore costs n K1 (Mattingly's master equation carries K1 n, not K1).
+    const linear = aircraft({ kind: 'turbofan', engines: 2, aspectRatio: 8, cdLinear: -0.01, clean: { cd0: 0.022, oswaldEfficiency: 0.8, clMax: 1.5 } });
+    const n = 2;
+    const curve = curveOf(sustainedTurnBoundary(sustainedTurn(120, n), linear));
+    const k = 1 / (Math.PI * 0.8 * 8);
+    for (const w of [1500, 2500, 3500]) {
+      const q = 0.5 * 1.225 * 120 * 120;
+      const cl = (n * w) / q;
+      const cd = 0.022 - 0.01 * cl + k * cl * cl;
+      // rho0 = 1.2250 kg/m^3 (U.S. Standard Atmosphere 1976), to 5 figures: 1e-6.
+      assertRelative(curve.required(w), (n * cd) / cl, 1e-6, `w ${w}`);
+    }
+  });
+
+  it('shifts the turn boundary by n K1 exactly', () => {
+    const polar = (cdLinear: number) => aircraft({ kind: 'turbofan', aspectRatio: 8, cdLinear, clean: { cd0: 0.022, oswaldEfficiency: 0.8, clMax: 1.5 } });
+    const n = 2.5;
+    const withK1 = curveOf(sustainedTurnBoundary(sustainedTurn(150, n), polar(-0.012))).required(2000);
+    const without = curveOf(sustainedTurnBoundary(sustainedTurn(150, n), polar(0))).required(2000);
+    assertRelative(withK1 - without, n * -0.012, 1e-9);
+  });
+});

@@ -94,11 +94,19 @@ describe('evaluateDesign', () => {
   });
 
   it('sizes at the optimum when there is no design point, per engine for a twin', () => {
-    const e = evaluateDesign(BUSINESS_JET);
-    const weight = 9000 * G0;
-    assertRelative(e.sizing!.wingArea, weight / e.optimum!.wingLoading, 1e-12);
-    assertRelative(e.sizing!.thrust!, (e.optimum!.thrustToWeight as number) * weight, 1e-12);
-    assertRelative(e.sizing!.perEngine!, e.sizing!.thrust! / 2, 1e-12);
+    // Worked by hand: a twin jet with a 40 m/s clean stall (C_Lmax 1.5) and a 100 m/s sea-level cruise.
+    // Stall: w = 0.5 x 1.225 x 40^2 x 1.5 = 1470 Pa. Cruise at 1470 Pa: q = 0.5 x 1.225 x 100^2 = 6125 Pa,
+    // C_L = 0.24, below C_L,md = sqrt(C_D0/K) = 0.75, so T/W = C_D/C_L falls with w and the optimum is the
+    // stall limit; K = 1/(pi 0.8 7.5) = 0.053052, C_D = 0.03 + 0.053052 x 0.0576 = 0.033056, T/W = 0.13773.
+    // S = m g0/w = 5000 x 9.80665/1470 = 33.356 m^2; T = 0.137732 x 49033.25 = 6753.47 N, 3376.73 N per engine.
+    const jet = aircraft({ kind: 'turbofan', engines: 2, takeoffMassKg: 5000 });
+    const e = evaluateDesign(design({ aircraft: jet, requirements: [stall(40, { configuration: 'clean' }), cruise(100)], rangePa: [500, 3000] }));
+    // rho0 = 1.2250 kg/m^3 to 5 figures (U.S. Standard Atmosphere 1976).
+    assertRelative(e.optimum!.wingLoading, 1470, 1e-6);
+    assertRelative(e.optimum!.thrustToWeight as number, 0.13773, 1e-4);
+    assertRelative(e.sizing!.wingArea, 33.3560, 1e-5);
+    assertRelative(e.sizing!.thrust!, 6753.47, 1e-5);
+    assertRelative(e.sizing!.perEngine!, 3376.73, 1e-5);
   });
 
   it('reports sea-level EAS speeds at the design point wing loading, with the approach at 1.3 V_s landing', () => {
@@ -111,11 +119,19 @@ describe('evaluateDesign', () => {
   });
 
   it('marks the design point feasible only when every margin is met', () => {
-    const infeasible = evaluateDesign(TRAINER).designPoint!;
-    expect(infeasible.feasible).toBe(infeasible.margins.every((m) => m.margin >= 0));
-    const optimum = evaluateDesign(TRAINER).optimum!;
-    const atOptimum = evaluateDesign({ ...TRAINER, designPoint: { wingLoadingPa: optimum.wingLoading, loading: (optimum.powerToWeight as number) * 1.01 } });
-    expect(atOptimum.designPoint!.feasible).toBe(true);
+    // The trainer's design point, 600 Pa and 9 W/N, is below its 110 kt cruise at 6,000 ft (the demo's
+    // starting point before sizing): the cruise margin is negative, so the point is not feasible.
+    const trainerPoint = evaluateDesign(TRAINER).designPoint!;
+    expect(trainerPoint.margins.find((m) => m.id === 'cruise')!.margin).toBeLessThan(0);
+    expect(trainerPoint.feasible).toBe(false);
+    // Hand-worked limits (stall 1470 Pa as above, cruise T/W 0.13773 there): 1 % inside both is feasible,
+    // 1 % outside either is not.
+    const jet = aircraft({ kind: 'turbofan', engines: 2, takeoffMassKg: 5000 });
+    const at = (wingLoadingPa: number, loading: number) =>
+      evaluateDesign(design({ aircraft: jet, requirements: [stall(40, { configuration: 'clean' }), cruise(100)], rangePa: [500, 3000], designPoint: { wingLoadingPa, loading } })).designPoint!;
+    expect(at(1470 * 0.99, 0.145).feasible).toBe(true);
+    expect(at(1470 * 1.01, 0.145).feasible).toBe(false);
+    expect(at(1470 * 0.99, 0.13).feasible).toBe(false);
   });
 
   it('gives a curve margin of -1 where the curve cannot be met', () => {
@@ -155,9 +171,16 @@ describe('evaluateDesign', () => {
     expect(limit && 'wingLoadingMax' in limit ? limit.wingLoadingMax : NaN).toBe(e.optimum!.wingLoading);
   });
 
-  it('uses a fallback aircraft configuration without failing', () => {
-    const d = design({ aircraft: aircraft(), requirements: [cruise(50, { configuration: 'ferry' })], rangePa: [200, 1500] });
-    expect(() => evaluateDesign(d)).not.toThrow();
+  it('falls back to the clean polar for a configuration the aircraft does not define, and warns', () => {
+    // By hand for the clean polar (C_D0 0.03, e 0.8, AR 7.5) at 50 m/s, sea level, w = 1000 Pa:
+    // q = 1531.25 Pa, C_L = 0.65306, C_D = 0.03 + 0.053052 x 0.42649 = 0.052626, T/W = 0.080584,
+    // shaft P/W = T/W x V/eta = 0.080584 x 50/0.8 = 5.0365 W/N.
+    const d = design({ aircraft: aircraft(), requirements: [cruise(50, { configuration: 'ferry' })], rangePa: [1000, 1500], samples: 11 });
+    const e = evaluateDesign(d);
+    const [curve] = curves(e);
+    // rho0 = 1.2250 kg/m^3 to 5 figures (U.S. Standard Atmosphere 1976).
+    assertRelative(curve.points[0][1] as number, 5.0365, 1e-4);
+    expect(e.warnings.some((w) => w.field.startsWith('requirements[0]'))).toBe(true);
   });
 });
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { findOptimum, sampleWingLoadings, envelopeAt, type RequiredLoading } from '../../../core/diagram';
+import { evaluateDesign, findOptimum, sampleWingLoadings, envelopeAt, type RequiredLoading } from '../../../core/diagram';
+import { aircraft, ceiling, design, stall } from '../helpers/design';
 import { assertRelative } from '../helpers/asserts';
 
 // Analytic envelopes whose minimum is known in closed form; 0.1 % in wing loading is the spec (DESIGN.md).
@@ -73,4 +74,25 @@ describe('findOptimum', () => {
   it('sits on the tightest limit with zero loading when no curve is given', () => {
     expect(findOptimum([], 900, [100, 1500])).toEqual({ wingLoadingPa: 900, loading: 0, unbounded: false });
   });
+});
+
+describe('the optimum on a flat jet boundary against a stall limit', () => {
+  // A jet's absolute ceiling (RC = 0) needs T_SL/W = 2 sqrt(K C_D0)/sigma at every wing loading
+  // (Anderson, Introduction to Flight, from memory): a flat boundary, which rounding makes wobble by
+  // about 1e-16. The tie rule (core/methods.md section 7: ties go to the largest wing loading) puts the
+  // optimum on the stall limit, w = 1/2 rho0 V^2 C_Lmax = 0.5 x 1.225 x 40^2 x 3 = 2940 Pa.
+  const jet = aircraft({ kind: 'turbofan', engines: 2, clean: { cd0: 0.02, oswaldEfficiency: 0.8, clMax: 3 } });
+  for (const samples of [101, 333, 400]) {
+    it(`sits on the stall limit with ${samples} samples`, () => {
+      const d = design({ aircraft: jet, requirements: [stall(40, { configuration: 'clean' }), ceiling(11000, { rateMps: 0 })], rangePa: [200, 6000], samples });
+      const e = evaluateDesign(d);
+      // rho0 = 1.2250 kg/m^3 to 5 figures (U.S. Standard Atmosphere 1976).
+      assertRelative(e.optimum!.wingLoading, 2940, 1e-6);
+      const limit = e.boundaries.find((b) => b.id === 'stall');
+      expect(limit && 'wingLoadingMax' in limit ? limit.wingLoadingMax : NaN).toBe(e.optimum!.wingLoading);
+      // sigma at 11 km = 0.29708 (U.S. Standard Atmosphere 1976 table, from memory); K = 1/(pi 0.8 7.5).
+      const k = 1 / (Math.PI * 0.8 * 7.5);
+      assertRelative(e.optimum!.thrustToWeight as number, (2 * Math.sqrt(k * 0.02)) / 0.29708, 1e-4);
+    });
+  }
 });

@@ -1,20 +1,29 @@
 /**
  * fast-check generators of valid resolved Designs, with values across and a
- * little beyond core/methods.md section 9's typical ranges.
+ * little beyond core/methods.md section 9's typical ranges. The linear drag
+ * term and the ground-run lift coefficient span what the concept format
+ * accepts; `anyDesignArb` may be physically impossible, `designArb` keeps only
+ * the designs the concept reader accepts (no impossible input).
  */
 import fc from 'fast-check';
 import type { Design, PropulsionKind, Requirement } from '../../../core/model';
+import { impossibleInputs, minimumDragCoefficient, polarOf, type Polar } from '../../../core/diagram';
 import { aircraft, ceiling, climbGradient, climbRate, cruise, design, landingRoll, maximumSpeed, stall, sustainedTurn, takeoffDistance, takeoffRoll, balancedField, landingDistance, approachSpeed } from '../helpers/design';
+
+/** Evenly spread over [min, max] (fc.double spreads over the bit patterns, so mostly near zero). */
+const evenly = (min: number, max: number): fc.Arbitrary<number> =>
+  fc.noBias(fc.integer({ min: 0, max: 1_000_000 })).map((i) => min + ((max - min) * i) / 1_000_000);
 
 const kinds: PropulsionKind[] = ['piston', 'turbocharged-piston', 'turboprop', 'turbofan', 'electric'];
 
-export const aircraftArb = fc
+/** Any aircraft, with polars possible or not. */
+export const anyAircraftArb = fc
   .record({
     kind: fc.constantFrom(...kinds),
     engines: fc.integer({ min: 1, max: 4 }),
     takeoffMassKg: fc.double({ min: 20, max: 60000, noNaN: true }),
     aspectRatio: fc.double({ min: 4, max: 20, noNaN: true }),
-    cdLinear: fc.double({ min: -0.01, max: 0.01, noNaN: true }),
+    cdLinear: fc.oneof(fc.double({ min: -0.01, max: 0.01, noNaN: true }), evenly(-0.2, 0.2)),
     cd0: fc.double({ min: 0.012, max: 0.05, noNaN: true }),
     e: fc.double({ min: 0.65, max: 0.95, noNaN: true }),
     clMax: fc.double({ min: 1.0, max: 1.8, noNaN: true }),
@@ -42,6 +51,11 @@ export const aircraftArb = fc
     }),
   );
 
+/** Aircraft whose every polar has a positive least drag, C_D0 - K1^2/(4K) > 0 (what the concept reader accepts). */
+export const aircraftArb = anyAircraftArb.filter((a) =>
+  Object.keys(a.configurations).every((name) => minimumDragCoefficient(polarOf(a, name) as Polar) > 0),
+);
+
 const common = {
   altitudeM: fc.double({ min: 0, max: 3000, noNaN: true }),
   temperatureOffsetK: fc.double({ min: -20, max: 35, noNaN: true }),
@@ -56,8 +70,14 @@ export function requirementArb(engines: number): fc.Arbitrary<Requirement> {
     fc.record({ v: fc.double({ min: 15, max: 60, noNaN: true }), ...common }).map(({ v, ...c }) => stall(v, { ...c })),
     fc.record({ d: fc.double({ min: 150, max: 2000, noNaN: true }), ...common }).map(({ d, ...c }) => landingRoll(d, c)),
     fc
-      .record({ d: fc.double({ min: 40, max: 2500, noNaN: true }), mu: fc.double({ min: 0.02, max: 0.12, noNaN: true }), ...common })
-      .map(({ d, mu, ...c }) => takeoffRoll(d, { ...c, rollingFriction: mu })),
+      .record({
+        d: fc.double({ min: 40, max: 2500, noNaN: true }),
+        mu: fc.double({ min: 0, max: 0.5, noNaN: true }),
+        clg: fc.oneof(fc.double({ min: 0, max: 0.8, noNaN: true }), evenly(0, 3.5)),
+        kLof: fc.double({ min: 1, max: 1.6, noNaN: true }),
+        ...common,
+      })
+      .map(({ d, mu, clg, kLof, ...c }) => takeoffRoll(d, { ...c, rollingFriction: mu, clGroundRun: clg, liftoffSpeedFactor: kLof })),
     fc
       .record({ v: fc.double({ min: 20, max: 260, noNaN: true }), h: fc.double({ min: 0, max: 12000, noNaN: true }), ...common })
       .map(({ v, h, ...c }) => cruise(v, { ...c, altitudeM: h })),
@@ -83,7 +103,8 @@ export function requirementArb(engines: number): fc.Arbitrary<Requirement> {
   );
 }
 
-export const designArb: fc.Arbitrary<Design> = aircraftArb.chain((ac) =>
+/** Any design the generators make, possible or not. */
+export const anyDesignArb: fc.Arbitrary<Design> = anyAircraftArb.chain((ac) =>
   fc
     .record({
       requirements: fc.array(requirementArb(ac.propulsion.engines), { minLength: 1, maxLength: 8 }),
@@ -105,3 +126,6 @@ export const designArb: fc.Arbitrary<Design> = aircraftArb.chain((ac) =>
       }),
     ),
 );
+
+/** The designs the concept reader accepts: no impossible input. */
+export const designArb: fc.Arbitrary<Design> = anyDesignArb.filter((d) => impossibleInputs(d).length === 0);

@@ -1,0 +1,17 @@
+import { defineConfig } from 'vitest/config';
+
+// The engine tests only, for mutation testing of core/: they import core/
+// in-process, so a mutant is seen by the test that covers it. The CLI tests
+// start child processes, which never see the active mutant.
+// LOFTPOINT_MUTATION_ENGINE=1 leaves out the concept and studies tests (the
+// slowest, and aimed at core/concept and core/studies) for runs on the engine
+// folders only: core/constraints, core/diagram, core/aero, core/propulsion, core/atmosphere.ts.
+const engineOnly = process.env.LOFTPOINT_MUTATION_ENGINE === '1';
+
+export default defineConfig({
+  test: {
+    include: ['test/core/**/*.test.ts'],
+    exclude: ['node_modules/**', ...(engineOnly ? ['test/core/studies/**', 'test/core/concept/**'] : [])],
+    testTimeout: 60_000,
+  },
+});
