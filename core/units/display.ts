@@ -38,29 +38,27 @@ interface DisplayUnit {
   digits: number;
 }
 
+/** SI everywhere. */
+const SI_DISPLAY: Record<DisplayQuantity, DisplayUnit> = {
+  wingLoading: { unit: 'N/m²', fromSi: 1, digits: 0 },
+  powerToWeight: { unit: 'W/N', fromSi: 1, digits: 2 },
+  thrustToWeight: { unit: '', fromSi: 1, digits: 3 },
+  area: { unit: 'm²', fromSi: 1, digits: 2 },
+  power: { unit: 'kW', fromSi: 1e-3, digits: 1 },
+  thrust: { unit: 'kN', fromSi: 1e-3, digits: 2 },
+  speed: { unit: 'm/s', fromSi: 1, digits: 1 },
+  mass: { unit: 'kg', fromSi: 1, digits: 0 },
+  length: { unit: 'm', fromSi: 1, digits: 0 },
+  altitude: { unit: 'm', fromSi: 1, digits: 0 },
+  climbRate: { unit: 'm/s', fromSi: 1, digits: 2 },
+};
+
 const DISPLAY: Record<UnitSystem, Record<DisplayQuantity, DisplayUnit>> = {
-  si: {
-    wingLoading: { unit: 'N/m²', fromSi: 1, digits: 0 },
-    powerToWeight: { unit: 'W/N', fromSi: 1, digits: 2 },
-    thrustToWeight: { unit: '', fromSi: 1, digits: 3 },
-    area: { unit: 'm²', fromSi: 1, digits: 2 },
-    power: { unit: 'kW', fromSi: 1e-3, digits: 1 },
-    thrust: { unit: 'kN', fromSi: 1e-3, digits: 2 },
-    speed: { unit: 'm/s', fromSi: 1, digits: 1 },
-    mass: { unit: 'kg', fromSi: 1, digits: 0 },
-    length: { unit: 'm', fromSi: 1, digits: 0 },
-    altitude: { unit: 'm', fromSi: 1, digits: 0 },
-    climbRate: { unit: 'm/s', fromSi: 1, digits: 2 },
-  },
+  si: SI_DISPLAY,
+  // The working mix of design offices: knots, feet and ft/min; SI for mass, area, force and power.
   'kt-ft': {
-    wingLoading: { unit: 'N/m²', fromSi: 1, digits: 0 },
-    powerToWeight: { unit: 'W/N', fromSi: 1, digits: 2 },
-    thrustToWeight: { unit: '', fromSi: 1, digits: 3 },
-    area: { unit: 'm²', fromSi: 1, digits: 2 },
-    power: { unit: 'kW', fromSi: 1e-3, digits: 1 },
-    thrust: { unit: 'kN', fromSi: 1e-3, digits: 2 },
+    ...SI_DISPLAY,
     speed: { unit: 'kt', fromSi: 1 / KNOT_MPS, digits: 0 },
-    mass: { unit: 'kg', fromSi: 1, digits: 0 },
     length: { unit: 'ft', fromSi: 1 / FOOT_M, digits: 0 },
     altitude: { unit: 'ft', fromSi: 1 / FOOT_M, digits: 0 },
     climbRate: { unit: 'ft/min', fromSi: 1 / FOOT_PER_MINUTE_MPS, digits: 0 },
