@@ -103,5 +103,50 @@ export interface Evaluation {
   designPoint?: DesignPointJson;
   speeds: SpeedsJson;
   sizing: SizingJson | null;
+  /** The take-off mass closed from the mission; present only when the concept has a mission that closes. */
+  mass?: MassJson;
   warnings: WarningJson[];
+}
+
+/** One mission segment as flown in the weight closure. Null where the segment has no such quantity. */
+export interface MassSegmentJson {
+  kind: 'takeoff-climb' | 'climb' | 'cruise' | 'loiter' | 'descent-landing' | 'reserve';
+  /** Mass at the end over mass at the start (fuel aircraft; 1 for a battery aircraft, which burns nothing). */
+  massFraction: number | null;
+  /** Fuel burnt in the segment [kg]; null for a battery aircraft. */
+  fuel: number | null;
+  /** Battery energy drawn in the segment [J]; null for a fuel aircraft. */
+  energy: number | null;
+  /** Lift-to-drag ratio flown, from the concept's own polar; null where the segment uses a published fraction. */
+  liftToDrag: number | null;
+  /** True airspeed [m/s]. */
+  speed: number | null;
+  /** Pressure altitude [m]. */
+  altitude: number | null;
+}
+
+/** What moves the take-off mass: % change of take-off mass per % change of an input. */
+export interface MassDriverJson {
+  /** Concept path, e.g. `mission.payload`, `mission.segments[2].range`. */
+  field: string;
+  /** In plain words. */
+  name: string;
+  elasticity: number;
+}
+
+/** The take-off mass closed from the mission (present only when the concept has a mission). SI: kg. */
+export interface MassJson {
+  takeoff: number;
+  empty: number;
+  fuel: number;
+  battery: number;
+  payload: number;
+  crew: number;
+  emptyFraction: number;
+  /** d(take-off mass)/d(payload), dimensionless. */
+  growthFactor: number;
+  /** Closure function evaluations of the root finder. */
+  iterations: number;
+  segments: MassSegmentJson[];
+  drivers: MassDriverJson[];
 }

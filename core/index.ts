@@ -45,3 +45,7 @@ export {
 export * from './concept';
 export * from './diagram';
 export * from './studies';
+
+export { AIRCRAFT_CLASSES, AIRCRAFT_CLASS_TITLES, defaultAircraftClass, type AircraftClass } from './mission/aircraft-class';
+export { MISSION_SEGMENT_KINDS, type MissionJson, type MissionSegmentJson, type MissionSegmentKind } from './concept/mission-schema';
+export type { Mission, MissionSegment, MissionEnergy } from './mission/mission';

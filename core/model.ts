@@ -14,6 +14,7 @@ export { loadingAxis, type Aircraft, type ConfigurationPolar, type LoadingAxis, 
 export { PROPULSION_KINDS } from './propulsion/kinds';
 export { REQUIREMENT_KINDS, type Requirement, type RequirementKind, type RequirementCommon } from './requirements';
 import type { Aircraft } from './aircraft';
+import type { Mission } from './mission/mission';
 
 export interface DesignPoint {
   wingLoadingPa: number;
@@ -32,6 +33,8 @@ export interface Design {
     samples: number;
   };
   designPoint?: DesignPoint;
+  /** The mission the take-off mass is closed from (core/mission); absent: aircraft.takeoffMassKg as given. */
+  mission?: Mission;
   /** Notes from resolving the concept (a defaulted configuration that fell back to clean, an ignored field). */
   warnings?: WarningJson[];
 }

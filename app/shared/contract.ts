@@ -123,6 +123,8 @@ export interface EvaluationSummary {
   designPoint: (LoadingPoint & { feasible: boolean; margins: MarginValue[] }) | null;
   /** At the design point (the optimum when none): wing area m^2, power W or thrust N. */
   sizing: { wingArea: number; power?: number; thrust?: number } | null;
+  /** The take-off mass closed from the mission [kg]; absent without a mission or when it does not close. */
+  mass?: { takeoff: number; empty: number; fuel: number; battery: number; payload: number; crew: number };
   /** Characteristic speeds (m/s EAS) at that wing loading. */
   speeds: { stall: number; minimumDrag: number; minimumPower: number } | null;
   warningCount: number;
@@ -426,3 +428,5 @@ export type RemoteService = {
 
 /** The preliminary-sizing caution every human-readable output carries. */
 export { PRELIMINARY_CAUTION } from '../../core/caution';
+/** The evaluation's `mass` object (loftpoint-evaluation/1), for panels that show the closed mass. */
+export type { MassJson, MassSegmentJson, MassDriverJson } from '../../core/evaluation';

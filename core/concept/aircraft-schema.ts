@@ -61,7 +61,8 @@ export const propulsionShape = {
 };
 
 export const aircraftShape = {
-  takeoffMass: quantityField('mass', { above: 0 }),
+  /** Required without a mission; with one, a starting guess the closed mass replaces (checks.ts). */
+  takeoffMass: quantityField('mass', { above: 0 }).optional(),
   aero: z.strictObject(aeroShape),
   propulsion: z.strictObject(propulsionShape),
 };

@@ -1,13 +1,14 @@
 /**
  * Rules that join fields, run once every field is valid on its own:
  * unique ids, configurations that exist, engine counts, the design point's
- * axis, and the diagram range.
+ * axis, the diagram range, and the mission (mission-checks.ts).
  */
 import { loadingAxis } from '../aircraft';
 import { propulsionKind } from '../propulsion/kinds';
 import { requirementKind } from '../requirements';
 import { parseQuantity } from '../units/quantity';
 import { DEFAULT_ENGINES } from './defaults';
+import { missionIssues } from './mission-checks';
 import type { ConceptIssue } from './format';
 import type { ConceptJson, RequirementJson } from './schema';
 
@@ -82,5 +83,11 @@ function designPointIssues(concept: ConceptJson): ConceptIssue[] {
 
 /** Problems that only show when fields are read together; empty when there are none. */
 export function checkConcept(concept: ConceptJson): ConceptIssue[] {
-  return [...aircraftIssues(concept), ...requirementIssues(concept), ...diagramIssues(concept), ...designPointIssues(concept)];
+  return [
+    ...aircraftIssues(concept),
+    ...requirementIssues(concept),
+    ...diagramIssues(concept),
+    ...designPointIssues(concept),
+    ...missionIssues(concept),
+  ];
 }

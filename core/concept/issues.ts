@@ -6,6 +6,7 @@
 import type { z } from 'zod';
 import { PROPULSION_KINDS, REQUIREMENT_KINDS } from '../model';
 import { fieldPath, type ConceptIssue } from './format';
+import { MISSION_SEGMENT_KINDS } from './mission-schema';
 import { fieldsAt, kindsWithField } from './fields';
 import { closestName } from './suggest';
 import { shortened } from '../shortened';
@@ -47,12 +48,20 @@ function unknownField(path: readonly PropertyKey[], key: string, document: unkno
   return here ? `unknown field; fields here: ${here.join(', ')}` : 'unknown field';
 }
 
-function discriminatorMessage(issue: Extract<ZodIssue, { code: 'invalid_union' }>): string {
+/** The kinds a `kind` field may take where it stands, and what they are called. */
+function kindsAt(path: readonly PropertyKey[]): { what: string; kinds: readonly string[] } {
+  if (path[0] === 'mission' && path[1] === 'segments') return { what: 'mission segment kind', kinds: MISSION_SEGMENT_KINDS };
+  if (path[0] === 'mission' && path[1] === 'energy') return { what: 'energy kind', kinds: ['fuel', 'battery'] };
+  return { what: 'requirement kind', kinds: REQUIREMENT_KINDS };
+}
+
+function discriminatorMessage(issue: Extract<ZodIssue, { code: 'invalid_union' }>, path: readonly PropertyKey[]): string {
   const written = (issue.input as Record<string, unknown> | undefined)?.kind;
-  const expected = REQUIREMENT_KINDS.join(', ');
+  const { what, kinds } = kindsAt(path);
+  const expected = kinds.join(', ');
   if (written === undefined) return `is required; one of ${expected}`;
-  const guess = typeof written === 'string' ? closestName(written, REQUIREMENT_KINDS) : undefined;
-  return `unknown requirement kind ${show(written)}; expected one of ${expected}${guess ? ` (did you mean "${guess}"?)` : ''}`;
+  const guess = typeof written === 'string' ? closestName(written, kinds) : undefined;
+  return `unknown ${what} ${show(written)}; expected one of ${expected}${guess ? ` (did you mean "${guess}"?)` : ''}`;
 }
 
 function limitMessage(issue: Extract<ZodIssue, { code: 'too_small' | 'too_big' }>, path: readonly PropertyKey[]): string {
@@ -86,7 +95,7 @@ function messageFor(issue: ZodIssue, path: readonly PropertyKey[]): string {
     case 'too_big':
       return limitMessage(issue, path);
     case 'invalid_union':
-      return issue.discriminator === 'kind' ? discriminatorMessage(issue) : 'does not match any accepted form';
+      return issue.discriminator === 'kind' ? discriminatorMessage(issue, path) : 'does not match any accepted form';
     case 'invalid_value': {
       const isPropulsion = path.join('/') === 'aircraft/propulsion/kind';
       if (isPropulsion && issue.input === undefined) return `is missing; give the propulsion kind, one of ${issue.values.map((v) => String(v)).join(', ')}`;

@@ -8,6 +8,7 @@ import { PROPULSION_DESCRIPTORS, propulsionKind } from '../propulsion/kinds';
 import { DEFAULT_THROTTLE_RATIO } from '../propulsion/turbine-lapse';
 import { quantity } from '../units/quantity';
 import { DEFAULT_CD0_INCREMENT, DEFAULT_CD_LINEAR, DEFAULT_CONCEPT_NAME, DEFAULT_ENGINES, DEFAULT_SAMPLES } from './defaults';
+import { resolveMission } from './resolve-mission';
 import { resolveRequirement } from './resolve-requirement';
 import type { ConceptJson } from './schema';
 
@@ -41,7 +42,7 @@ function kindsWith(test: (d: (typeof PROPULSION_DESCRIPTORS)[number]) => boolean
     .join(joiner);
 }
 
-function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircraft {
+function resolveAircraft(aircraft: AircraftJson, takeoffMassKg: number, warnings: WarningJson[]): Aircraft {
   const { kind, engines, lapseExponent, criticalAltitude, throttleRatio } = aircraft.propulsion;
   const descriptor = propulsionKind(kind);
   // A file that states an exponent keeps the density model it was written for.
@@ -75,7 +76,7 @@ function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircr
     });
   }
   return {
-    takeoffMassKg: quantity(aircraft.takeoffMass, 'mass'),
+    takeoffMassKg,
     aspectRatio: aircraft.aero.aspectRatio,
     cdLinear: aircraft.aero.cdLinear ?? DEFAULT_CD_LINEAR,
     ...(aircraft.aero.thicknessRatio !== undefined
@@ -124,9 +125,13 @@ function propellerEfficiencyWarnings(concept: ConceptJson): WarningJson[] {
 /** The design and the notes made while resolving it. The concept must have passed the schema and checkConcept. */
 export function resolveConcept(concept: ConceptJson): { design: Design; warnings: WarningJson[] } {
   const warnings: WarningJson[] = [];
-  const aircraft = resolveAircraft(concept.aircraft, warnings);
+  const given = concept.aircraft.takeoffMass;
+  const aircraft = resolveAircraft(concept.aircraft, given !== undefined ? quantity(given, 'mass') : NaN, warnings);
   const names = Object.keys(aircraft.configurations);
   const requirements = concept.requirements.map((r, i) => resolveRequirement(r, i, names, warnings));
+  const mission = resolveMission(concept, requirements, warnings);
+  // Without a mission checkConcept made sure the mass is written; with one, a guess stands until the mass closes.
+  if (mission && given === undefined) aircraft.takeoffMassKg = mission.startingMassKg;
   warnings.push(...propellerEfficiencyWarnings(concept));
   const range = concept.diagram?.wingLoading;
   const designPoint = resolveDesignPoint(concept);
@@ -139,6 +144,7 @@ export function resolveConcept(concept: ConceptJson): { design: Design; warnings
       samples: concept.diagram?.samples ?? DEFAULT_SAMPLES,
     },
     ...(designPoint ? { designPoint } : {}),
+    ...(mission ? { mission } : {}),
     warnings: [...warnings],
   };
   return { design, warnings };

@@ -6,6 +6,7 @@
  */
 import { z } from 'zod';
 import { aircraftSchema } from './aircraft-schema';
+import { missionSchema } from './mission-schema';
 import { CONCEPT_FORMAT } from './format';
 import { quantityField, ratioField } from './quantity-field';
 import { requirementSchema } from './requirement-schema';
@@ -31,6 +32,8 @@ export const conceptShape = {
   requirements: z.array(requirementSchema).min(1),
   diagram: z.strictObject(diagramShape).optional(),
   designPoint: z.strictObject(designPointShape).optional(),
+  /** The mission the take-off mass is closed from (mission-schema.ts). */
+  mission: missionSchema.optional(),
   /** Ranges on assumptions for trade studies (core/studies/uncertainty-schema.ts). */
   uncertainty: uncertaintySchema.optional(),
 };

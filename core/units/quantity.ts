@@ -29,7 +29,10 @@ export type Dimension =
   | 'wingLoading'
   | 'powerToWeight'
   | 'thrustToWeight'
-  | 'fraction';
+  | 'fraction'
+  | 'brakeSpecificFuelConsumption'
+  | 'thrustSpecificFuelConsumption'
+  | 'specificEnergy';
 
 /** Units of each dimension, with the factor that takes a value to SI. */
 export const UNITS: Record<Dimension, Record<string, number>> = {
@@ -45,12 +48,29 @@ export const UNITS: Record<Dimension, Record<string, number>> = {
   },
   temperatureDifference: { K: 1, degC: 1, degF: RANKINE_K },
   angle: { deg: Math.PI / 180, rad: 1 },
-  time: { s: 1, min: 60 },
+  time: { s: 1, min: 60, h: 3600 },
   wingLoading: { 'N/m^2': 1, Pa: 1, 'kg/m^2': G0, 'lb/ft^2': PSF_PA, psf: PSF_PA },
   // lb in hp/lb is pound-weight, so hp/lbf.
   powerToWeight: { 'W/N': 1, 'W/kg': 1 / G0, 'kW/kg': 1000 / G0, 'hp/lb': HORSEPOWER_W / POUND_FORCE_N },
   thrustToWeight: { 'N/N': 1, 'lbf/lbf': 1 },
   fraction: { '%': 0.01 },
+  // Fuel mass per shaft energy, kg/J.
+  brakeSpecificFuelConsumption: {
+    'kg/J': 1,
+    'kg/kWh': 1 / 3.6e6,
+    'g/kWh': 1e-3 / 3.6e6,
+    'lb/(hp h)': POUND_KG / (HORSEPOWER_W * 3600),
+  },
+  // Fuel weight flow per thrust, 1/s: lb/(lbf h) is 1/h, since lbf is the weight of one lb; mg/(N s) is a mass flow, times g0.
+  thrustSpecificFuelConsumption: {
+    '1/s': 1,
+    '1/h': 1 / 3600,
+    'lb/(lbf h)': 1 / 3600,
+    'mg/(N s)': G0 * 1e-6,
+    'kg/(N h)': G0 / 3600,
+  },
+  // Energy per mass, J/kg.
+  specificEnergy: { 'J/kg': 1, 'Wh/kg': 3600, 'kWh/kg': 3.6e6, 'MJ/kg': 1e6 },
 };
 
 /** The SI unit each dimension is stored in, for messages and display. */
@@ -65,6 +85,9 @@ export const SI_UNIT: Record<Dimension, string> = {
   powerToWeight: 'W/N',
   thrustToWeight: '',
   fraction: '',
+  brakeSpecificFuelConsumption: 'kg/J',
+  thrustSpecificFuelConsumption: '1/s',
+  specificEnergy: 'J/kg',
 };
 
 /** An example of a well-written value, shown in error messages. */
@@ -79,6 +102,9 @@ export const EXAMPLE: Record<Dimension, string> = {
   powerToWeight: '9 W/N',
   thrustToWeight: '0.35',
   fraction: '2.4 %',
+  brakeSpecificFuelConsumption: '0.26 kg/kWh',
+  thrustSpecificFuelConsumption: '0.7 1/h',
+  specificEnergy: '200 Wh/kg',
 };
 
 /**
@@ -145,6 +171,12 @@ const ALIASES: Record<string, string> = {
   'hp/lbf': 'hp/lb',
   'lbf/ft^2': 'lb/ft^2',
   'lbf/ft²': 'lb/ft^2',
+  hr: 'h',
+  'lb/hp/h': 'lb/(hp h)',
+  'lb/(hp·h)': 'lb/(hp h)',
+  'lb/lbf/h': 'lb/(lbf h)',
+  'lb/(lbf·h)': 'lb/(lbf h)',
+  'h^-1': '1/h',
 };
 
 function listUnits(dimension: Dimension): string {
@@ -240,6 +272,9 @@ function describe(dimension: Dimension): string {
     powerToWeight: 'power-to-weight',
     thrustToWeight: 'thrust-to-weight',
     fraction: 'fraction',
+    brakeSpecificFuelConsumption: 'brake specific fuel consumption',
+    thrustSpecificFuelConsumption: 'thrust specific fuel consumption',
+    specificEnergy: 'specific energy',
   }[dimension];
 }
 

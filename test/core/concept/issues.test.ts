@@ -23,7 +23,7 @@ const CASES: BadCase[] = [
   { what: 'a speed without its unit', change: (c) => (c.requirements[1].speed = '110'), path: 'requirements[1].speed', message: /"110" has no unit.*e\.g\. "45 kt"/ },
   { what: 'a mass in a speed field', change: (c) => (c.requirements[0].speed = '45 kg'), path: 'requirements[0].speed', message: /"kg" is a mass unit, but this field is a speed/ },
   { what: 'a bare number for the mass', change: (c) => (c.aircraft.takeoffMass = 750), path: 'aircraft.takeoffMass', message: /bare number \(750\).*"750 kg"/ },
-  { what: 'a missing mass', change: (c) => delete c.aircraft.takeoffMass, path: 'aircraft.takeoffMass', message: /^is required, e\.g\. "750 kg"$/ },
+  { what: 'a missing mass', change: (c) => delete c.aircraft.takeoffMass, path: 'aircraft.takeoffMass', message: /^is required, e\.g\. "750 kg" \(or give a mission, from which the take-off mass is closed\)$/ },
   { what: 'an unknown top-level field', change: (c) => (c.notes = 'x'), path: 'notes', message: /^unknown field/ },
   { what: 'an unknown field in aircraft', change: (c) => (c.aircraft.foo = 1), path: 'aircraft.foo', message: /^unknown field; fields here: takeoffMass, aero, propulsion$/ },
   {
