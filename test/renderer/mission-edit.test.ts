@@ -72,7 +72,7 @@ describe('adding a mission', () => {
     expect(missionOf(addMission(document))?.payload).toBe('75 kg');
     document.aircraft = { ...(document.aircraft as object), takeoffMass: '12500 lb' };
     expect(missionOf(addMission(document))?.payload).toBe('1300 lb');
-    document.aircraft = { ...(document.aircraft as object), takeoffMass: undefined } as ConceptDocument['aircraft'];
+    delete (document.aircraft as Record<string, unknown>).takeoffMass;
     expect(missionOf(addMission(document))?.payload).toBe('200 kg');
   });
 });
@@ -165,5 +165,44 @@ describe('energy, reserves and the cruise condition', () => {
     expect(after.mission).toBeUndefined();
     expect(JSON.stringify(after)).toBe(JSON.stringify(before));
     expect(removeMission(before)).toBe(before);
+  });
+});
+
+describe('removing a cruise requirement a segment flies at', () => {
+  it('keeps the segment flying at that condition, written out, so the concept still reads', async () => {
+    const { removeRequirement } = await import('../../app/renderer/lib/concept/edit');
+    const { parseConcept } = await import('../../core');
+    const document = addMission(demo('turbofan'));
+    const index = segmentsOf(document).findIndex((segment) => segment.kind === 'cruise');
+    const id = segmentsOf(document)[index].requirement;
+    const requirements = document.requirements as Array<{ id: string; speed?: string; altitude?: string }>;
+    const at = requirements.findIndex((requirement) => requirement.id === id);
+    expect(parseConcept(document).ok).toBe(true);
+    const after = removeRequirement(document, at);
+    const segment = segmentsOf(after)[index];
+    expect(segment.requirement).toBeUndefined();
+    expect(segment.speed).toBe(requirements[at].speed);
+    expect(segment.altitude).toBe(requirements[at].altitude ?? '0 m');
+    expect(parseConcept(after).ok).toBe(true);
+  });
+});
+
+describe('every starting mission reads as a concept file', () => {
+  it('for each propulsion kind, with each segment kind added and each reserve basis', async () => {
+    const { parseConcept } = await import('../../core');
+    for (const kind of ['piston', 'turboprop', 'turbofan', 'electric']) {
+      let document = addMission(demo(kind));
+      for (const segment of ['climb', 'loiter', 'cruise', 'takeoff-climb', 'descent-landing', 'reserve'] as const) document = addSegment(document, segment).document;
+      const reserve = segmentsOf(document).findIndex((segment) => segment.kind === 'reserve');
+      for (const basis of ['range', 'fraction', 'endurance'] as const) {
+        document = setReserveBasis(document, reserve, basis);
+        const parsed = parseConcept(document);
+        expect(parsed.ok ? [] : parsed.issues, `${kind}, reserve by ${basis}`).toEqual([]);
+      }
+      const cruise = segmentsOf(document).findIndex((segment) => segment.kind === 'cruise');
+      const stated = setCruiseCondition(document, cruise, null);
+      const parsed = parseConcept(stated);
+      expect(parsed.ok ? [] : parsed.issues, `${kind}, cruise at a stated condition`).toEqual([]);
+    }
   });
 });

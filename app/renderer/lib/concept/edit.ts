@@ -64,11 +64,31 @@ export function addRequirement(document: ConceptDocument, kind: RequirementKind)
   return { document: { ...document, requirements: [...requirementsOf(document), requirement] }, id };
 }
 
-/** Removes the requirement and any ranges on its own assumptions (`requirements.ID.…`), which would otherwise point at nothing. */
+/**
+ * Removes the requirement and any ranges on its own assumptions
+ * (`requirements.ID.…`), which would otherwise point at nothing; mission
+ * segments flown at its condition keep that condition as stated speed and altitude.
+ */
 export function removeRequirement(document: ConceptDocument, index: number): ConceptDocument {
   const requirements = requirementsOf(document);
-  const id = requirements[index]?.id;
+  const removed = requirements[index];
+  const id = removed?.id;
   const next: ConceptDocument = { ...document, requirements: requirements.filter((_, i) => i !== index) };
+  if (removed && typeof id === 'string' && isRecord(next.mission) && Array.isArray(next.mission.segments)) {
+    const segments = next.mission.segments;
+    if (segments.some((segment) => isRecord(segment) && segment.requirement === id)) {
+      const stated: { [key: string]: Json } = { speed: removed.speed ?? null, altitude: removed.altitude ?? '0 m' };
+      next.mission = {
+        ...next.mission,
+        segments: segments.map((segment) => {
+          if (!isRecord(segment) || segment.requirement !== id) return segment;
+          const copy: { [key: string]: Json } = { ...segment, ...stated };
+          delete copy.requirement;
+          return copy;
+        }),
+      };
+    }
+  }
   const uncertainty = document.uncertainty;
   if (typeof id !== 'string' || !isRecord(uncertainty) || !Array.isArray(uncertainty.parameters)) return next;
   const prefix = `requirements.${id}.`;

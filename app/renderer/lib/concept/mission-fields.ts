@@ -3,13 +3,15 @@
  * and the units each is shown in, in SI, US customary and the knots-and-feet
  * working mix (see values.ts: lengths in nmi and ft, speeds in kt there).
  */
+import { DEFAULT_MISSION_PROPELLER_EFFICIENCY } from '../../../../core/concept/resolve-mission';
 import type { FieldSpec } from './fields';
 import type { EnergyChoice, ReserveBasis, SegmentKind } from './mission';
 
 const mass = (): FieldSpec['value'] => ({ type: 'quantity', dimension: 'mass', units: { si: 'kg', us: 'lb' } });
 const distance = (): FieldSpec['value'] => ({ type: 'quantity', dimension: 'length', units: { si: 'km', us: 'nmi' } });
 const time = (): FieldSpec['value'] => ({ type: 'quantity', dimension: 'time', units: { si: 'min', us: 'min' } });
-const speed = (): FieldSpec['value'] => ({ type: 'quantity', dimension: 'speed', units: { si: 'm/s', us: 'kt' } });
+/** A true airspeed; a Mach number ("M0.72") is read at the segment's altitude. */
+const speed = (): FieldSpec['value'] => ({ type: 'quantity', dimension: 'speed', units: { si: 'm/s', us: 'kt' }, mach: true });
 const altitude = (): FieldSpec['value'] => ({ type: 'quantity', dimension: 'length', units: { si: 'm', us: 'ft' } });
 const number = (): FieldSpec['value'] => ({ type: 'number' });
 
@@ -42,7 +44,7 @@ export function energyFieldSpecs(choice: EnergyChoice): FieldSpec[] {
           value: { type: 'quantity', dimension: 'brakeSpecificFuelConsumption', units: { si: 'kg/kWh', us: 'lb/(hp h)' } },
           required: true,
         },
-        { key: 'propellerEfficiency', title: 'Propeller efficiency', value: number(), defaultText: '0.8' },
+        { key: 'propellerEfficiency', title: 'Propeller efficiency', value: number(), defaultText: String(DEFAULT_MISSION_PROPELLER_EFFICIENCY) },
       ];
     case 'battery':
       return [
@@ -52,8 +54,8 @@ export function energyFieldSpecs(choice: EnergyChoice): FieldSpec[] {
           value: { type: 'quantity', dimension: 'specificEnergy', units: { si: 'Wh/kg', us: 'Wh/kg' } },
           required: true,
         },
-        { key: 'usableFraction', title: 'Usable fraction', value: number(), defaultText: '0.8' },
-        { key: 'driveEfficiency', title: 'Drive efficiency', value: number(), defaultText: '0.85' },
+        { key: 'usableFraction', title: 'Usable fraction', value: number(), required: true },
+        { key: 'driveEfficiency', title: 'Drive efficiency', value: number(), required: true },
       ];
   }
 }
