@@ -64,5 +64,7 @@ describe('why a mission gives no mass', () => {
     expect(missionProblem([{ path: 'mission.payload', message: 'must be at least 0 kg' }], [])).toBe('mission.payload must be at least 0 kg');
     expect(missionProblem([{ path: 'requirements[0].speed', message: 'is required' }], [])).toBeNull();
     expect(missionProblem([], [])).toBeNull();
+    expect(missionProblem([], [{ code: 'mission-not-closed', field: 'mission', message: words, severity: 'error' }])).toBe(words);
+    expect(missionProblem([], [{ code: 'field-ignored', field: 'mission.energy.propellerEfficiency', message: 'ignored' }])).toBeNull();
   });
 });

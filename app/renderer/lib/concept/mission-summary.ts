@@ -29,7 +29,7 @@ export function segmentSummary(segment: { [key: string]: Json }, system: UnitSys
   const specs = segmentFieldSpecs(kind, { basis });
   const spec = (key: string) => specs.find((entry) => entry.key === key);
   const value = (key: string) => valueText(segment[key], spec(key), system);
-  const at = typeof segment.requirement === 'string' ? `at ${requirementName(segment.requirement)}` : [value('speed'), value('altitude')].filter(Boolean).join(', ');
+  const at = typeof segment.requirement === 'string' ? `at ${requirementName(segment.requirement)}’s speed and altitude` : [value('speed'), value('altitude')].filter(Boolean).join(', ');
   const flown = (first: string) => [first, at ? (at.startsWith('at ') ? at : `at ${at}`) : ''].filter(Boolean).join(' ');
   switch (kind) {
     case 'takeoff-climb':
