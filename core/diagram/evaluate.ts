@@ -9,7 +9,9 @@ import {
   type DesignPointJson,
   type Evaluation,
   type MarginJson,
+  type MassJson,
   type OptimumJson,
+  type SizingJson,
   type WarningJson,
 } from '../evaluation';
 import { requirementKind } from '../requirements';
@@ -27,6 +29,7 @@ import { compressibilityWarnings } from './compressibility-warnings';
 import { sampleWingLoadings } from './sampling';
 import { sizingAt } from './sizing';
 import { reportedSpeeds } from './speeds';
+import { missionMass } from '../mission/mass';
 
 /** Relative distance within which a requirement counts as active at the optimum (core/methods.md section 7). */
 export const ACTIVE_TOLERANCE = 1e-3;
@@ -86,6 +89,39 @@ function boundaryAtOptimum({ requirement, boundary }: RequirementBoundary, aircr
 function designPointJson(entries: readonly RequirementBoundary[], axis: LoadingAxis, point: DesignPoint): DesignPointJson {
   const margins = marginsFor(entries, point.wingLoadingPa, point.loading);
   return { ...pointJson(axis, point.wingLoadingPa, point.loading), feasible: allMet(margins), margins };
+}
+
+/**
+ * With a mission: the take-off mass closed at the sized point's wing loading
+ * (the design point's, else the optimum's, else mid-range with a warning),
+ * and the sizing at that mass. A mission that does not close is an error
+ * warning naming the fraction; the sizing then keeps a written take-off
+ * mass, or has none.
+ */
+function closedSizing(
+  design: Design,
+  axis: LoadingAxis,
+  sized: { w: number; y: number } | null,
+  wingLoadingPa: number,
+  warnings: WarningJson[],
+): { mass: MassJson | undefined; sizing: SizingJson | null } {
+  const mission = design.mission!;
+  const { aircraft } = design;
+  if (!sized) {
+    warnings.push({
+      code: 'mission-mid-range',
+      field: 'mission',
+      message: 'No design point and no optimum: the mission is flown at the middle of the plotted wing-loading range.',
+    });
+  }
+  const closed = missionMass(mission, aircraft, wingLoadingPa);
+  if (!closed.ok) {
+    warnings.push({ code: 'mission-not-closed', field: closed.field, message: closed.message, severity: 'error' });
+    const kept = sized && mission.takeoffMassGiven ? sizingAt(aircraft, axis, sized.w, sized.y) : null;
+    return { mass: undefined, sizing: kept };
+  }
+  const { mass } = closed;
+  return { mass, sizing: sized ? sizingAt({ ...aircraft, takeoffMassKg: mass.takeoff }, axis, sized.w, sized.y) : null };
 }
 
 /** The evaluation of a design (DESIGN.md, "The evaluation"). */
@@ -156,6 +192,10 @@ export function evaluateDesign(design: Design): Evaluation {
   warnings.push(...compressibilityWarnings(entries, design, found?.wingLoadingPa ?? point?.wingLoadingPa ?? 0.5 * (range[0] + range[1])));
   const sized = point ? { w: point.wingLoadingPa, y: point.loading } : found ? { w: found.wingLoadingPa, y: found.loading } : null;
   warnings.push(...speedWarnings(design));
+  const sizedAt = sized ?? { w: 0.5 * (range[0] + range[1]), y: NaN };
+  const { mass, sizing } = design.mission
+    ? closedSizing(design, axis, sized, sizedAt.w, warnings)
+    : { mass: undefined, sizing: sized ? sizingAt(aircraft, axis, sized.w, sized.y) : null };
   return {
     format: EVALUATION_FORMAT,
     axis,
@@ -163,8 +203,9 @@ export function evaluateDesign(design: Design): Evaluation {
     optimum,
     ...(designPoint ? { designPoint } : {}),
     // At the design point, else the optimum; with neither, mid-range so the speeds stay defined.
-    speeds: reportedSpeeds(aircraft, sized?.w ?? 0.5 * (range[0] + range[1]), design.requirements),
-    sizing: sized ? sizingAt(aircraft, axis, sized.w, sized.y) : null,
+    speeds: reportedSpeeds(aircraft, sizedAt.w, design.requirements),
+    sizing,
+    ...(mass ? { mass } : {}),
     warnings,
   };
 }
