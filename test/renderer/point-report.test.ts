@@ -60,3 +60,48 @@ describe('readoutAt', () => {
     expect(binding.exceeded).toBe(true);
   });
 });
+
+describe('pointReporter with a mission', () => {
+  // The trainer with the window's starting mission: the mass closes from it (core/mission).
+  async function withMission(): Promise<Design> {
+    const { addMission } = await import('../../app/renderer/lib/concept/mission');
+    const concept = structuredClone(DEMO_CONCEPTS.find((demo) => demo.slug === 'trainer')!.concept) as Record<string, unknown>;
+    delete concept.mission;
+    const parsed = parseConcept(addMission(concept as never));
+    if (!parsed.ok) throw new Error(parsed.issues.map((issue) => `${issue.path} ${issue.message}`).join('; '));
+    return parsed.design;
+  }
+
+  it('gives the evaluation’s closed mass at the concept’s design point, and sizes at it', async () => {
+    const design = await withMission();
+    const evaluation = evaluateDesign(design);
+    const point = design.designPoint!;
+    const at = pointReporter(design, evaluation)({ wingLoadingPa: point.wingLoadingPa, loading: point.loading })!;
+    expect(evaluation.mass).toBeDefined();
+    expect(at.mass).toEqual(evaluation.mass);
+    expect(at.massProblem).toBeNull();
+    expect(at.sizing!.wingArea).toBeCloseTo(evaluation.sizing!.wingArea, 9);
+  });
+
+  it('closes the mass again at a dragged point and sizes there as S = m g0 / (W/S), P = (P/W) m g0 (core/methods.md section 7)', async () => {
+    const design = await withMission();
+    const at = pointReporter(design, evaluateDesign(design))({ wingLoadingPa: 800, loading: 12 })!;
+    const mass = at.mass!;
+    // Take-off mass is the sum of its parts (the closure's balance, m0 = empty + fuel + battery + payload + crew).
+    expect(mass.empty + mass.fuel + mass.battery + mass.payload + mass.crew).toBeCloseTo(mass.takeoff, 6);
+    expect(mass.takeoff).not.toBeCloseTo(design.aircraft.takeoffMassKg, 0);
+    expect(at.sizing!.wingArea).toBeCloseTo((mass.takeoff * G0) / 800, 9);
+    expect(at.sizing!.power).toBeCloseTo(12 * mass.takeoff * G0, 6);
+  });
+
+  it('says why when the mission cannot close, and sizes at no invented mass', async () => {
+    const design = await withMission();
+    // An empty-mass fraction of 0.95 leaves at most 5 % for fuel, payload and crew: too little for any cruise (hand check).
+    const heavy = { ...design, mission: { ...design.mission!, emptyMassFraction: 0.95 } };
+    const at = pointReporter(heavy, evaluateDesign(heavy))({ wingLoadingPa: 800, loading: 12 })!;
+    expect(at.mass).toBeNull();
+    expect(at.massProblem).toMatch(/^mission: empty-mass fraction 0\.95/);
+    // The concept gives a take-off mass, so the sizing stays at it.
+    expect(at.sizing!.wingArea).toBeCloseTo((design.aircraft.takeoffMassKg * G0) / 800, 9);
+  });
+});

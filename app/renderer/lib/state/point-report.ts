@@ -3,7 +3,9 @@
  * requirement's margin (tightest first), whether the point is feasible, and
  * the wing area, installed power or thrust and characteristic speeds it means.
  * The boundaries are built once per design, so a drag only evaluates them at
- * one point.
+ * one point. With a mission the take-off mass is closed at the point's wing
+ * loading (the mission flies the wing that wing loading gives), and the
+ * sizing is at that mass, as the evaluation does it.
  */
 import {
   allMet,
@@ -14,9 +16,11 @@ import {
   type Design,
   type Evaluation,
   type MarginJson,
+  type MassJson,
   type SizingJson,
   type SpeedsJson,
 } from '../../../../core';
+import { missionMass } from '../../../../core/mission';
 
 export interface PointReport {
   /** 'design point' when the concept has one, else 'optimum'. */
@@ -28,6 +32,10 @@ export interface PointReport {
   margins: MarginJson[];
   sizing: SizingJson | null;
   speeds: SpeedsJson;
+  /** The take-off mass closed from the mission at this point; null without a mission or when none closes. */
+  mass: MassJson | null;
+  /** Why the mission does not close here, in the engine's words; null when it closes or there is none. */
+  massProblem: string | null;
 }
 
 export type PointReporter = (point: { wingLoadingPa: number; loading: number } | null) => PointReport | null;
@@ -41,6 +49,16 @@ export function tightestFirst(margins: readonly MarginJson[]): MarginJson[] {
 export function pointReporter(design: Design, evaluation: Evaluation): PointReporter {
   const entries = requirementBoundaries(design);
   const axis = evaluation.axis;
+  const problemOf = (warnings: Evaluation['warnings']) => warnings.find((warning) => warning.code === 'mission-not-closed')?.message ?? null;
+  // The evaluation closed the mass at the design point's wing loading (else the optimum's): reuse it there.
+  const evaluatedAt = evaluation.designPoint?.wingLoading ?? evaluation.optimum?.wingLoading;
+  const closedAt = (wingLoadingPa: number): { mass: MassJson | null; massProblem: string | null } => {
+    const mission = design.mission;
+    if (!mission) return { mass: null, massProblem: null };
+    if (wingLoadingPa === evaluatedAt) return { mass: evaluation.mass ?? null, massProblem: problemOf(evaluation.warnings) };
+    const result = missionMass(mission, design.aircraft, wingLoadingPa);
+    return result.ok ? { mass: result.mass, massProblem: null } : { mass: null, massProblem: result.message };
+  };
   return (point) => {
     if (point === null) {
       const optimum = evaluation.optimum;
@@ -54,18 +72,25 @@ export function pointReporter(design: Design, evaluation: Evaluation): PointRepo
         margins: tightestFirst(optimum.margins),
         sizing: evaluation.sizing,
         speeds: evaluation.speeds,
+        mass: evaluation.mass ?? null,
+        massProblem: design.mission ? problemOf(evaluation.warnings) : null,
       };
     }
     const { wingLoadingPa, loading } = point;
     const margins = entries.map(({ boundary }) => ({ id: boundary.id, margin: marginOf(boundary, wingLoadingPa, loading) }));
+    const closed = closedAt(wingLoadingPa);
+    const aircraft = closed.mass ? { ...design.aircraft, takeoffMassKg: closed.mass.takeoff } : design.aircraft;
+    // No closed mass and none written: nothing to size at.
+    const sizing = design.mission && !closed.mass && !design.mission.takeoffMassGiven ? null : sizingAt(aircraft, axis, wingLoadingPa, loading);
     return {
       source: 'design point',
       wingLoadingPa,
       loading,
       feasible: allMet(margins),
       margins: tightestFirst(margins),
-      sizing: sizingAt(design.aircraft, axis, wingLoadingPa, loading),
+      sizing,
       speeds: reportedSpeeds(design.aircraft, wingLoadingPa, design.requirements),
+      ...closed,
     };
   };
 }
