@@ -91,3 +91,101 @@ test('a bad mission value names its field and leaves what is saved alone', async
   await expect(payload).toHaveValue(good);
   await window.expectNoNaN();
 });
+
+/** "1,234.5 kg" -> 1234.5. */
+const numberIn = (text: string | null) => parseFloat((text ?? '').replace(/,/g, ''));
+
+test('a mission closes the take-off mass, the wing area follows it, and a longer range grows it', async ({ window, page }) => {
+  await window.selectConcept('LP-2 two-seat trainer');
+  await openWithoutMission(window);
+  // Without a mission the sizing is at the written take-off mass.
+  await expect(window.byTest('mass-breakdown')).toHaveCount(0);
+  const areaWritten = numberIn(await window.byTest('sizing-wing-area').textContent());
+
+  await window.byTest('mission-add').click();
+  await expect(window.byTest('mission-closes')).toBeVisible();
+  const takeoff = numberIn(await window.byTest('mass-takeoff').textContent());
+  expect(takeoff).toBeGreaterThan(0);
+  // The parts add up to the take-off mass (m0 = empty + fuel + payload + crew, the closure's balance; shown to whole kg).
+  const parts = await window.byTest('mass-part-value').allTextContents();
+  expect(Math.abs(parts.map(numberIn).reduce((a, b) => a + b, 0) - takeoff)).toBeLessThanOrEqual(parts.length);
+  await expect(window.byTest('mass-bar').locator('rect[data-part]')).toHaveCount(parts.length);
+  // Growth factor: more than 1, since each kilogram of payload also needs structure and fuel to carry it (common practice).
+  expect(numberIn(await window.byTest('mass-growth').textContent())).toBeGreaterThan(1);
+  // Each cruise, loiter or reserve shows its lift-to-drag ratio from the concept's own polar.
+  await expect(window.byTest('mass-segment').filter({ has: page.locator('[data-kind="cruise"]') }).or(window.byTest('mass-segment').and(page.locator('[data-kind="cruise"]'))).getByTestId('mass-segment-ld')).toHaveText(/^\d+(\.\d+)?$/);
+  // Wing area at the same wing loading scales with the mass (S = m g0 / (W/S)).
+  const area = numberIn(await window.byTest('sizing-wing-area').textContent());
+  expect(area).not.toBeCloseTo(areaWritten, 1);
+  expect(area / areaWritten).toBeCloseTo(takeoff / 750, 2);
+  await shot(window, page, 'mission-closed');
+
+  // Twice the range needs more fuel, so more take-off mass.
+  const cruise = window.byTest('mission-segment').nth(1);
+  await cruise.getByTestId('segment-toggle').click();
+  await cruise.getByLabel('Range').fill('1600 km');
+  await expect.poll(async () => numberIn(await window.byTest('mass-takeoff').textContent())).toBeGreaterThan(takeoff);
+  expect(numberIn(await window.byTest('sizing-wing-area').textContent())).toBeGreaterThan(area);
+  await shot(window, page, 'mission-longer-range');
+
+  // What moves the take-off mass: largest first, the field on hover.
+  await window.byTest('tab-drivers').click();
+  const drivers = window.byTest('mass-driver');
+  await expect(drivers.first()).toBeVisible();
+  const values = (await window.byTest('mass-driver-value').allTextContents()).map((text) => Math.abs(parseFloat(text.replace('−', '-'))));
+  expect([...values].sort((a, b) => b - a)).toEqual(values);
+  await expect(drivers.filter({ hasText: /payload/i }).first()).toHaveAttribute('title', 'mission.payload');
+  await shot(window, page, 'mission-drivers');
+  await window.expectNoNaN();
+});
+
+test('a mission that cannot close says so in the engine’s words, naming the fraction, and never shows NaN', async ({ window, page }) => {
+  await window.selectConcept('LP-2 two-seat trainer');
+  await openWithoutMission(window);
+  await window.byTest('mission-add').click();
+  await expect(window.byTest('mission-closes')).toBeVisible();
+  const panel = window.byTest('mission-panel');
+  await panel.getByLabel('Empty-mass fraction').fill('0.95');
+  await expect(window.byTest('mission-problem')).toContainText('mission: empty-mass fraction 0.95');
+  await expect(window.byTest('mass-problem')).toContainText('fraction');
+  await expect(window.byTest('mass-breakdown')).toHaveCount(0);
+  await shot(window, page, 'mission-cannot-close');
+  await window.expectNoNaN();
+  // Back to a fraction that closes: the mass is back.
+  await panel.getByLabel('Empty-mass fraction').fill('');
+  await expect(window.byTest('mission-closes')).toBeVisible();
+  await expect(window.byTest('mass-breakdown')).toBeVisible();
+});
+
+test('mission fields and the closed mass follow the units: SI, US customary, knots and feet', async ({ window, page }) => {
+  await window.selectConcept('LP-2 two-seat trainer');
+  await openWithoutMission(window);
+  await window.byTest('mission-add').click();
+  const panel = window.byTest('mission-panel');
+  const cruise = window.byTest('mission-segment').nth(1);
+  await cruise.getByTestId('segment-toggle').click();
+  await cruise.getByLabel('Range').fill('800');
+  await expect(cruise.getByLabel('Range')).toHaveValue('800');
+  const kg = numberIn(await window.byTest('mass-takeoff').textContent());
+  await expect(window.byTest('mass-takeoff')).toContainText('kg');
+
+  await page.getByTestId('units-us').click();
+  // 800 km = 431.97 nmi (1 nmi = 1852 m exactly, NIST SP 811); 1 lb = 0.45359237 kg exactly.
+  await expect(cruise.getByLabel('Range')).toHaveValue('800 km');
+  await expect(cruise.getByTestId('field-converted')).toHaveText('= 432 nmi');
+  await expect(window.byTest('mass-takeoff')).toContainText('lb');
+  expect(numberIn(await window.byTest('mass-takeoff').textContent())).toBeCloseTo(kg / 0.45359237, -1);
+  await expect(panel.getByLabel('Payload')).toHaveValue(/kg$/);
+  await shot(window, page, 'mission-us');
+
+  // Typed in nautical miles, the value goes into the file with its unit.
+  await cruise.getByLabel('Range').fill('500');
+  await expect(cruise.getByTestId('segment-summary')).toContainText('500 nmi');
+
+  await page.getByTestId('units-kt-ft').click();
+  // The working mix: lengths in nmi and ft, speeds in kt, masses in kg.
+  await expect(cruise.getByLabel('Range')).toHaveValue('500');
+  await expect(window.byTest('mass-takeoff')).toContainText('kg');
+  await shot(window, page, 'mission-kt-ft');
+  await window.expectNoNaN();
+});
