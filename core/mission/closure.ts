@@ -50,20 +50,36 @@ function noClosure(mission: Mission, flown: FlownMission): { ok: false; field: s
   };
 }
 
+/**
+ * m_0 where (m_payload + m_crew)/m_0 + W_e/W_0(m_0) + energy fraction = 1, by
+ * bracketing from m_0 = payload + crew; NaN where none closes below the
+ * bracket's top. `iterations` counts the evaluations of the balance.
+ */
+export function solveTakeoffMass(
+  carriedKg: number,
+  emptyFraction: (takeoffMassKg: number) => number,
+  energyFraction: number,
+): { takeoffKg: number; iterations: number } {
+  let iterations = 0;
+  // Falls with m_0: payload and crew become a smaller share, and the regression's fraction falls (C < 0).
+  const leftOver = (m: number): number => {
+    iterations++;
+    return carriedKg / m + emptyFraction(m) + energyFraction - 1;
+  };
+  const takeoffKg = fallingRoot(leftOver, carriedKg, 2 * carriedKg, HEAVIEST_TAKEOFF_MASS_KG);
+  return { takeoffKg, iterations };
+}
+
 /** Solve for the take-off mass at a take-off wing loading [N/m^2]. */
 export function closeMass(mission: Mission, aircraft: Aircraft, takeoffWingLoadingPa: number): ClosureResult {
   const flight = flyMission(mission, aircraft, takeoffWingLoadingPa);
   if (!flight.ok) return flight;
   const { flown } = flight;
-  const carried = mission.payloadKg + mission.crewKg;
-  const energy = flown.fuelFraction + flown.batteryFraction;
-  let iterations = 0;
-  // Falls with m_0: payload and crew become a smaller share, and the regression's fraction falls (C < 0).
-  const leftOver = (m: number): number => {
-    iterations++;
-    return carried / m + emptyFractionAt(mission, m) + energy - 1;
-  };
-  const takeoffKg = fallingRoot(leftOver, carried, 2 * carried, HEAVIEST_TAKEOFF_MASS_KG);
+  const { takeoffKg, iterations } = solveTakeoffMass(
+    mission.payloadKg + mission.crewKg,
+    (m) => emptyFractionAt(mission, m),
+    flown.fuelFraction + flown.batteryFraction,
+  );
   if (!Number.isFinite(takeoffKg)) return noClosure(mission, flown);
   return { ok: true, takeoffKg, emptyFraction: emptyFractionAt(mission, takeoffKg), iterations, flown };
 }
