@@ -34,7 +34,7 @@ function noClosure(mission: Mission, flown: FlownMission): { ok: false; field: s
     ? 'shorten the mission, carry less, or improve the lift-to-drag ratio, the pack or the empty fraction'
     : 'shorten the mission, carry less, or improve the lift-to-drag ratio, the fuel consumption or the empty fraction';
   if (!(energy < 1)) {
-    return { ok: false, field: 'mission.segments', message: `mission: the ${energyName} ${two(energy)} alone is the whole take-off mass or more; ${advice}` };
+    return { ok: false, field: 'mission.segments', message: `the ${energyName} ${two(energy)} alone is the whole take-off mass or more; ${advice}` };
   }
   const given = mission.emptyMassFraction !== undefined;
   const atStart = emptyFractionAt(mission, mission.startingMassKg);
@@ -46,7 +46,7 @@ function noClosure(mission: Mission, flown: FlownMission): { ok: false; field: s
   return {
     ok: false,
     field: given ? 'mission.emptyMassFraction' : 'mission',
-    message: `mission: empty-mass fraction ${two(empty)}${whence} plus ${energyName} ${two(energy)} add to ${two(empty + energy)} and leave nothing for payload and crew; ${advice}`,
+    message: `empty-mass fraction ${two(empty)}${whence} plus ${energyName} ${two(energy)} add to ${two(empty + energy)} and leave nothing for payload and crew; ${advice}`,
   };
 }
 

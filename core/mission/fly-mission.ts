@@ -110,12 +110,12 @@ export function flyMission(mission: Mission, aircraft: Aircraft, takeoffWingLoad
         ok: false,
         field: where,
         message:
-          `mission: the ${s.kind} at ${knots(s.speedMps)} and ${feet(s.altitudeM)} ` +
+          `the ${s.kind} at ${knots(s.speedMps)} and ${feet(s.altitudeM)} ` +
           `needs a lift coefficient of ${start.liftCoefficient.toFixed(2)} on the sized wing, above the clean C_Lmax of ${start.clMax.toFixed(2)}; fly it faster or lower`,
       };
     }
     if (!(start.liftToDrag > 0) || !Number.isFinite(start.liftToDrag)) {
-      return { ok: false, field: where, message: `mission: the ${s.kind} at ${knots(s.speedMps)} gives no positive lift-to-drag ratio on the concept's polar` };
+      return { ok: false, field: where, message: `the ${s.kind} at ${knots(s.speedMps)} gives no positive lift-to-drag ratio on the concept's polar` };
     }
     if (energy.kind === 'battery') {
       const ld = start.liftToDrag * mission.liftToDragScale;
