@@ -4,12 +4,14 @@
  * thrust they mean, the characteristic speeds, the warnings and the caution.
  */
 import {
+  AIRCRAFT_CLASS_TITLES,
   UNIT_SYSTEM_TITLES,
   formatMargin,
   formatQuantity,
   type Design,
   type Evaluation,
   type MarginJson,
+  type MassJson,
   type UnitSystem,
   type WarningJson,
 } from '../../core';
@@ -18,6 +20,7 @@ import { requirementValues, segmentsText } from '../report/requirement-values';
 import { SIZING_CAUTION } from '../chart/caution';
 import { wrapText } from '../chart/text';
 import { oneLine } from './output-file';
+import { threeFigures } from '../../core/units/display';
 
 export interface ReportInput {
   source: string;
@@ -37,6 +40,7 @@ export function evaluationReport(input: ReportInput): string {
     requirementSection(design, evaluation, system),
     optimumSection(evaluation, system),
     designPointSection(evaluation, system),
+    ...(evaluation.mass ? [massSection(design, evaluation.mass, system)] : []),
     sizingSection(design, evaluation, system),
     speedSection(evaluation, system),
     warningSection(evaluation.warnings),
@@ -66,7 +70,7 @@ function axisSection(design: Design, evaluation: Evaluation, system: UnitSystem)
   return [
     `Diagram    ${axisTitle(evaluation)} against wing loading`,
     `           (${what})`,
-    `Aircraft   ${formatQuantity(design.aircraft.takeoffMassKg, 'mass', system)} take-off mass, ${kind}, ${engines} engine${engines === 1 ? '' : 's'}`,
+    `Aircraft   ${formatQuantity(takeoffMass(design, evaluation), 'mass', system)} take-off mass${evaluation.mass ? ' (closed from the mission)' : ''}, ${kind}, ${engines} engine${engines === 1 ? '' : 's'}`,
     `Units      ${UNIT_SYSTEM_TITLES[system]}`,
   ];
 }
@@ -150,8 +154,8 @@ function designPointSection(evaluation: Evaluation, system: UnitSystem): string[
 
 function sizingSection(design: Design, evaluation: Evaluation, system: UnitSystem): string[] {
   const where = evaluation.designPoint ? 'design point' : 'optimum';
-  const mass = formatQuantity(design.aircraft.takeoffMassKg, 'mass', system);
-  const title = `SIZING at the ${where}, take-off mass ${mass}`;
+  const mass = formatQuantity(takeoffMass(design, evaluation), 'mass', system);
+  const title = `SIZING at the ${where}, take-off mass ${mass}${evaluation.mass ? ' (closed from the mission)' : ''}`;
   const sizing = evaluation.sizing;
   if (!sizing) return [title, '  No sizing: there is no feasible optimum and no design point.'];
   const engines = design.aircraft.propulsion.engines;
@@ -165,6 +169,54 @@ function sizingSection(design: Design, evaluation: Evaluation, system: UnitSyste
   ];
   if (engines > 1) rows.push(['Per engine', `${formatQuantity(perEngine, quantity, system)} (${engines} engines)`]);
   return [title, ...table(rows)];
+}
+
+/** The mass the sizing is at: closed from the mission where there is one, else as written. */
+function takeoffMass(design: Design, evaluation: Evaluation): number {
+  return evaluation.mass?.takeoff ?? design.aircraft.takeoffMassKg;
+}
+
+function massSection(design: Design, mass: MassJson, system: UnitSystem): string[] {
+  const given = design.mission?.emptyMassFraction !== undefined;
+  const regression = design.mission ? `${AIRCRAFT_CLASS_TITLES[design.mission.aircraftClass]} regression` : 'regression';
+  const share = (kg: number) => `${formatQuantity(kg, 'mass', system)} (${percent(kg / mass.takeoff)})`;
+  const rows = [
+    ['Take-off', formatQuantity(mass.takeoff, 'mass', system)],
+    ['Empty', `${share(mass.empty)}, ${given ? 'as given' : regression}`],
+    ...(mass.battery > 0 || mass.fuel === 0 ? [['Battery', share(mass.battery)]] : [['Fuel', `${share(mass.fuel)}, reserves included`]]),
+    ['Payload', share(mass.payload)],
+    ['Crew', share(mass.crew)],
+    ['Growth factor', `${mass.growthFactor.toFixed(2)} (take-off mass per unit of payload)`],
+  ];
+  const segmentRows = mass.segments.map((segment) => [
+    segment.kind,
+    segment.massFraction === null ? '—' : segment.massFraction.toFixed(4),
+    segment.fuel !== null ? formatQuantity(segment.fuel, 'mass', system) : segment.energy !== null ? energyText(segment.energy) : '—',
+    segment.liftToDrag === null ? '—' : segment.liftToDrag.toFixed(1),
+    formatQuantity(segment.speed, 'speed', system),
+    formatQuantity(segment.altitude, 'altitude', system),
+  ]);
+  const used = mass.battery > 0 || mass.fuel === 0 ? 'energy' : 'fuel';
+  const drivers = mass.drivers.map((driver) => [driver.name, `${driver.elasticity >= 0 ? '+' : '−'}${Math.abs(driver.elasticity).toFixed(2)}`, driver.field]);
+  return [
+    'MASS (closed from the mission)',
+    ...table(rows),
+    '  Segments',
+    ...table([['kind', 'mass fraction', used, 'L/D', 'speed (TAS)', 'altitude'], ...segmentRows], '    '),
+    ...(drivers.length > 0
+      ? ['  What moves the take-off mass (% of take-off mass per % of the input)', ...table([['input', 'elasticity', 'field'], ...drivers], '    ')]
+      : []),
+    ...wrap(`Closed by bracketing in ${mass.iterations} evaluations; L/D from the concept's clean polar on the sized wing.`, '  '),
+  ];
+}
+
+function percent(fraction: number): string {
+  return Number.isFinite(fraction) ? `${(fraction * 100).toFixed(1)} %` : '—';
+}
+
+/** Battery energy in kWh, the unit packs are rated in (common practice). */
+function energyText(joules: number): string {
+  return Number.isFinite(joules) ? `${threeFigures(joules / 3.6e6)} kWh` : '—';
 }
 
 function speedText(value: number | undefined, system: UnitSystem): string {

@@ -59,6 +59,9 @@ async function runEvaluate(file: string, options: EvaluateOptions): Promise<stri
   if (options.svg !== undefined && options.svg.trim() === '') throw new InputError('needs a file name to write, e.g. --svg diagram.svg', file, '--svg');
   const input = await readEvaluateInput(file, options.version);
   const evaluation = evaluateDesign(input.design);
+  // A mission that cannot close is bad input: one line naming the mission field and the fraction that fails.
+  const unclosed = evaluation.warnings.find((warning) => warning.code === 'mission-not-closed');
+  if (unclosed) throw new InputError(unclosed.message, file, unclosed.field);
   const name = input.design.name;
   if (options.json) return `${JSON.stringify(evaluation, null, 2)}\n`;
   // Each output's writer loads when asked for, so `--json` starts without the chart and CSV code.

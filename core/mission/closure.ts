@@ -34,7 +34,7 @@ function noClosure(mission: Mission, flown: FlownMission): { ok: false; field: s
     ? 'shorten the mission, carry less, or improve the lift-to-drag ratio, the pack or the empty fraction'
     : 'shorten the mission, carry less, or improve the lift-to-drag ratio, the fuel consumption or the empty fraction';
   if (!(energy < 1)) {
-    return { ok: false, field: 'mission.segments', message: `mission: the ${energyName} ${two(energy)} alone is the whole take-off mass or more; ${advice}` };
+    return { ok: false, field: 'mission.segments', message: `the ${energyName} ${two(energy)} alone is the whole take-off mass or more; ${advice}` };
   }
   const given = mission.emptyMassFraction !== undefined;
   const atStart = emptyFractionAt(mission, mission.startingMassKg);
@@ -46,8 +46,28 @@ function noClosure(mission: Mission, flown: FlownMission): { ok: false; field: s
   return {
     ok: false,
     field: given ? 'mission.emptyMassFraction' : 'mission',
-    message: `mission: empty-mass fraction ${two(empty)}${whence} plus ${energyName} ${two(energy)} add to ${two(empty + energy)} and leave nothing for payload and crew; ${advice}`,
+    message: `empty-mass fraction ${two(empty)}${whence} plus ${energyName} ${two(energy)} add to ${two(empty + energy)} and leave nothing for payload and crew; ${advice}`,
   };
+}
+
+/**
+ * m_0 where (m_payload + m_crew)/m_0 + W_e/W_0(m_0) + energy fraction = 1, by
+ * bracketing from m_0 = payload + crew; NaN where none closes below the
+ * bracket's top. `iterations` counts the evaluations of the balance.
+ */
+export function solveTakeoffMass(
+  carriedKg: number,
+  emptyFraction: (takeoffMassKg: number) => number,
+  energyFraction: number,
+): { takeoffKg: number; iterations: number } {
+  let iterations = 0;
+  // Falls with m_0: payload and crew become a smaller share, and the regression's fraction falls (C < 0).
+  const leftOver = (m: number): number => {
+    iterations++;
+    return carriedKg / m + emptyFraction(m) + energyFraction - 1;
+  };
+  const takeoffKg = fallingRoot(leftOver, carriedKg, 2 * carriedKg, HEAVIEST_TAKEOFF_MASS_KG);
+  return { takeoffKg, iterations };
 }
 
 /** Solve for the take-off mass at a take-off wing loading [N/m^2]. */
@@ -55,15 +75,11 @@ export function closeMass(mission: Mission, aircraft: Aircraft, takeoffWingLoadi
   const flight = flyMission(mission, aircraft, takeoffWingLoadingPa);
   if (!flight.ok) return flight;
   const { flown } = flight;
-  const carried = mission.payloadKg + mission.crewKg;
-  const energy = flown.fuelFraction + flown.batteryFraction;
-  let iterations = 0;
-  // Falls with m_0: payload and crew become a smaller share, and the regression's fraction falls (C < 0).
-  const leftOver = (m: number): number => {
-    iterations++;
-    return carried / m + emptyFractionAt(mission, m) + energy - 1;
-  };
-  const takeoffKg = fallingRoot(leftOver, carried, 2 * carried, HEAVIEST_TAKEOFF_MASS_KG);
+  const { takeoffKg, iterations } = solveTakeoffMass(
+    mission.payloadKg + mission.crewKg,
+    (m) => emptyFractionAt(mission, m),
+    flown.fuelFraction + flown.batteryFraction,
+  );
   if (!Number.isFinite(takeoffKg)) return noClosure(mission, flown);
   return { ok: true, takeoffKg, emptyFraction: emptyFractionAt(mission, takeoffKg), iterations, flown };
 }

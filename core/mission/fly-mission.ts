@@ -7,7 +7,7 @@
  */
 import type { Aircraft } from '../aircraft';
 import { G0 } from '../units/factors';
-import { formatQuantity } from '../units/display';
+import { FOOT_M, KNOT_MPS } from '../units/factors';
 import { batteryMassFraction, climbEnergyPerWeight, levelFlightEnergyPerWeight } from './battery-energy';
 import { jetCruiseFraction, jetLoiterFraction, propellerCruiseFraction, propellerLoiterFraction } from './breguet';
 import { segmentLiftToDrag } from './lift-to-drag';
@@ -38,6 +38,10 @@ export interface FlownMission {
 export type FlightResult = { ok: true; flown: FlownMission } | { ok: false; field: string; message: string };
 
 type Flown = Extract<MissionSegment, FlightCondition>;
+
+/** Messages say speeds and heights the way a mission is usually written. */
+const knots = (v: number): string => `${Math.round(v / KNOT_MPS).toLocaleString('en-US')} kt`;
+const feet = (h: number): string => `${Math.round(h / FOOT_M).toLocaleString('en-US')} ft`;
 
 const flies = (s: MissionSegment): s is Flown => 'speedMps' in s;
 
@@ -106,12 +110,12 @@ export function flyMission(mission: Mission, aircraft: Aircraft, takeoffWingLoad
         ok: false,
         field: where,
         message:
-          `mission: the ${s.kind} at ${formatQuantity(s.speedMps, 'speed', 'kt-ft')} and ${formatQuantity(s.altitudeM, 'altitude', 'kt-ft')} ` +
+          `the ${s.kind} at ${knots(s.speedMps)} and ${feet(s.altitudeM)} ` +
           `needs a lift coefficient of ${start.liftCoefficient.toFixed(2)} on the sized wing, above the clean C_Lmax of ${start.clMax.toFixed(2)}; fly it faster or lower`,
       };
     }
     if (!(start.liftToDrag > 0) || !Number.isFinite(start.liftToDrag)) {
-      return { ok: false, field: where, message: `mission: the ${s.kind} at ${formatQuantity(s.speedMps, 'speed', 'kt-ft')} gives no positive lift-to-drag ratio on the concept's polar` };
+      return { ok: false, field: where, message: `the ${s.kind} at ${knots(s.speedMps)} gives no positive lift-to-drag ratio on the concept's polar` };
     }
     if (energy.kind === 'battery') {
       const ld = start.liftToDrag * mission.liftToDragScale;
