@@ -146,7 +146,7 @@ test('a mission that cannot close says so in the engine’s words, naming the fr
   await expect(window.byTest('mission-closes')).toBeVisible();
   const panel = window.byTest('mission-panel');
   await panel.getByLabel('Empty-mass fraction').fill('0.95');
-  await expect(window.byTest('mission-problem')).toContainText('mission: empty-mass fraction 0.95');
+  await expect(window.byTest('mission-problem')).toContainText('The mission does not close: empty-mass fraction 0.95');
   await expect(window.byTest('mass-problem')).toContainText('fraction');
   await expect(window.byTest('mass-breakdown')).toHaveCount(0);
   await shot(window, page, 'mission-cannot-close');

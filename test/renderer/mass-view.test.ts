@@ -59,12 +59,12 @@ describe('the closed mass as the window shows it', () => {
 
 describe('why a mission gives no mass', () => {
   it('is the engine’s own words, whether the closure stopped the evaluation or a mission field is wrong', () => {
-    const words = 'mission: empty-mass fraction 0.62 plus fuel fraction 0.41 leave nothing for payload and crew';
-    expect(missionProblem([{ path: '', message: `the diagram could not be drawn: ${words}` }], [])).toBe(words);
+    const words = 'empty-mass fraction 0.62 plus fuel fraction 0.41 add to 1.03 and leave nothing for payload and crew';
+    expect(missionProblem([{ path: '', message: `the diagram could not be drawn: mission: ${words}` }], [])).toBe(`mission: ${words}`);
     expect(missionProblem([{ path: 'mission.payload', message: 'must be at least 0 kg' }], [])).toBe('mission.payload must be at least 0 kg');
     expect(missionProblem([{ path: 'requirements[0].speed', message: 'is required' }], [])).toBeNull();
     expect(missionProblem([], [])).toBeNull();
-    expect(missionProblem([], [{ code: 'mission-not-closed', field: 'mission', message: words, severity: 'error' }])).toBe(words);
+    expect(missionProblem([], [{ code: 'mission-not-closed', field: 'mission', message: words, severity: 'error' }])).toBe(`The mission does not close: ${words}`);
     expect(missionProblem([], [{ code: 'field-ignored', field: 'mission.energy.propellerEfficiency', message: 'ignored' }])).toBeNull();
   });
 });

@@ -12,11 +12,17 @@ export const NOT_CLOSED = 'mission-not-closed';
 
 const DRAWN = /^the diagram could not be drawn: /;
 
+/** The engine's message as a sentence the panels show: "The mission does not close: empty-mass fraction 0.95 plus …". */
+export function notClosedText(message: string): string {
+  return `The mission does not close: ${message.replace(/^mission:\s*/, '')}`;
+}
+
 export function missionProblem(issues: readonly Issue[], warnings: readonly WarningJson[]): string | null {
   for (const issue of issues) {
     const message = issue.message.replace(DRAWN, '');
     if (issue.path.startsWith('mission')) return `${issue.path} ${message}`;
     if (/^mission\b/.test(message)) return message;
   }
-  return warnings.find((warning) => warning.code === NOT_CLOSED)?.message ?? null;
+  const warning = warnings.find((entry) => entry.code === NOT_CLOSED);
+  return warning ? notClosedText(warning.message) : null;
 }

@@ -21,6 +21,7 @@ import {
   type SpeedsJson,
 } from '../../../../core';
 import { missionMass } from '../../../../core/mission';
+import { missionProblem, notClosedText } from '../mission/mission-problem';
 
 export interface PointReport {
   /** 'design point' when the concept has one, else 'optimum'. */
@@ -49,7 +50,7 @@ export function tightestFirst(margins: readonly MarginJson[]): MarginJson[] {
 export function pointReporter(design: Design, evaluation: Evaluation): PointReporter {
   const entries = requirementBoundaries(design);
   const axis = evaluation.axis;
-  const problemOf = (warnings: Evaluation['warnings']) => warnings.find((warning) => warning.code === 'mission-not-closed')?.message ?? null;
+  const problemOf = (warnings: Evaluation['warnings']) => missionProblem([], warnings);
   // The evaluation closed the mass at the design point's wing loading (else the optimum's): reuse it there.
   const evaluatedAt = evaluation.designPoint?.wingLoading ?? evaluation.optimum?.wingLoading;
   const closedAt = (wingLoadingPa: number): { mass: MassJson | null; massProblem: string | null } => {
@@ -57,7 +58,7 @@ export function pointReporter(design: Design, evaluation: Evaluation): PointRepo
     if (!mission) return { mass: null, massProblem: null };
     if (wingLoadingPa === evaluatedAt) return { mass: evaluation.mass ?? null, massProblem: problemOf(evaluation.warnings) };
     const result = missionMass(mission, design.aircraft, wingLoadingPa);
-    return result.ok ? { mass: result.mass, massProblem: null } : { mass: null, massProblem: result.message };
+    return result.ok ? { mass: result.mass, massProblem: null } : { mass: null, massProblem: notClosedText(result.message) };
   };
   return (point) => {
     if (point === null) {
