@@ -25,7 +25,10 @@ describe('loftpoint evaluate --units kt-ft', () => {
     expect(text).toContain('300 ft/min at FL430');
     // 900 m = 2,953 ft (1 ft = 0.3048 m exactly): whole feet.
     expect(text).toContain('5,906 ft balanced field');
-    expect(text).toContain('7,400 kg take-off mass');
+    // The demo's mission closes its take-off mass; masses stay in kg in the working mix.
+    expect(text).toMatch(/\d,\d{3} kg take-off mass \(closed from the mission\)/);
+    // The cruise segment flies the cruise requirement's condition: 413 kt TAS at FL370, as above.
+    expect(text).toMatch(/cruise\s+0\.\d{4}\s+[\d,]+ kg\s+\d+\.\d\s+413 kt\s+FL370/);
     expect(text).toMatch(/Wing loading\s+3,480 N\/m²/);
     expect(text).toMatch(/certification requirements come from the applicable authority/);
   });

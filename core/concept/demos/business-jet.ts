@@ -16,6 +16,7 @@ export const businessJet: DemoConcept = {
     format: 'loftpoint-concept/1',
     name: 'LP-60 light business jet',
     aircraft: {
+      // A starting guess: the mission below closes the take-off mass.
       takeoffMass: '7400 kg',
       aero: {
         aspectRatio: 8.6,
@@ -94,5 +95,19 @@ export const businessJet: DemoConcept = {
       },
     ],
     designPoint: { wingLoading: '3400 N/m^2', thrustToWeight: 0.5 },
+    // An invented 2,000 nmi leg with six passengers and bags at the M0.72 FL370 cruise, a 200 nmi diversion and
+    // 30 minutes' hold in reserve. Cruise TSFC of a small turbofan, about 0.75 1/h (common practice).
+    mission: {
+      payload: '600 kg',
+      crew: '180 kg',
+      segments: [
+        { kind: 'takeoff-climb' },
+        { kind: 'cruise', range: '3750 km', requirement: 'cruise' },
+        { kind: 'descent-landing' },
+        { kind: 'reserve', range: '370 km', speed: '300 kt', altitude: 'FL200' },
+        { kind: 'reserve', endurance: '30 min', speed: '200 kt', altitude: '5000 ft' },
+      ],
+      energy: { kind: 'fuel', tsfc: '0.75 1/h' },
+    },
   },
 };

@@ -16,6 +16,7 @@ export const trainer: DemoConcept = {
     format: 'loftpoint-concept/1',
     name: 'LP-2 two-seat trainer',
     aircraft: {
+      // A starting guess: the mission below closes the take-off mass.
       takeoffMass: '750 kg',
       aero: {
         aspectRatio: 7.4,
@@ -88,5 +89,19 @@ export const trainer: DemoConcept = {
     ],
     diagram: { wingLoading: ['200 N/m^2', '1200 N/m^2'], samples: 201 },
     designPoint: { wingLoading: '650 N/m^2', powerToWeight: '11 W/N' },
+    // An invented club cross-country: two people and bags, 420 km at the cruise requirement's speed and height,
+    // half an hour of circuits, 45 minutes in reserve. BSFC of a light piston engine, about 0.28 kg/kWh (common practice).
+    mission: {
+      payload: '40 kg',
+      crew: '170 kg',
+      segments: [
+        { kind: 'takeoff-climb' },
+        { kind: 'cruise', range: '420 km', requirement: 'cruise' },
+        { kind: 'loiter', endurance: '30 min', speed: '90 kt', altitude: '3000 ft' },
+        { kind: 'descent-landing' },
+        { kind: 'reserve', endurance: '45 min', speed: '90 kt', altitude: '3000 ft' },
+      ],
+      energy: { kind: 'fuel', bsfc: '0.28 kg/kWh', propellerEfficiency: 0.8 },
+    },
   },
 };

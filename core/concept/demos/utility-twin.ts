@@ -16,6 +16,7 @@ export const utilityTwin: DemoConcept = {
     format: 'loftpoint-concept/1',
     name: 'LP-19 utility twin',
     aircraft: {
+      // A starting guess: the mission below closes the take-off mass.
       takeoffMass: '5700 kg',
       aero: {
         aspectRatio: 9.6,
@@ -91,5 +92,19 @@ export const utilityTwin: DemoConcept = {
       },
     ],
     designPoint: { wingLoading: '1850 N/m^2', powerToWeight: '23 W/N' },
+    // An invented supply run: 1,250 kg of people and freight 750 km to the strip at the cruise requirement's
+    // condition, a 100 nmi diversion and 30 minutes' hold in reserve. Turboprop BSFC about 0.33 kg/kWh (common practice).
+    mission: {
+      payload: '1250 kg',
+      crew: '180 kg',
+      segments: [
+        { kind: 'takeoff-climb' },
+        { kind: 'cruise', range: '750 km', requirement: 'cruise' },
+        { kind: 'descent-landing' },
+        { kind: 'reserve', range: '185 km', speed: '180 kt', altitude: '8000 ft' },
+        { kind: 'reserve', endurance: '30 min', speed: '150 kt', altitude: '5000 ft' },
+      ],
+      energy: { kind: 'fuel', bsfc: '0.33 kg/kWh', propellerEfficiency: 0.82 },
+    },
   },
 };
