@@ -100,7 +100,7 @@ describe('edits of the uncertainty block', () => {
     const document = includeRange(demoDocument('trainer'), 'requirements.cruise.propellerEfficiency', 0.75, 0.85);
     // Removing the requirement in the window takes its ranges with it; a file edited by hand can still hold one.
     expect(issuesOf(removeRequirement(document, (document.requirements as Array<{ id: string }>).findIndex((r) => r.id === 'cruise')))).toEqual([]);
-    const stray = { ...document, requirements: (document.requirements as Array<{ id: string }>).filter((r) => r.id !== 'cruise') };
+    const stray: ConceptDocument = { ...document, requirements: (document.requirements as Array<{ id: string }>).filter((r) => r.id !== 'cruise') };
     // The demo's mission flies at that requirement's condition too; here only the range is stray.
     delete stray.mission;
     expect(issuesOf(stray)[0]).toMatchObject({ path: 'uncertainty.parameters[0].field' });
