@@ -189,3 +189,25 @@ test('mission fields and the closed mass follow the units: SI, US customary, kno
   await shot(window, page, 'mission-kt-ft');
   await window.expectNoNaN();
 });
+
+test('a demo’s own mission: the survey drone closes by battery, and moving the design point closes the mass again', async ({ window, page }) => {
+  await window.selectConcept('LP-S4 survey drone');
+  await window.byTest('tab-mission').click();
+  await expect(window.byTest('mission-energy')).toHaveText('Battery');
+  // A battery does not burn off: the breakdown has a battery, no fuel, and the segments draw energy in kWh.
+  await expect(window.byTest('mass-part').and(page.locator('[data-part="battery"]'))).toHaveCount(1);
+  await expect(window.byTest('mass-part').and(page.locator('[data-part="fuel"]'))).toHaveCount(0);
+  await expect(window.byTest('mass-segments')).toContainText('kWh');
+  const takeoff = await window.byTest('mass-takeoff').textContent();
+  const area = await window.byTest('sizing-wing-area').textContent();
+  await shot(window, page, 'mission-drone');
+
+  // The mission flies the wing the wing loading gives: a new point, a new lift-to-drag ratio, a new mass and wing.
+  await window.dragPoint(70, -30);
+  await expect(window.byTest('mass-takeoff')).not.toHaveText(takeoff!);
+  await expect(window.byTest('sizing-wing-area')).not.toHaveText(area!);
+  await shot(window, page, 'mission-drone-moved');
+  await window.byTest('undo').click();
+  await expect(window.byTest('mass-takeoff')).toHaveText(takeoff!);
+  await window.expectNoNaN();
+});

@@ -10,7 +10,7 @@ import {
   removeSegment,
   reserveBasis,
   segmentsOf,
-  setCruiseCondition,
+  setFlightCondition,
   setEnergy,
   setReserveBasis,
 } from '../../app/renderer/lib/concept/mission';
@@ -151,12 +151,25 @@ describe('energy, reserves and the cruise condition', () => {
   it('fly a cruise at a requirement’s condition or at a stated one, keeping its range', () => {
     const document = addMission(demo('turbofan'));
     const index = segmentsOf(document).findIndex((segment) => segment.kind === 'cruise');
-    const stated = segmentsOf(setCruiseCondition(document, index, null))[index];
+    const stated = segmentsOf(setFlightCondition(document, index, null))[index];
     expect(stated.requirement).toBeUndefined();
     expect(stated.range).toBe(segmentsOf(document)[index].range);
     expect(typeof stated.speed).toBe('string');
-    const named = segmentsOf(setCruiseCondition(document, index, 'cruise'))[index];
+    const named = segmentsOf(setFlightCondition(document, index, 'cruise'))[index];
     expect(named).toEqual({ kind: 'cruise', range: stated.range, requirement: 'cruise' });
+  });
+
+  it('let a loiter or a flown reserve name a cruise requirement’s condition too, and a reserve kept as a share not', () => {
+    let document = addSegment(addMission(demo('turbofan')), 'loiter').document;
+    const loiter = segmentsOf(document).findIndex((segment) => segment.kind === 'loiter');
+    document = setFlightCondition(document, loiter, 'cruise');
+    expect(segmentsOf(document)[loiter]).toEqual({ kind: 'loiter', endurance: '45 min', requirement: 'cruise' });
+    const reserve = segmentsOf(document).findIndex((segment) => segment.kind === 'reserve');
+    document = setFlightCondition(document, reserve, 'cruise');
+    // The basis changes, the named condition stays.
+    expect(segmentsOf(setReserveBasis(document, reserve, 'range'))[reserve]).toEqual({ kind: 'reserve', range: '370 km', requirement: 'cruise' });
+    const share = setReserveBasis(document, reserve, 'fraction');
+    expect(setFlightCondition(share, reserve, 'cruise')).toBe(share);
   });
 
   it('remove the mission and nothing else', () => {
@@ -200,7 +213,7 @@ describe('every starting mission reads as a concept file', () => {
         expect(parsed.ok ? [] : parsed.issues, `${kind}, reserve by ${basis}`).toEqual([]);
       }
       const cruise = segmentsOf(document).findIndex((segment) => segment.kind === 'cruise');
-      const stated = setCruiseCondition(document, cruise, null);
+      const stated = setFlightCondition(document, cruise, null);
       const parsed = parseConcept(stated);
       expect(parsed.ok ? [] : parsed.issues, `${kind}, cruise at a stated condition`).toEqual([]);
     }

@@ -64,27 +64,27 @@ const SPEED: FieldSpec = { key: 'speed', title: 'Speed (TAS)', value: speed(), r
 const ALTITUDE: FieldSpec = { key: 'altitude', title: 'Altitude', value: altitude(), required: true };
 
 /**
- * A segment's fields. A cruise flown at a requirement's condition has only
- * its range; a reserve has the fields of its basis.
+ * A segment's fields. A cruise, loiter or reserve flown at a requirement's
+ * condition has no speed or altitude of its own; a reserve has the fields of its basis.
  */
 export function segmentFieldSpecs(kind: SegmentKind, options: { atRequirement?: boolean; basis?: ReserveBasis } = {}): FieldSpec[] {
+  const flown = options.atRequirement ? [] : [SPEED, ALTITUDE];
   switch (kind) {
     case 'takeoff-climb':
     case 'climb':
     case 'descent-landing':
       return [{ key: 'fraction', title: 'Mass fraction (end/start)', value: number(), defaultText: 'published' }];
     case 'cruise':
-      return [{ key: 'range', title: 'Range', value: distance(), required: true }, ...(options.atRequirement ? [] : [SPEED, ALTITUDE])];
+      return [{ key: 'range', title: 'Range', value: distance(), required: true }, ...flown];
     case 'loiter':
-      return [{ key: 'endurance', title: 'Endurance', value: time(), required: true }, SPEED, ALTITUDE];
+      return [{ key: 'endurance', title: 'Endurance', value: time(), required: true }, ...flown];
     case 'reserve':
       if (options.basis === 'fraction') return [{ key: 'fraction', title: 'Share of the mission’s fuel or energy', value: number(), required: true }];
       return [
         options.basis === 'range'
           ? { key: 'range', title: 'Distance', value: distance(), required: true }
           : { key: 'endurance', title: 'Endurance', value: time(), required: true },
-        SPEED,
-        ALTITUDE,
+        ...flown,
       ];
   }
 }

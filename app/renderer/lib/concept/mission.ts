@@ -263,33 +263,45 @@ export function setReserveBasis(document: ConceptDocument, index: number, basis:
   const segment = segmentsOf(document)[index];
   if (!segment || segment.kind !== 'reserve' || reserveBasis(segment) === basis) return document;
   const propulsion = propulsionOf(document);
+  const named = typeof segment.requirement === 'string' ? segment.requirement : null;
   const hold = segment.speed !== undefined || segment.altitude !== undefined ? { speed: segment.speed, altitude: segment.altitude } : holdingCondition(propulsion);
   const next: JsonRecord = { kind: 'reserve' };
   if (basis === 'fraction') next.fraction = 0.05;
   else {
     if (basis === 'range') next.range = propulsion === 'turbofan' ? '370 km' : propulsion === 'electric' ? '5 km' : '100 km';
     else next.endurance = propulsion === 'electric' ? '10 min' : '30 min';
-    if (hold.speed !== undefined) next.speed = hold.speed;
-    if (hold.altitude !== undefined) next.altitude = hold.altitude;
+    if (named !== null) next.requirement = named;
+    else {
+      if (hold.speed !== undefined) next.speed = hold.speed;
+      if (hold.altitude !== undefined) next.altitude = hold.altitude;
+    }
   }
   return setIn(document, ['mission', 'segments', index], next);
 }
 
+/** Segments flown at a speed and altitude, which may instead name a cruise requirement's condition. */
+export function isFlown(segment: JsonRecord): boolean {
+  return segment.kind === 'cruise' || segment.kind === 'loiter' || (segment.kind === 'reserve' && reserveBasis(segment) !== 'fraction');
+}
+
 /**
- * A cruise segment's condition: a cruise requirement's (by id) or stated
+ * A flown segment's condition: a cruise requirement's (by id) or stated
  * speed and altitude (null). Switching to stated starts from the concept's
- * typical cruise condition.
+ * typical condition for the segment (cruise, or a slower, lower hold).
  */
-export function setCruiseCondition(document: ConceptDocument, index: number, requirement: string | null): ConceptDocument {
+export function setFlightCondition(document: ConceptDocument, index: number, requirement: string | null): ConceptDocument {
   const segment = segmentsOf(document)[index];
-  if (!segment || segment.kind !== 'cruise') return document;
-  const next: JsonRecord = { kind: 'cruise' };
-  if (segment.range !== undefined) next.range = segment.range;
+  if (!segment || !isFlown(segment)) return document;
+  const next: JsonRecord = { ...segment };
+  delete next.requirement;
+  delete next.speed;
+  delete next.altitude;
   if (requirement !== null) next.requirement = requirement;
   else {
-    const stated = statedCondition(propulsionOf(document));
-    next.speed = segment.speed ?? stated.speed;
-    next.altitude = segment.altitude ?? stated.altitude;
+    const propulsion = propulsionOf(document);
+    const typical = segment.kind === 'cruise' ? statedCondition(propulsion) : holdingCondition(propulsion);
+    next.speed = segment.speed ?? typical.speed;
+    next.altitude = segment.altitude ?? typical.altitude;
   }
   return setIn(document, ['mission', 'segments', index], next);
 }
