@@ -39,9 +39,11 @@ describe('the closed mass as the window shows it', () => {
     expect(plain3(null)).toBe('—');
   });
 
-  it('gives battery energy in kWh (1 kWh = 3.6 MJ, NIST SP 811)', () => {
+  it('gives battery energy in kWh, or Wh below 1 kWh (1 Wh = 3,600 J, NIST SP 811)', () => {
     expect(energyText(3.6e6)).toBe('1 kWh');
     expect(energyText(1.8e7)).toBe('5 kWh');
+    expect(energyText(142560)).toBe('39.6 Wh');
+    expect(energyText(0)).toBe('0 kWh');
     expect(energyText(null)).toBe('—');
   });
 

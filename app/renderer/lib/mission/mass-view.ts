@@ -33,11 +33,12 @@ export function shareText(share: number): string {
   return Number.isFinite(share) ? `${Math.round(share * 100)} %` : '—';
 }
 
-/** Battery energy in kWh, three significant figures; "—" when there is none. */
+/** Battery energy in kWh, or Wh below 1 kWh, three significant figures; "—" when there is none. */
 export function energyText(joules: number | null): string {
   if (joules === null || !Number.isFinite(joules)) return '—';
   const kwh = joules / 3.6e6;
-  return `${Number(kwh.toPrecision(3)).toLocaleString('en-US', { maximumFractionDigits: 6 })} kWh`;
+  const [value, unit] = Math.abs(kwh) >= 1 || kwh === 0 ? [kwh, 'kWh'] : [kwh * 1000, 'Wh'];
+  return `${Number(value.toPrecision(3)).toLocaleString('en-US', { maximumFractionDigits: 6 })} ${unit}`;
 }
 
 /** A plain number to three significant figures, "—" when not finite. */
