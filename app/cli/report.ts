@@ -157,6 +157,9 @@ async function runReport(file: string, options: ReportOptions): Promise<string> 
   const { design } = input;
   const name = design.name.trim() || input.source;
   const evaluation = evaluateDesign(design);
+  // A mission that cannot close is bad input here as in evaluate: one line naming the field and the fraction.
+  const unclosed = evaluation.warnings.find((warning) => warning.code === 'mission-not-closed');
+  if (unclosed) throw new InputError(unclosed.message, file, unclosed.field);
 
   let content: string | Buffer;
   if (output.kind === 'csv') {

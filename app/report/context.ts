@@ -19,8 +19,10 @@ export interface ReportContext {
 
 export function reportContext(design: Design, evaluation: Evaluation, system: UnitSystem): ReportContext {
   const thrust = evaluation.axis === 'thrustToWeight';
+  // With a mission every section reads the take-off mass closed from it.
+  const closed = evaluation.mass ? { ...design, aircraft: { ...design.aircraft, takeoffMassKg: evaluation.mass.takeoff } } : design;
   return {
-    design,
+    design: closed,
     evaluation,
     system,
     axisWords: thrust ? 'thrust-to-weight' : 'power-to-weight',

@@ -7,6 +7,7 @@
  * again. Every user string is escaped; every number is formatted by core
  * (a value that is not defined reads "—").
  */
+import { massSection } from './section-mass';
 import type { ConceptUncertainty, Design, Evaluation, UnitSystem, WarningJson } from '../../core';
 import type { VersionComparison } from '../shared/contract';
 import { reportContext } from './context';
@@ -61,6 +62,7 @@ export function buildReport(input: ReportInput): string {
     assumptionsSection(ctx, studies),
     diagramSection(ctx),
     marginsSection(ctx),
+    ...(evaluation.mass ? [massSection(ctx, evaluation.mass)] : []),
     `<div class="two-up">\n${sizingSection(ctx)}\n${speedsSection(ctx)}\n</div>`,
     studiesSection(ctx, studies),
     versionSection(input.version, input.version?.changesSinceParent, system, input.unsavedDraft === true && !input.version),

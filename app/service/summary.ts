@@ -53,6 +53,19 @@ export function summarise(evaluation: Evaluation): EvaluationSummary {
             ...(finiteOrNull(sizing.thrust) !== null ? { thrust: sizing.thrust } : {}),
           }
         : null,
+    // Only with a mission that closed: the key is absent otherwise, so summaries of other concepts keep their bytes.
+    ...(evaluation.mass
+      ? {
+          mass: {
+            takeoff: evaluation.mass.takeoff,
+            empty: evaluation.mass.empty,
+            fuel: evaluation.mass.fuel,
+            battery: evaluation.mass.battery,
+            payload: evaluation.mass.payload,
+            crew: evaluation.mass.crew,
+          },
+        }
+      : {}),
     speeds:
       speeds && [speeds.stall, speeds.minimumDrag, speeds.minimumPower].every((v) => finiteOrNull(v) !== null)
         ? { stall: speeds.stall, minimumDrag: speeds.minimumDrag, minimumPower: speeds.minimumPower }

@@ -16,7 +16,7 @@ import { demoConcept, studied, withTypicalRanges } from '../chart/study-fixture'
 
 const RHO0 = 1.225; // kg/m^3, U.S. Standard Atmosphere 1976
 const KT = 1852 / 3600; // m/s per knot, NIST SP 811
-const SECTIONS = ['job', 'requirements', 'assumptions', 'diagram', 'margins', 'sizing', 'speeds', 'studies', 'sensitivity', 'costs', 'version', 'warnings'];
+const SECTIONS = ['job', 'requirements', 'assumptions', 'diagram', 'margins', 'mass', 'sizing', 'speeds', 'studies', 'sensitivity', 'costs', 'version', 'warnings'];
 
 function input(concept: unknown, extra: Partial<ReportInput> = {}): ReportInput {
   const s = studied(concept);
@@ -105,7 +105,20 @@ describe('buildReport', () => {
     expect(trainerHtml).not.toMatch(/\b(src|href)\s*=/i);
     expect(trainerHtml).not.toMatch(/@import|url\(\s*['"]?(https?:|\/\/)/i);
     expect(trainer.querySelector('meta[http-equiv="Content-Security-Policy"]')?.getAttribute('content')).toContain("default-src 'none'");
-    expect(trainer.querySelectorAll('figure.chart svg')).toHaveLength(3);
+    // The diagram, the mass bar, and the two study charts.
+    expect(trainer.querySelectorAll('figure.chart svg')).toHaveLength(4);
+  });
+
+  it('shows the take-off mass closed from the demo mission, its parts adding up to it, and sizes at it', () => {
+    const mass = trainerEvaluation.mass!;
+    const section = trainer.querySelector('#mass')!.textContent!;
+    expect(section).toContain(formatQuantity(mass.takeoff, 'mass', 'si'));
+    // The bar's parts fill its whole width: empty + fuel + payload + crew = take-off (the closure's balance).
+    const widths = [...trainer.querySelectorAll('#mass rect')].map((r) => Number(r.getAttribute('width')));
+    expect(widths.reduce((a, b) => a + b, 0)).toBeCloseTo(720, 0);
+    // Sizing at the closed mass: S = m g / (W/S) (methods reference, section 7).
+    const sizing = trainer.querySelector('#sizing')!.textContent!;
+    expect(sizing).toContain(formatQuantity(mass.takeoff, 'mass', 'si'));
   });
 
   it('never prints NaN, undefined or Infinity', () => {
