@@ -14,8 +14,11 @@ export type MassResult = { ok: true; mass: MassJson } | { ok: false; field: stri
 /** A finite number, else null, so NaN never reaches the JSON. */
 const finiteOrNull = (x: number | null): number | null => (x !== null && Number.isFinite(x) ? x : null);
 
-/** Close the mission at a take-off wing loading [N/m^2] and describe the result in SI. */
-export function missionMass(mission: Mission, aircraft: Aircraft, takeoffWingLoadingPa: number): MassResult {
+/**
+ * Close the mission at a take-off wing loading [N/m^2] and describe the result in SI.
+ * `drivers: false` leaves the drivers out (an empty list): a dragged design point needs the mass, not a study.
+ */
+export function missionMass(mission: Mission, aircraft: Aircraft, takeoffWingLoadingPa: number, options: { drivers?: boolean } = {}): MassResult {
   const closed = closeMass(mission, aircraft, takeoffWingLoadingPa);
   if (!closed.ok) return closed;
   const { takeoffKg, emptyFraction, iterations, flown } = closed;
@@ -42,7 +45,7 @@ export function missionMass(mission: Mission, aircraft: Aircraft, takeoffWingLoa
         speed: finiteOrNull(s.speedMps),
         altitude: finiteOrNull(s.altitudeM),
       })),
-      drivers: massDrivers(mission, aircraft, takeoffWingLoadingPa, takeoffKg),
+      drivers: options.drivers === false ? [] : massDrivers(mission, aircraft, takeoffWingLoadingPa, takeoffKg),
     },
   };
 }

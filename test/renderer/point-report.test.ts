@@ -95,6 +95,9 @@ describe('pointReporter with a mission', () => {
     expect(mass.takeoff).not.toBeCloseTo(design.aircraft.takeoffMassKg, 0);
     expect(at.sizing!.wingArea).toBeCloseTo((mass.takeoff * G0) / 800, 9);
     expect(at.sizing!.power).toBeCloseTo(12 * mass.takeoff * G0, 6);
+    // The same closure as a full evaluation at that wing loading, less the drivers (the sensitivity tab's).
+    const moved = evaluateDesign({ ...design, designPoint: { wingLoadingPa: 800, loading: 12 } }).mass!;
+    expect(mass).toEqual({ ...moved, drivers: [] });
   });
 
   it('says why when the mission cannot close, and sizes at no invented mass', async () => {

@@ -57,7 +57,8 @@ export function pointReporter(design: Design, evaluation: Evaluation): PointRepo
     const mission = design.mission;
     if (!mission) return { mass: null, massProblem: null };
     if (wingLoadingPa === evaluatedAt) return { mass: evaluation.mass ?? null, massProblem: problemOf(evaluation.warnings) };
-    const result = missionMass(mission, design.aircraft, wingLoadingPa);
+    // The drivers (a dozen closures) are for the sensitivity tab, which reads the evaluation's; a drag needs only the mass.
+    const result = missionMass(mission, design.aircraft, wingLoadingPa, { drivers: false });
     return result.ok ? { mass: result.mass, massProblem: null } : { mass: null, massProblem: notClosedText(result.message) };
   };
   return (point) => {
