@@ -75,6 +75,7 @@ function resolveAircraft(aircraft: AircraftJson, warnings: WarningJson[]): Aircr
     });
   }
   return {
+    ...(aircraft.class !== undefined ? { class: aircraft.class } : {}),
     takeoffMassKg: quantity(aircraft.takeoffMass, 'mass'),
     aspectRatio: aircraft.aero.aspectRatio,
     cdLinear: aircraft.aero.cdLinear ?? DEFAULT_CD_LINEAR,

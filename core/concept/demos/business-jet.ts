@@ -16,6 +16,7 @@ export const businessJet: DemoConcept = {
     format: 'loftpoint-concept/1',
     name: 'LP-60 light business jet',
     aircraft: {
+      class: 'business-jet',
       takeoffMass: '7400 kg',
       aero: {
         aspectRatio: 8.6,
