@@ -74,6 +74,8 @@ function sizingRows(ctx: ReportContext, sizing: SizingJson | null): string[] {
   const engines = ctx.design.aircraft.propulsion.engines;
   return [
     formatQuantity(sizing?.wingArea, 'area', ctx.system),
+    formatQuantity(sizing?.span, 'dimension', ctx.system),
+    formatQuantity(sizing?.meanChord, 'dimension', ctx.system),
     formatQuantity(total, quantity, ctx.system),
     formatQuantity(sizing?.perEngine ?? (total !== undefined ? total / engines : undefined), quantity, ctx.system),
   ];
@@ -87,7 +89,7 @@ export function sizingSection(ctx: ReportContext): string {
   const atOptimum = optimum && optimumLoading !== undefined ? sizingAt(design.aircraft, evaluation.axis, optimum.wingLoading, optimumLoading) : null;
   const point = evaluation.designPoint;
   const atPoint = point ? evaluation.sizing : null;
-  const names = ['Wing area S', `Installed ${thrust ? 'thrust' : 'power'} (sea level, all engines)`, `Per engine (${design.aircraft.propulsion.engines})`];
+  const names = ['Wing area S', `Span b (aspect ratio ${design.aircraft.aspectRatio})`, 'Mean chord S/b', `Installed ${thrust ? 'thrust' : 'power'} (sea level, all engines)`, `Per engine (${design.aircraft.propulsion.engines})`];
   const optimumValues = sizingRows(ctx, atOptimum);
   const pointValues = point ? sizingRows(ctx, atPoint) : [];
   const rows = names.map((name, i) => [name, ...(point ? [pointValues[i]] : []), optimumValues[i]]);
