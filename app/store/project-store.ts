@@ -7,7 +7,7 @@
 import type Database from 'better-sqlite3';
 import type { Connection } from './native';
 import { StoreError, fromSqliteError } from './errors';
-import type { OpenedFile } from './open';
+import { tidyReaderFiles, type OpenedFile } from './open';
 
 export interface ProjectRow {
   name: string;
@@ -88,7 +88,10 @@ export class ProjectStore {
     this.readonly = opened.readonly;
     this.readonlyReason = opened.readonlyReason;
     this.schemaVersion = opened.schemaVersion;
+    this.#tidyOnClose = 'tidyOnClose' in opened && opened.tidyOnClose === true;
   }
+
+  readonly #tidyOnClose: boolean;
 
   /** A prepared statement, compiled once per connection. */
   #prepare(sql: string): Database.Statement {
@@ -253,6 +256,8 @@ export class ProjectStore {
   }
 
   close(): void {
-    if (this.db.open) this.db.close();
+    if (!this.db.open) return;
+    this.db.close();
+    if (this.#tidyOnClose) tidyReaderFiles(this.file);
   }
 }
