@@ -73,7 +73,7 @@ export const businessJet: DemoConcept = {
         kind: 'approach-speed',
         label: 'VREF at most 115 kt CAS at landing mass, flown at 1.23 VSR0 (14 CFR 25.125)',
         speed: '115 kt',
-        speedFactor: 1.23,
+        approachSpeedFactor: 1.23,
         massFraction: 0.85,
       },
       {
