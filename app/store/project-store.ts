@@ -27,6 +27,8 @@ export interface ConceptRow {
 
 export interface VersionRow {
   number: number;
+  /** Its place among its concept's versions: 1 for the first, 2 for the next (the project-wide number is `number`). */
+  conceptVersion: number;
   conceptId: number;
   conceptName: string;
   parent: number | null;
@@ -53,7 +55,9 @@ export interface NewVersion {
   createdAt: string;
 }
 
-const VERSION_COLUMNS = `v.number, v.concept_id AS conceptId, c.name AS conceptName, v.parent, v.evaluation_json AS evaluationJson,
+const VERSION_COLUMNS = `v.number,
+  (SELECT count(*) FROM version w WHERE w.concept_id = v.concept_id AND w.number <= v.number) AS conceptVersion,
+  v.concept_id AS conceptId, c.name AS conceptName, v.parent, v.evaluation_json AS evaluationJson,
   v.note, v.author, v.created_at AS createdAt,
   (SELECT json_group_array(tag) FROM (SELECT tag FROM version_tag t WHERE t.version = v.number ORDER BY tag)) AS tagsJson`;
 

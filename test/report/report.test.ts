@@ -216,8 +216,8 @@ describe('buildReport', () => {
             parent: 1,
             changesSinceParent: {
               format: 'loftpoint-comparison/1',
-              a: { number: 1, conceptName: 'T', createdAt: '2026-01-01T00:00:00Z', author: 'a' },
-              b: { number: 5, conceptName: 'T', createdAt: '2026-01-15T09:00:00Z', author: 'b' },
+              a: { number: 1, conceptVersion: 1, conceptName: 'T', createdAt: '2026-01-01T00:00:00Z', author: 'a' },
+              b: { number: 5, conceptVersion: 2, conceptName: 'T', createdAt: '2026-01-15T09:00:00Z', author: 'b' },
               axis: { before: 'powerToWeight', after: 'powerToWeight' },
               requirements: { added: [], removed: [], changed: [{ id: 'cruise', kind: 'cruise', fields: [{ path: 'speed', before: '110 kt', after: '115 kt' }] }] },
               assumptions: [{ path: 'aircraft.aero.configurations.landing.clMax', before: 2.05, after: 2.2 }],
