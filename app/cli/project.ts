@@ -175,6 +175,66 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     );
 
   project
+    .command('rename-concept')
+    .description('Rename a concept (design alternative) of the project; its versions and their numbers stay.')
+    .argument('<file>', 'the project file')
+    .argument('<from>', 'the concept\'s name now')
+    .argument('<to>', 'its new name (not taken by another concept)')
+    .action((file: string, from: string, to: string) =>
+      run(io, setExitCode, (service) => {
+        service.openProject({ file });
+        const renamed = service.renameConcept({ from, to });
+        const count = `${renamed.versionCount} version${renamed.versionCount === 1 ? '' : 's'}`;
+        io.out(`Renamed concept "${from}" to "${renamed.name}" (${count}).\n${PRELIMINARY_CAUTION}\n`);
+      })(),
+    );
+
+  project
+    .command('import-concept')
+    .description('Add a concept JSON file to the project as a new concept (design alternative); prints only its first version number.')
+    .argument('<file>', 'the project file')
+    .argument('<concept>', 'the concept JSON file (checked field by field; nothing is saved if it is not valid)')
+    .option('--name <name>', 'the new concept\'s name in the project (default: the concept\'s own name); refused when taken')
+    .option('--note <text>', 'why this alternative exists (default: "Imported from FILE.")')
+    .option('--author <name>', 'author (default: $LOFTPOINT_AUTHOR or your user name)')
+    .action((file: string, conceptFile: string, options: { name?: string; note?: string; author?: string }) =>
+      run(io, setExitCode, (service) => {
+        const conceptText = readText(conceptFile);
+        let ownName: unknown;
+        try {
+          ownName = (JSON.parse(conceptText) as { name?: unknown } | null)?.name;
+        } catch {
+          ownName = undefined; // the save below reports the JSON error with its place
+        }
+        service.openProject({ file });
+        const name = (options.name ?? (typeof ownName === 'string' && ownName.trim() !== '' ? ownName : basename(conceptFile, extname(conceptFile)))).trim();
+        if (service.listConcepts({}).some((concept) => concept.name === name)) {
+          throw new InputError(`a concept "${name}" already exists in ${file}; choose another with --name (or add a version to it with: loftpoint project save)`, undefined, '--name');
+        }
+        let saved;
+        try {
+          saved = service.saveVersion({
+            conceptText,
+            conceptName: name,
+            parent: null,
+            note: options.note ?? `Imported from ${basename(conceptFile)}.`,
+            ...(options.author !== undefined ? { author: options.author } : {}),
+          });
+        } catch (error) {
+          if (error instanceof projects().ServiceFailure && error.error.code === 'invalid-concept') {
+            const issues = error.error.issues ?? [];
+            const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
+            const first = issues[0];
+            throw new InputError(`${first?.message ?? 'is not a valid concept'}${more}; nothing was imported`, conceptFile, first?.path || undefined);
+          }
+          throw error;
+        }
+        for (const warning of saved.warnings) io.err(`loftpoint: warning: ${conceptFile}: ${warning}\n`);
+        io.out(`${saved.version.number}\n`);
+      })(),
+    );
+
+  project
     .command('versions')
     .description('List every version: number, concept, parent, time, author, optimum, note.')
     .argument('<file>', 'the project file')
