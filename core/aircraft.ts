@@ -5,6 +5,7 @@
 import { propulsionKind, type PropulsionKind } from './propulsion/kinds';
 import type { LapseModel } from './propulsion/turbine-lapse';
 import type { WingCompressibility } from './aero/compressibility';
+import type { AircraftClass } from './assumptions/study-case';
 
 export type { PropulsionKind };
 
@@ -32,6 +33,8 @@ export interface Propulsion {
 }
 
 export interface Aircraft {
+  /** The kind of aircraft the concept states; absent: not stated (only the studies read it). */
+  class?: AircraftClass;
   takeoffMassKg: number;
   aspectRatio: number;
   /** K1 in C_D = C_D0 + K1 C_L + K C_L^2. */

@@ -79,6 +79,10 @@ export interface SpeedsJson {
 
 export interface SizingJson {
   wingArea: number;
+  /** Wing span [m], sqrt(aspect ratio x wing area). */
+  span?: number;
+  /** Mean geometric chord [m], wing area / span. */
+  meanChord?: number;
   power?: number;
   thrust?: number;
   perEngine?: number;

@@ -4,6 +4,7 @@
  */
 import type { Command } from 'commander';
 import type { CliIO, SetExitCode } from './io';
+import { registerConcept } from './concept';
 import { registerDemo } from './demo';
 import { registerEvaluate } from './evaluate';
 import { registerProject } from './project';
@@ -13,6 +14,7 @@ import { registerServe } from './serve';
 export function registerCommands(program: Command, io: CliIO, setExitCode: SetExitCode): void {
   registerEvaluate(program, io, setExitCode);
   registerProject(program, io, setExitCode);
+  registerConcept(program, io, setExitCode);
   registerDemo(program, io, setExitCode);
   registerReport(program, io, setExitCode);
   registerServe(program, io, setExitCode);

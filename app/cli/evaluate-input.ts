@@ -7,6 +7,7 @@ import { closeSync, openSync, readFileSync, readSync, statSync } from 'node:fs';
 import { parseConceptText, type ConceptIssue, type ConceptJson, type Design, type WarningJson } from '../../core';
 import { InputError } from './errors';
 import { oneLine } from './output-file';
+import { parseVersionRef, type VersionName } from '../service/version-ref';
 
 /** A project file that could not be read for a reason other than the user's input (busy, I/O): exit status 1. */
 export class ProjectReadFailure extends Error {
@@ -28,6 +29,8 @@ export interface EvaluateInput {
   design: Design;
   /** Concept warnings from reading (defaults that fell back, and the like). */
   warnings: WarningJson[];
+  /** The project-wide number of the stored version read; absent for a concept JSON file. */
+  versionNumber?: number;
 }
 
 const SQLITE_HEADER = 'SQLite format 3\0';
@@ -101,30 +104,38 @@ function issueError(file: string, issues: readonly ConceptIssue[]): InputError {
   return new InputError(`${oneLine(first.message)}${more}`, file, first.path);
 }
 
-function versionNumber(file: string, version: string | undefined): number {
+function versionRef(file: string, version: string | undefined): VersionName {
   if (version === undefined) {
-    throw new InputError(`is a project file; say which version to evaluate with --version N (list them with: loftpoint project versions ${file})`, file, '--version');
+    throw new InputError(`is a project file; say which version to evaluate with --version N or --version CONCEPT@N (list them with: loftpoint project versions ${file})`, file, '--version');
   }
-  if (!/^\s*\d+\s*$/.test(version) || Number(version) < 1) {
+  if (!/^\s*\d+\s*$/.test(version) && !version.includes('@')) {
     throw new InputError(`must be a version number (1, 2, 3, ...), not "${oneLine(version)}"`, file, '--version');
   }
-  return Number(version);
+  const ref = parseVersionRef(version);
+  if ('error' in ref) throw new InputError(oneLine(ref.error), file, '--version');
+  return ref;
+}
+
+/** "version 3", or "Trainer v2" for a concept's own number. */
+function refText(ref: VersionName): string {
+  return ref.kind === 'project' ? `version ${ref.number}` : `${ref.concept} v${ref.version}`;
 }
 
 async function readProjectVersion(file: string, version: string | undefined): Promise<EvaluateInput> {
-  const number = versionNumber(file, version);
+  const ref = versionRef(file, version);
   // Loaded only here: reading a concept JSON file never touches the native SQLite module.
   const service = await import('../service');
   let detail;
   try {
-    detail = service.getStoredVersion(file, number);
+    detail = service.getStoredVersion(file, ref);
   } catch (error) {
     const failure = service.toServiceError(error);
     const message = oneLine(failure.message).replace(new RegExp(`^${escapeRegExp(file)}:\\s*`), '');
     if (NOT_INPUT.has(failure.code)) throw new ProjectReadFailure(`${file}: ${message}`);
     throw new InputError(message, file, failure.code === 'not-found' ? '--version' : failure.field);
   }
-  return conceptFrom(file, `${file}, version ${number}`, detail.conceptText);
+  const source = ref.kind === 'project' ? `version ${detail.number}` : `${refText(ref)} (version ${detail.number})`;
+  return { ...conceptFrom(file, `${file}, ${source}`, detail.conceptText), versionNumber: detail.number };
 }
 
 function escapeRegExp(text: string): string {

@@ -165,6 +165,8 @@ function sizingSection(design: Design, evaluation: Evaluation, system: UnitSyste
   const quantity = thrust ? 'thrust' : 'power';
   const rows = [
     ['Wing area', formatQuantity(sizing.wingArea, 'area', system)],
+    ['Span', `${formatQuantity(sizing.span, 'dimension', system)} (aspect ratio ${design.aircraft.aspectRatio})`],
+    ['Mean chord', formatQuantity(sizing.meanChord, 'dimension', system)],
     [thrust ? 'Installed thrust' : 'Installed power', `${formatQuantity(total, quantity, system)} sea-level rated, all engines`],
   ];
   if (engines > 1) rows.push(['Per engine', `${formatQuantity(perEngine, quantity, system)} (${engines} engines)`]);

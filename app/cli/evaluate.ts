@@ -31,7 +31,7 @@ export function registerEvaluate(program: Command, io: CliIO, setExitCode: SetEx
         'wing area and installed power or thrust. Preliminary sizing only.',
     )
     .argument('<file>', 'a concept JSON file, or a project file with --version')
-    .option('--version <n>', 'the stored version to evaluate (project files only)')
+    .option('--version <n>', 'the stored version to evaluate (project files only): the project-wide number N, or CONCEPT@N for that concept\'s N-th version')
     .option('--json', 'print the evaluation as JSON (always SI units)')
     .option('--csv', 'print the sampled boundaries as CSV')
     .option('--svg <out>', 'write the constraint diagram to an SVG file')

@@ -8,6 +8,7 @@ import { EXIT_FAILURE, EXIT_INPUT, EXIT_OK, InputError } from './errors';
 import type { CliIO } from './io';
 import { processIO } from './io';
 import { registerCommands } from './commands';
+import manifest from '../../package.json';
 
 export async function main(argv: string[], io: CliIO = processIO): Promise<number> {
   const program = new Command('loftpoint')
@@ -16,6 +17,9 @@ export async function main(argv: string[], io: CliIO = processIO): Promise<numbe
         'Preliminary sizing only: certification requirements come from the applicable authority,\n' +
         'and final numbers need licensed engineering review.',
     )
+    // `--version` before a verb is the program's; after one (`evaluate FILE --version 3`) it stays the verb's.
+    .enablePositionalOptions()
+    .version(manifest.version, '-V, --version', 'print the version of loftpoint')
     .exitOverride()
     .configureOutput({
       writeOut: (text) => io.out(text),

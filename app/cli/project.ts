@@ -11,17 +11,26 @@ import { basename, extname } from 'node:path';
 import { PRELIMINARY_CAUTION } from '../../core/caution';
 import type { ProjectService, ServiceError, UnitSystem } from '../service';
 import { EXIT_FAILURE, InputError } from './errors';
+import { conceptVersionNumber, parseVersionRef } from '../service/version-ref';
 import type { CliIO } from './io';
 import type { SetExitCode } from './io';
 
 /** Errors that are not the user's input: reported in one line with exit status 1. */
 const NOT_INPUT = new Set(['busy', 'io', 'disk-full', 'internal']);
 
-function versionNumber(text: string, argument: string): number {
-  if (!/^\d+$/.test(text.trim()) || Number(text) < 1) {
-    throw new InputError(`"${text}" is not a version number (1, 2, 3, ...)`, undefined, argument);
-  }
-  return Number(text);
+/**
+ * The project-wide number of the version `text` names: N itself, or
+ * CONCEPT@N, the N-th version of that concept (the project must be open).
+ */
+function versionNumber(service: ProjectService, text: string, argument: string): number {
+  if (/^\d+$/.test(text.trim()) && Number(text) >= 1) return Number(text);
+  if (!text.includes('@')) throw new InputError(`"${text}" is not a version number (1, 2, 3, ...) or CONCEPT@N`, undefined, argument);
+  const ref = parseVersionRef(text);
+  if ('error' in ref) throw new InputError(ref.error, undefined, argument);
+  if (ref.kind === 'project') return ref.number;
+  const number = conceptVersionNumber(ref, service.listVersions({}));
+  if (typeof number !== 'number') throw new InputError(number.error, undefined, argument);
+  return number;
 }
 
 function unitsOption(value: string | undefined): UnitSystem | undefined {
@@ -110,13 +119,13 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .argument('<concept>', 'the concept JSON file')
     .requiredOption('--note <text>', 'why this version exists (plain text or Markdown)')
     .option('--concept <name>', 'the concept (design alternative) to save into; created when new')
-    .option('--parent <version>', 'the version this one was edited from (default: the newest of its concept)')
+    .option('--parent <version>', 'the version this one was edited from, N or CONCEPT@N (default: the newest of its concept)')
     .option('--author <name>', 'author (default: $LOFTPOINT_AUTHOR or your user name)')
     .action((file: string, conceptFile: string, options: { note: string; concept?: string; parent?: string; author?: string }) =>
       run(io, setExitCode, (service) => {
         const conceptText = readText(conceptFile);
-        const parent = options.parent === undefined ? undefined : versionNumber(options.parent, '--parent');
         service.openProject({ file });
+        const parent = options.parent === undefined ? undefined : versionNumber(service, options.parent, '--parent');
         let saved;
         try {
           saved = service.saveVersion({
@@ -144,15 +153,15 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .command('branch')
     .description('Start a new concept (a design alternative) from a stored version; prints only its first version number.')
     .argument('<file>', 'the project file')
-    .argument('<version>', 'the version to start from (the new concept\'s first version has it as parent)')
+    .argument('<version>', 'the version to start from, N or CONCEPT@N (the new concept\'s first version has it as parent)')
     .requiredOption('--name <name>', 'the new concept\'s name in the project')
     .option('--title <title>', 'write this as the concept\'s own name (its title on diagrams and reports); default: copy the concept unchanged')
     .option('--note <text>', 'why this alternative exists (default: "Started from version N of ...")')
     .option('--author <name>', 'author (default: $LOFTPOINT_AUTHOR or your user name)')
     .action((file: string, version: string, options: { name: string; title?: string; note?: string; author?: string }) =>
       run(io, setExitCode, (service) => {
-        const fromVersion = versionNumber(version, 'VERSION');
         service.openProject({ file });
+        const fromVersion = versionNumber(service, version, 'VERSION');
         const started = service.startConcept({
           fromVersion,
           name: options.name,
@@ -162,6 +171,66 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
         });
         for (const warning of started.warnings) io.err(`loftpoint: warning: ${file}: ${warning}\n`);
         io.out(`${started.version.number}\n`);
+      })(),
+    );
+
+  project
+    .command('rename-concept')
+    .description('Rename a concept (design alternative) of the project; its versions and their numbers stay.')
+    .argument('<file>', 'the project file')
+    .argument('<from>', 'the concept\'s name now')
+    .argument('<to>', 'its new name (not taken by another concept)')
+    .action((file: string, from: string, to: string) =>
+      run(io, setExitCode, (service) => {
+        service.openProject({ file });
+        const renamed = service.renameConcept({ from, to });
+        const count = `${renamed.versionCount} version${renamed.versionCount === 1 ? '' : 's'}`;
+        io.out(`Renamed concept "${from}" to "${renamed.name}" (${count}).\n${PRELIMINARY_CAUTION}\n`);
+      })(),
+    );
+
+  project
+    .command('import-concept')
+    .description('Add a concept JSON file to the project as a new concept (design alternative); prints only its first version number.')
+    .argument('<file>', 'the project file')
+    .argument('<concept>', 'the concept JSON file (checked field by field; nothing is saved if it is not valid)')
+    .option('--name <name>', 'the new concept\'s name in the project (default: the concept\'s own name); refused when taken')
+    .option('--note <text>', 'why this alternative exists (default: "Imported from FILE.")')
+    .option('--author <name>', 'author (default: $LOFTPOINT_AUTHOR or your user name)')
+    .action((file: string, conceptFile: string, options: { name?: string; note?: string; author?: string }) =>
+      run(io, setExitCode, (service) => {
+        const conceptText = readText(conceptFile);
+        let ownName: unknown;
+        try {
+          ownName = (JSON.parse(conceptText) as { name?: unknown } | null)?.name;
+        } catch {
+          ownName = undefined; // the save below reports the JSON error with its place
+        }
+        service.openProject({ file });
+        const name = (options.name ?? (typeof ownName === 'string' && ownName.trim() !== '' ? ownName : basename(conceptFile, extname(conceptFile)))).trim();
+        if (service.listConcepts({}).some((concept) => concept.name === name)) {
+          throw new InputError(`a concept "${name}" already exists in ${file}; choose another with --name (or add a version to it with: loftpoint project save)`, undefined, '--name');
+        }
+        let saved;
+        try {
+          saved = service.saveVersion({
+            conceptText,
+            conceptName: name,
+            parent: null,
+            note: options.note ?? `Imported from ${basename(conceptFile)}.`,
+            ...(options.author !== undefined ? { author: options.author } : {}),
+          });
+        } catch (error) {
+          if (error instanceof projects().ServiceFailure && error.error.code === 'invalid-concept') {
+            const issues = error.error.issues ?? [];
+            const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
+            const first = issues[0];
+            throw new InputError(`${first?.message ?? 'is not a valid concept'}${more}; nothing was imported`, conceptFile, first?.path || undefined);
+          }
+          throw error;
+        }
+        for (const warning of saved.warnings) io.err(`loftpoint: warning: ${conceptFile}: ${warning}\n`);
+        io.out(`${saved.version.number}\n`);
       })(),
     );
 
@@ -185,11 +254,11 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .command('show')
     .description("Print one version's concept JSON exactly as saved.")
     .argument('<file>', 'the project file')
-    .argument('<version>', 'version number')
+    .argument('<version>', 'version: project-wide number N, or CONCEPT@N for a concept\'s N-th version')
     .action((file: string, version: string) =>
       run(io, setExitCode, (service) => {
-        const number = versionNumber(version, 'VERSION');
         service.openProject({ file, readonly: true });
+        const number = versionNumber(service, version, 'VERSION');
         io.out(service.getVersion({ version: number }).conceptText);
       })(),
     );
@@ -198,15 +267,15 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .command('compare')
     .description('Compare two versions: requirements, assumptions, optimum, design point, margins.')
     .argument('<file>', 'the project file')
-    .argument('<a>', 'the earlier version')
-    .argument('<b>', 'the later version')
+    .argument('<a>', 'the earlier version (N, or CONCEPT@N)')
+    .argument('<b>', 'the later version (N, or CONCEPT@N; any concept of the project)')
     .option('--json', 'print the comparison as JSON')
     .option('--units <system>', 'si, us or kt-ft (default: the project preference)')
     .action((file: string, a: string, b: string, options: { json?: boolean; units?: string }) =>
       run(io, setExitCode, (service) => {
-        const numbers = { a: versionNumber(a, 'A'), b: versionNumber(b, 'B') };
         const units = unitsOption(options.units);
         const info = service.openProject({ file, readonly: true });
+        const numbers = { a: versionNumber(service, a, 'A'), b: versionNumber(service, b, 'B') };
         const comparison = service.compareVersions(numbers);
         io.out(options.json ? `${JSON.stringify(comparison, null, 2)}\n` : projects().comparisonText(comparison, units ?? info.units));
       })(),
@@ -216,13 +285,13 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .command('export')
     .description('Export the whole project, or one version, as JSON (stdout, or --out FILE).')
     .argument('<file>', 'the project file')
-    .option('--version <n>', 'export only this version')
+    .option('--version <n>', 'export only this version (N, or CONCEPT@N)')
     .option('--out <file>', 'write to this file instead of stdout (never replaces an existing file without --force)')
     .option('--force', 'with --out: replace an existing file (never a read-only one)')
     .action((file: string, options: { version?: string; out?: string; force?: boolean }) =>
       run(io, setExitCode, (service) => {
-        const number = options.version === undefined ? undefined : versionNumber(options.version, '--version');
         service.openProject({ file, readonly: true });
+        const number = options.version === undefined ? undefined : versionNumber(service, options.version, '--version');
         const document = number === undefined ? service.exportProject({}) : service.exportVersion({ version: number });
         const text = `${JSON.stringify(document, null, 2)}\n`;
         if (options.out === undefined) {

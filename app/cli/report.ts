@@ -49,7 +49,7 @@ export function registerReport(program: Command, io: CliIO, setExitCode: SetExit
         'Preliminary sizing only.',
     )
     .argument('<file>', 'a concept JSON file, or a project file with --version')
-    .option('--version <n>', 'the stored version to report (project files only)')
+    .option('--version <n>', 'the stored version to report (project files only): the project-wide number N, or CONCEPT@N for that concept\'s N-th version')
     .option('--out <path>', 'the file to write: .html, .pdf, .svg, .png or .csv (replaces only an earlier Loftpoint output)')
     .option('--force', 'replace an existing --out file even if Loftpoint did not write it (never a read-only one)')
     .option('--units <system>', 'units of the report: si, us or kt-ft', 'si')
@@ -175,7 +175,7 @@ async function runReport(file: string, options: ReportOptions): Promise<string> 
       const svg = reportDiagramSvg({ design, evaluation, system, studies });
       content = output.kind === 'svg' ? markSvg(svg) : markPng(await svgToPng(svg, STUDY_DIAGRAM_SIZE, { binary: chromium as string }));
     } else {
-      const version = options.version !== undefined ? await versionInfo(file, Number(options.version)) : undefined;
+      const version = input.versionNumber !== undefined ? await versionInfo(file, input.versionNumber) : undefined;
       const html = buildReport({
         concept: input.concept,
         design,

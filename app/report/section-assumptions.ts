@@ -54,7 +54,7 @@ export function assumptionsSection(ctx: ReportContext, studies: ReportStudies | 
     const typical = studies.ranges === 'typical';
     parts.push(typical ? '<h3>Typical ranges used by the studies</h3>' : '<h3>Ranged assumptions</h3>');
     if (typical) {
-      parts.push(paragraph('The concept gives no ranges. The studies below use the typical ranges of the methods reference (section 9) for every assumption that has one, uniform over the range and widened where needed to contain the concept’s own value. They show which assumptions could move the design point; they are not the concept’s own uncertainty.', 'notice'));
+      parts.push(paragraph('The concept gives no ranges. The studies below use the typical ranges of the methods reference (section 9) for every assumption that has one: the band of the concept’s stated case (aircraft class, runway surface) or the one holding its own value, widened where needed to contain that value, drawn triangularly with the peak at the concept’s own value. They show which assumptions could move the design point; they are not the concept’s own uncertainty.', 'notice'));
     }
     const rows = studies.rows.map((row) => [
       markup(`${text(row.label)}<span class="label">${text(row.field)}</span>`),
@@ -62,9 +62,9 @@ export function assumptionsSection(ctx: ReportContext, studies: ReportStudies | 
       plainNumber(row.nominal),
       plainNumber(row.high),
       row.distribution,
-      ...(typical ? [cell(row.source ?? '—', 'small')] : []),
+      ...(typical ? [cell(row.basis ? `${row.basis} (Loftpoint methods reference, section 9)` : (row.source ?? '—'), 'small')] : []),
     ]);
-    parts.push(table(['Assumption', 'Low', 'Nominal', 'High', 'Distribution', ...(typical ? ['Source'] : [])], rows, { numeric: [1, 2, 3] }));
+    parts.push(table(['Assumption', 'Low', 'Nominal', 'High', 'Distribution', ...(typical ? ['Range used and why'] : [])], rows, { numeric: [1, 2, 3] }));
   } else {
     parts.push(paragraph('No assumption carries a range, and none has a published typical range to study.', 'muted'));
   }

@@ -54,12 +54,13 @@ export function marginsSection(ctx: ReportContext): string {
     return [
       cell(r.id, 'id'),
       kindTitle(r.kind),
-      ...(byPoint ? [cell(formatMargin(atPoint), atPoint < 0 ? 'bad' : undefined)] : []),
       formatMargin(marginValue(evaluation.optimum?.margins, r.id)),
+      ...(byPoint ? [cell(formatMargin(atPoint), atPoint < 0 ? 'bad' : undefined)] : []),
       notes,
     ];
   });
-  const header = ['Id', 'Kind', ...(byPoint ? ['At design point'] : []), 'At optimum', 'Note'];
+  // Optimum first, then design point, in every table (the CLI text and the window alike).
+  const header = ['Id', 'Kind', 'At optimum', ...(byPoint ? ['At design point'] : []), 'Note'];
   const body = [
     table(header, rows, { numeric: byPoint ? [2, 3] : [2] }),
     paragraph(`Tightest first, by the margin at the ${byPoint ? 'design point' : 'optimum'}. A curve’s margin is the loading there over the loading it needs, less one; a limit’s is one less the wing loading over the limit.`, 'small muted'),
@@ -74,6 +75,8 @@ function sizingRows(ctx: ReportContext, sizing: SizingJson | null): string[] {
   const engines = ctx.design.aircraft.propulsion.engines;
   return [
     formatQuantity(sizing?.wingArea, 'area', ctx.system),
+    formatQuantity(sizing?.span, 'dimension', ctx.system),
+    formatQuantity(sizing?.meanChord, 'dimension', ctx.system),
     formatQuantity(total, quantity, ctx.system),
     formatQuantity(sizing?.perEngine ?? (total !== undefined ? total / engines : undefined), quantity, ctx.system),
   ];
@@ -87,13 +90,13 @@ export function sizingSection(ctx: ReportContext): string {
   const atOptimum = optimum && optimumLoading !== undefined ? sizingAt(design.aircraft, evaluation.axis, optimum.wingLoading, optimumLoading) : null;
   const point = evaluation.designPoint;
   const atPoint = point ? evaluation.sizing : null;
-  const names = ['Wing area S', `Installed ${thrust ? 'thrust' : 'power'} (sea level, all engines)`, `Per engine (${design.aircraft.propulsion.engines})`];
+  const names = ['Wing area S', `Span b (aspect ratio ${design.aircraft.aspectRatio})`, 'Mean chord S/b', `Installed ${thrust ? 'thrust' : 'power'} (sea level, all engines)`, `Per engine (${design.aircraft.propulsion.engines})`];
   const optimumValues = sizingRows(ctx, atOptimum);
   const pointValues = point ? sizingRows(ctx, atPoint) : [];
-  const rows = names.map((name, i) => [name, ...(point ? [pointValues[i]] : []), optimumValues[i]]);
+  const rows = names.map((name, i) => [name, optimumValues[i], ...(point ? [pointValues[i]] : [])]);
   const weight = formatQuantity(design.aircraft.takeoffMassKg, 'mass', system);
   const body = [
-    table(['', ...(point ? ['Design point'] : []), 'Optimum'], rows, { numeric: point ? [1, 2] : [1] }),
+    table(['', 'Optimum', ...(point ? ['Design point'] : [])], rows, { numeric: point ? [1, 2] : [1] }),
     paragraph(`At take-off mass ${weight}: S = W / (W/S) and ${thrust ? 'T = (T/W) W' : 'P = (P/W) W'} (methods reference, section 7).`, 'small muted'),
   ].join('\n');
   return section('sizing', 'Sizing', body);

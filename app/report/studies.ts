@@ -51,6 +51,8 @@ export interface RangeRow {
   distribution: Distribution;
   /** Where a typical range comes from (core/methods.md); absent for the concept's own ranges. */
   source?: string;
+  /** Which typical range was used and why (core typicalRange); absent for the concept's own ranges. */
+  basis?: string;
 }
 
 export interface ReportStudies {
@@ -125,8 +127,16 @@ export function runStudies(input: StudyInput, monteCarlo?: { map: ProbabilityMap
     : timed(() => (parameters.length > 0 ? probabilityMap(design, parameters, { seed, samples, grid }) : null));
   const [costs, costsMs] = timed(() => requirementCosts(design, { step }));
   const rows = parameters.map((p): RangeRow => {
-    const source = ranges === 'typical' ? typicalRange(p.field, design)?.source : undefined;
-    return { field: p.field, label: p.label, low: p.low, nominal: p.nominal, high: p.high, distribution: p.distribution, ...(source ? { source } : {}) };
+    const typical = ranges === 'typical' ? typicalRange(p.field, design) : null;
+    return {
+      field: p.field,
+      label: p.label,
+      low: p.low,
+      nominal: p.nominal,
+      high: p.high,
+      distribution: p.distribution,
+      ...(typical ? { source: typical.source, basis: typical.basis } : {}),
+    };
   });
   return {
     ranges,

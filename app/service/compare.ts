@@ -112,7 +112,7 @@ export function compareVersions(a: VersionDetail, b: VersionDetail): VersionComp
   const areaAfter = sb.sizing?.wingArea ?? null;
   const installedBefore = installed(sa);
   const installedAfter = installed(sb);
-  const versionRef = (v: VersionDetail) => ({ number: v.number, conceptName: v.conceptName, createdAt: v.createdAt, author: v.author });
+  const versionRef = (v: VersionDetail) => ({ number: v.number, conceptVersion: v.conceptVersion, conceptName: v.conceptName, createdAt: v.createdAt, author: v.author });
   return {
     format: 'loftpoint-comparison/1',
     a: versionRef(a),

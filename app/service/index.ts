@@ -9,6 +9,7 @@ export { defaultAuthor } from './request-checks';
 export { ServiceFailure, toServiceError } from './failure';
 export { invokeService } from './invoke';
 export { getStoredVersion, isProjectFile, isSqliteFile } from './stored';
+export { parseVersionRef, conceptVersionNumber, type VersionName } from './version-ref';
 export { compareVersions } from './compare';
 export { versionsText, comparisonText } from './text';
 export { summarise } from './summary';

@@ -118,6 +118,7 @@ export class ProjectService implements ServiceHandlers {
   #summary(row: VersionRow): VersionSummary {
     return {
       number: row.number,
+      conceptVersion: row.conceptVersion,
       conceptId: row.conceptId,
       conceptName: row.conceptName,
       parent: row.parent,

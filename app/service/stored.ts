@@ -6,14 +6,25 @@
 import { closeSync, openSync, readSync, statSync } from 'node:fs';
 import type { VersionDetail } from './contract';
 import { ProjectService } from './service';
+import { ServiceFailure } from './failure';
+import { conceptVersionNumber, type VersionName } from './version-ref';
 import { APPLICATION_ID } from '../store/schema';
 
-/** The stored version `number` of the project `file`, exactly as saved. Throws ServiceFailure or StoreError. */
-export function getStoredVersion(file: string, number: number): VersionDetail {
+/**
+ * The stored version of the project `file` named by `ref` (a project-wide
+ * number, or a concept's own version number), exactly as saved. Throws
+ * ServiceFailure or StoreError.
+ */
+export function getStoredVersion(file: string, ref: number | VersionName): VersionDetail {
   const service = new ProjectService();
   try {
     service.openProject({ file, readonly: true });
-    return service.getVersion({ version: number });
+    if (typeof ref === 'object' && ref.kind === 'concept') {
+      const number = conceptVersionNumber(ref, service.listVersions({}));
+      if (typeof number !== 'number') throw new ServiceFailure('not-found', `${file}: ${number.error}`, { file, field: 'version' });
+      return service.getVersion({ version: number });
+    }
+    return service.getVersion({ version: typeof ref === 'number' ? ref : ref.number });
   } finally {
     service.closeProject({});
   }

@@ -42,13 +42,14 @@ export function versionsText(versions: readonly VersionSummary[], units: UnitSys
   const rows = versions.map((version) => [
     String(version.number),
     clip(version.conceptName, 28),
+    `v${version.conceptVersion}`,
     version.parent === null ? '—' : String(version.parent),
     shortTime(version.createdAt),
     clip(version.author, 16),
     version.summary.error ? 'not evaluated' : pointText(version.summary.optimum, version.summary.axis, units),
     clip((version.note.split(/\r?\n/, 1)[0] ?? '').trim(), 48) + (version.tags.length > 0 ? ` [${version.tags.join(', ')}]` : ''),
   ]);
-  return `${projectName}\n${table(['#', 'concept', 'parent', 'saved (UTC)', 'author', 'optimum', 'note'], rows)}\n${PRELIMINARY_CAUTION}\n`;
+  return `${projectName}\n${table(['#', 'concept', 'its v', 'parent', 'saved (UTC)', 'author', 'optimum', 'note'], rows)}\n${PRELIMINARY_CAUTION}\n`;
 }
 
 function written(value: unknown): string {
@@ -95,7 +96,7 @@ function marginLines(title: string, margins: readonly MarginChange[]): string[] 
 export function comparisonText(comparison: VersionComparison, units: UnitSystem): string {
   const { a, b } = comparison;
   const lines: string[] = [
-    `Version ${a.number} ("${a.conceptName}", ${shortTime(a.createdAt)}, ${a.author}) -> version ${b.number} ("${b.conceptName}", ${shortTime(b.createdAt)}, ${b.author})`,
+    `Version ${a.number} ("${a.conceptName}" v${a.conceptVersion}, ${shortTime(a.createdAt)}, ${a.author}) -> version ${b.number} ("${b.conceptName}" v${b.conceptVersion}, ${shortTime(b.createdAt)}, ${b.author})`,
     '',
   ];
   const { added, removed, changed } = comparison.requirements;

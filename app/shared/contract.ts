@@ -135,7 +135,10 @@ export interface EvaluationSummary {
 }
 
 export interface VersionSummary {
+  /** The project-wide version number: what `--version N` and every request name. */
   number: number;
+  /** Its number within its concept, as users see it (v1, v2, ...); versions are never removed, so it never changes. */
+  conceptVersion: number;
   conceptId: number;
   conceptName: string;
   /** The version this one was edited from, or null. */
@@ -196,6 +199,8 @@ export interface MarginChange {
 
 export interface VersionRef {
   number: number;
+  /** Its number within its concept (v1, v2, ...). */
+  conceptVersion: number;
   conceptName: string;
   createdAt: string;
   author: string;

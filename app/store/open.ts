@@ -22,6 +22,12 @@ export interface OpenedFile {
   readonlyReason?: string;
   /** Schema version after migration (in memory only, for a read-only file of an older schema). */
   schemaVersion: number;
+  /**
+   * Opened for reading by choice, in a writable place, with no -wal or -shm
+   * beside it before: the -wal and -shm a reader makes are its own to tidy
+   * on closing (tidyReaderFiles).
+   */
+  tidyOnClose?: boolean;
 }
 
 /** Why `file` cannot be written, or undefined when it can. Mode bits count even for a superuser. */
@@ -79,6 +85,7 @@ export function openProjectFile(path: string, options: { readonly?: boolean } = 
 
   const reason = options.readonly ? 'it was opened for reading only' : readOnlyReason(file);
   const readonly = reason !== undefined;
+  const tidyOnClose = options.readonly === true && readOnlyReason(file) === undefined && !existsSync(`${file}-wal`) && !existsSync(`${file}-shm`);
   let db: Connection | undefined;
   try {
     db = readonly ? connectReadOnly(file) : connect(file, { fileMustExist: true, timeout: BUSY_TIMEOUT_MS });
@@ -104,10 +111,33 @@ export function openProjectFile(path: string, options: { readonly?: boolean } = 
       if (readonly) db = inMemoryCopy(db);
       schemaVersion = migrate(db);
     }
-    return { db, file, readonly, readonlyReason: reason, schemaVersion };
+    return { db, file, readonly, readonlyReason: reason, schemaVersion, ...(tidyOnClose ? { tidyOnClose } : {}) };
   } catch (error) {
     db?.close();
     throw fromSqliteError(error, file);
+  }
+}
+
+/**
+ * A reader of a WAL database leaves the -wal and -shm it made behind when it
+ * closes (only a writer may checkpoint). After a read-only store closes, one
+ * writable connection opened and closed again checkpoints the empty log and
+ * removes both, unless another connection (the window, another command) still
+ * has the file open, in which case SQLite keeps them for it. The project's
+ * content is not changed. Best effort: a failure leaves the files as they were.
+ */
+export function tidyReaderFiles(file: string): void {
+  if (!existsSync(`${file}-wal`) && !existsSync(`${file}-shm`)) return;
+  try {
+    const db = connect(file, { fileMustExist: true, timeout: 0 });
+    try {
+      // SQLite opens the log only when the connection first reads.
+      db.pragma('user_version', { simple: true });
+    } finally {
+      db.close();
+    }
+  } catch {
+    // Busy or not writable after all: the next writer tidies them.
   }
 }
 

@@ -7,7 +7,7 @@
 import type Database from 'better-sqlite3';
 import type { Connection } from './native';
 import { StoreError, fromSqliteError } from './errors';
-import type { OpenedFile } from './open';
+import { tidyReaderFiles, type OpenedFile } from './open';
 
 export interface ProjectRow {
   name: string;
@@ -27,6 +27,8 @@ export interface ConceptRow {
 
 export interface VersionRow {
   number: number;
+  /** Its place among its concept's versions: 1 for the first, 2 for the next (the project-wide number is `number`). */
+  conceptVersion: number;
   conceptId: number;
   conceptName: string;
   parent: number | null;
@@ -53,7 +55,9 @@ export interface NewVersion {
   createdAt: string;
 }
 
-const VERSION_COLUMNS = `v.number, v.concept_id AS conceptId, c.name AS conceptName, v.parent, v.evaluation_json AS evaluationJson,
+const VERSION_COLUMNS = `v.number,
+  (SELECT count(*) FROM version w WHERE w.concept_id = v.concept_id AND w.number <= v.number) AS conceptVersion,
+  v.concept_id AS conceptId, c.name AS conceptName, v.parent, v.evaluation_json AS evaluationJson,
   v.note, v.author, v.created_at AS createdAt,
   (SELECT json_group_array(tag) FROM (SELECT tag FROM version_tag t WHERE t.version = v.number ORDER BY tag)) AS tagsJson`;
 
@@ -88,7 +92,10 @@ export class ProjectStore {
     this.readonly = opened.readonly;
     this.readonlyReason = opened.readonlyReason;
     this.schemaVersion = opened.schemaVersion;
+    this.#tidyOnClose = 'tidyOnClose' in opened && opened.tidyOnClose === true;
   }
+
+  readonly #tidyOnClose: boolean;
 
   /** A prepared statement, compiled once per connection. */
   #prepare(sql: string): Database.Statement {
@@ -253,6 +260,8 @@ export class ProjectStore {
   }
 
   close(): void {
-    if (this.db.open) this.db.close();
+    if (!this.db.open) return;
+    this.db.close();
+    if (this.#tidyOnClose) tidyReaderFiles(this.file);
   }
 }

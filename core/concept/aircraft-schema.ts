@@ -4,6 +4,7 @@
  */
 import { z } from 'zod';
 import { PROPULSION_KINDS, type PropulsionKind } from '../model';
+import { AIRCRAFT_CLASSES } from '../assumptions/study-case';
 import { LAPSE_MODELS } from '../propulsion/turbine-lapse';
 import { quantityField } from './quantity-field';
 
@@ -65,6 +66,8 @@ export const aircraftShape = {
   takeoffMass: quantityField('mass', { above: 0 }).optional(),
   aero: z.strictObject(aeroShape),
   propulsion: z.strictObject(propulsionShape),
+  /** Optional: which kind of aircraft, so the studies start from that kind's typical ranges. */
+  class: z.enum(AIRCRAFT_CLASSES).optional(),
 };
 
 export const aircraftSchema = z.strictObject(aircraftShape);

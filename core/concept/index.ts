@@ -7,6 +7,8 @@ export type { ConceptJson, RequirementJson } from './schema';
 export { parseConcept, parseConceptText, type ParsedConcept, type ConceptUncertainty } from './parse';
 export {
   migrateConcept,
+  renameOlderFields,
+  RENAMED_REQUIREMENT_FIELDS,
   createConceptMigrator,
   CONCEPT_MIGRATIONS,
   type ConceptMigration,

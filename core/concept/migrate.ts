@@ -19,6 +19,47 @@ export interface ConceptMigration {
 /** The formats before CONCEPT_FORMAT, oldest first. Only /1 exists so far. */
 export const CONCEPT_MIGRATIONS: readonly ConceptMigration[] = [];
 
+/**
+ * Fields renamed within loftpoint-concept/1, per requirement kind: every speed
+ * factor is named after its speed (`approachSpeedFactor`, `climbSpeedFactor`,
+ * like `liftoffSpeedFactor`, `minimumSpeedFactor`, `touchdownSpeedFactor`,
+ * `v2SpeedFactor`). Files with the older name read exactly as before, with no
+ * warning; saving writes the new name.
+ */
+export const RENAMED_REQUIREMENT_FIELDS: readonly { kind: string; from: string; to: string }[] = [
+  { kind: 'approach-speed', from: 'speedFactor', to: 'approachSpeedFactor' },
+  { kind: 'climb-gradient', from: 'speedFactor', to: 'climbSpeedFactor' },
+];
+
+/**
+ * The document with every older field name of RENAMED_REQUIREMENT_FIELDS
+ * under its new name (a new document; the input is not changed), or the first
+ * requirement that gives both names.
+ */
+export function renameOlderFields(document: ConceptDocument): { ok: true; concept: ConceptDocument } | { ok: false; issues: ConceptIssue[] } {
+  const requirements = document.requirements;
+  if (!Array.isArray(requirements)) return { ok: true, concept: document };
+  let changed = false;
+  const renamed: unknown[] = [];
+  for (const [i, requirement] of requirements.entries()) {
+    let next = requirement;
+    if (requirement !== null && typeof requirement === 'object' && !Array.isArray(requirement)) {
+      const record = requirement as Record<string, unknown>;
+      for (const { kind, from, to } of RENAMED_REQUIREMENT_FIELDS) {
+        if (record.kind !== kind || !(from in record)) continue;
+        if (to in record) {
+          return { ok: false, issues: [{ path: `requirements[${i}].${from}`, message: `is the older name of ${to}, which is also given; keep only ${to}` }] };
+        }
+        // Same place in the object, new key.
+        next = Object.fromEntries(Object.entries(next as Record<string, unknown>).map(([key, value]) => [key === from ? to : key, value]));
+        changed = true;
+      }
+    }
+    renamed.push(next);
+  }
+  return { ok: true, concept: changed ? { ...document, requirements: renamed } : document };
+}
+
 export type MigrationResult =
   | { ok: true; concept: ConceptDocument; warnings: WarningJson[] }
   | { ok: false; issues: ConceptIssue[] };
@@ -61,6 +102,9 @@ export function createConceptMigrator(migrations: readonly ConceptMigration[], c
       if (document.format !== migration.to) return refuse('format', `migration from "${format}" did not produce "${migration.to}"`);
       format = migration.to;
     }
+    const renamed = renameOlderFields(document);
+    if (!renamed.ok) return renamed;
+    document = renamed.concept;
     const warnings: WarningJson[] =
       start === current
         ? []

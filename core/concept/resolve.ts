@@ -76,6 +76,7 @@ function resolveAircraft(aircraft: AircraftJson, takeoffMassKg: number, warnings
     });
   }
   return {
+    ...(aircraft.class !== undefined ? { class: aircraft.class } : {}),
     takeoffMassKg,
     aspectRatio: aircraft.aero.aspectRatio,
     cdLinear: aircraft.aero.cdLinear ?? DEFAULT_CD_LINEAR,

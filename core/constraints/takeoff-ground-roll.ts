@@ -9,11 +9,14 @@ import type { BoundaryOf } from '../boundary';
 import type { RequirementCommon } from '../requirements/common';
 import { shaftPowerLoading } from '../propulsion/propeller';
 import { flightCondition } from './flight-condition';
+import type { RunwaySurface } from '../assumptions/study-case';
 
 export interface TakeoffGroundRollRequirement extends RequirementCommon {
   kind: 'takeoff-ground-roll';
   distanceM: number;
   rollingFriction: number;
+  /** The surface the concept states for the run; only the studies read it (rolling friction's typical band). */
+  runwaySurface?: RunwaySurface;
   clGroundRun: number;
   liftoffSpeedFactor: number;
 }

@@ -36,7 +36,8 @@ export function approachSpeedBoundary(r: ApproachSpeedRequirement, aircraft: Air
 
 const shape = {
   speed: positiveSpeed,
-  speedFactor: speedFactor.optional(),
+  /** Approach speed over stall speed; files before it read `speedFactor` (core/concept/migrate.ts). */
+  approachSpeedFactor: speedFactor.optional(),
 };
 
 export const approachSpeed = defineRequirement<'approach-speed', ApproachSpeedRequirement, typeof shape>({
@@ -46,7 +47,7 @@ export const approachSpeed = defineRequirement<'approach-speed', ApproachSpeedRe
   shape,
   resolve: (r, si) => ({
     speedMps: si(r.speed, 'speed', NaN),
-    speedFactor: r.speedFactor ?? 1.3,
+    speedFactor: r.approachSpeedFactor ?? 1.3,
   }),
   drawnAs: 'limit',
   boundary: approachSpeedBoundary,
@@ -56,9 +57,9 @@ export const approachSpeed = defineRequirement<'approach-speed', ApproachSpeedRe
   atmosphere: { altitude: false, temperature: false },
   editorFields: [
     { key: 'speed', title: 'Approach speed (CAS)', value: speedValue(), required: true },
-    { key: 'speedFactor', title: 'Approach speed / stall speed', value: numberValue(), defaultText: '1.3' },
+    { key: 'approachSpeedFactor', title: 'Approach speed / stall speed', value: numberValue(), defaultText: '1.3' },
   ],
-  newRequirement: { speed: '70 kt', speedFactor: 1.3 },
+  newRequirement: { speed: '70 kt', approachSpeedFactor: 1.3 },
   summary: (r, system) => [`${formatQuantity(r.speedMps, 'speed', system)} CAS`, `at ${plain(r.speedFactor)} × stall speed`],
   costStep: { field: 'speedMps', conceptField: 'speed', relaxed: 'up' },
   typicalRanges: [],

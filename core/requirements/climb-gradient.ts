@@ -26,7 +26,8 @@ const gradient = z.custom<number | string>((input) => gradientProblem(input) ===
 const shape = {
   gradient,
   enginesInoperative: z.number().int().gte(0).optional(),
-  speedFactor: speedFactor.optional(),
+  /** Climb speed over stall speed; files before it read `speedFactor` (core/concept/migrate.ts). */
+  climbSpeedFactor: speedFactor.optional(),
 };
 
 const per = (value: number) => `${value} %`;
@@ -42,42 +43,42 @@ const PART_23_RULES: TemplateRow[] = [
   ...(['landplane', 'seaplane'] as const).map((type) => ({
     code: 'part-23' as const,
     id: `14cfr-23.65a-${type}`, title: `All-engine take-off climb, ${type}`, source: '14 CFR 23.65(a)',
-    note: `Steady gradient ${type === 'landplane' ? '8.3' : '6.7'} % at sea level, maximum continuous power, gear up, take-off flaps, at least 1.2 V_S1 (speedFactor 1.2).`,
-    requirement: { kind: 'climb-gradient', gradient: per(type === 'landplane' ? 8.3 : 6.7), altitude: '0 ft', speedFactor: 1.2 },
+    note: `Steady gradient ${type === 'landplane' ? '8.3' : '6.7'} % at sea level, maximum continuous power, gear up, take-off flaps, at least 1.2 V_S1 (climbSpeedFactor 1.2).`,
+    requirement: { kind: 'climb-gradient', gradient: per(type === 'landplane' ? 8.3 : 6.7), altitude: '0 ft', climbSpeedFactor: 1.2 },
   })),
   {
     code: 'part-23',
     id: '14cfr-23.65b', title: 'All-engine take-off climb, 4 %', source: '14 CFR 23.65(b)',
-    note: 'Steady gradient 4 % for turbine airplanes and reciprocating airplanes over 6000 lb; speedFactor 1.2 stands for the rule\'s climb speed.',
-    requirement: { kind: 'climb-gradient', gradient: per(4), altitude: '0 ft', speedFactor: 1.2 },
+    note: 'Steady gradient 4 % for turbine airplanes and reciprocating airplanes over 6000 lb; climbSpeedFactor 1.2 stands for the rule\'s climb speed.',
+    requirement: { kind: 'climb-gradient', gradient: per(4), altitude: '0 ft', climbSpeedFactor: 1.2 },
   },
   {
     code: 'part-23',
     id: '14cfr-23.67a1', title: 'One engine inoperative climb at 5000 ft, 1.5 %', source: '14 CFR 23.67(a)(1)',
     note: 'Steady gradient 1.5 % at 5000 ft pressure altitude with one engine inoperative, flaps up, at least 1.2 V_S1.',
     engines: 2, configurations: ['clean'],
-    requirement: { kind: 'climb-gradient', gradient: per(1.5), altitude: '5000 ft', enginesInoperative: 1, speedFactor: 1.2 },
+    requirement: { kind: 'climb-gradient', gradient: per(1.5), altitude: '5000 ft', enginesInoperative: 1, climbSpeedFactor: 1.2 },
   },
   ...([['a', 3.3], ['b', 2.5], ['c', 3.2]] as const).map(([paragraph, value]) => ({
     code: 'part-23' as const,
     id: `14cfr-23.77${paragraph}`, title: `Balked landing climb, ${value} %`, source: `14 CFR 23.77(${paragraph})`,
-    note: `Steady gradient ${value} % at sea level, take-off power, landing flaps, at V_REF; speedFactor 1.3 stands for V_REF (at least 1.3 V_S0, 14 CFR 23.73(c)). See 23.77 for which paragraph applies.`,
+    note: `Steady gradient ${value} % at sea level, take-off power, landing flaps, at V_REF; climbSpeedFactor 1.3 stands for V_REF (at least 1.3 V_S0, 14 CFR 23.73(c)). See 23.77 for which paragraph applies.`,
     configurations: ['landing'],
-    requirement: { kind: 'climb-gradient', gradient: per(value), altitude: '0 ft', speedFactor: 1.3 },
+    requirement: { kind: 'climb-gradient', gradient: per(value), altitude: '0 ft', climbSpeedFactor: 1.3 },
   })),
   ...([['landplane', 8.3], ['seaplane', 6.7], ['4-percent', 4]] as const).map(([variant, value]) => ({
     code: 'part-23' as const,
     id: `14cfr-23.2120a-${variant}`, title: `All-engine climb, ${value} %`, source: '14 CFR 23.2120(a) (Amendment 23-64)',
-    note: `Gradient ${value} %${variant === '4-percent' ? ' for the airplanes 23.2120(a) names' : ` for ${variant}s`}; the conditions (power, configuration, speed) come from the accepted means of compliance; speedFactor 1.2 is a proxy.`,
-    requirement: { kind: 'climb-gradient', gradient: per(value), altitude: '0 ft', speedFactor: 1.2 },
+    note: `Gradient ${value} %${variant === '4-percent' ? ' for the airplanes 23.2120(a) names' : ` for ${variant}s`}; the conditions (power, configuration, speed) come from the accepted means of compliance; climbSpeedFactor 1.2 is a proxy.`,
+    requirement: { kind: 'climb-gradient', gradient: per(value), altitude: '0 ft', climbSpeedFactor: 1.2 },
   })),
   ...([['b1', 1.5, '5000 ft'], ['b2', 1, '400 ft'], ['b3', 2, '400 ft']] as const).map(([paragraph, value, altitude]) => ({
     code: 'part-23' as const,
     id: `14cfr-23.2120${paragraph}`, title: `One engine inoperative climb at ${altitude}, ${value} %`,
     source: `14 CFR 23.2120(${paragraph[0]})(${paragraph[1]}) (Amendment 23-64)`,
-    note: `Gradient ${value} % at ${altitude} with one engine inoperative, for the airplanes the paragraph names; speedFactor 1.2 is a proxy for the climb speed.`,
+    note: `Gradient ${value} % at ${altitude} with one engine inoperative, for the airplanes the paragraph names; climbSpeedFactor 1.2 is a proxy for the climb speed.`,
     engines: 2, configurations: paragraph === 'b1' ? ['clean'] : undefined,
-    requirement: { kind: 'climb-gradient', gradient: per(value), altitude, enginesInoperative: 1, speedFactor: 1.2 },
+    requirement: { kind: 'climb-gradient', gradient: per(value), altitude, enginesInoperative: 1, climbSpeedFactor: 1.2 },
   })),
 ];
 
@@ -86,38 +87,38 @@ const PART_25_RULES: TemplateRow[] = [
     {
       code: 'part-25',
       id: `14cfr-25.121a-${engines}eng`, title: `Take-off climb, gear down, one engine out, ${engines} engines`, source: '14 CFR 25.121(a)',
-      note: `Gradient ${a === 0 ? 'positive (0 % is the bound)' : `${a} %`} with the critical engine inoperative, gear down, take-off flaps, at V_LOF; speedFactor 1.2 stands for V_LOF.`,
+      note: `Gradient ${a === 0 ? 'positive (0 % is the bound)' : `${a} %`} with the critical engine inoperative, gear down, take-off flaps, at V_LOF; climbSpeedFactor 1.2 stands for V_LOF.`,
       engines,
-      requirement: { kind: 'climb-gradient', gradient: per(a), altitude: '0 ft', enginesInoperative: 1, speedFactor: 1.2 },
+      requirement: { kind: 'climb-gradient', gradient: per(a), altitude: '0 ft', enginesInoperative: 1, climbSpeedFactor: 1.2 },
     },
     {
       code: 'part-25',
       id: `14cfr-25.121b-${engines}eng`, title: `Second segment, one engine out, ${engines} engines`, source: '14 CFR 25.121(b)',
-      note: `Gradient ${b} % with the critical engine inoperative, gear up, take-off flaps, at V2; speedFactor 1.2 stands for V2 (a proxy: V2 is at least 1.13 V_SR, 14 CFR 25.107, from memory).`,
+      note: `Gradient ${b} % with the critical engine inoperative, gear up, take-off flaps, at V2; climbSpeedFactor 1.2 stands for V2 (a proxy: V2 is at least 1.13 V_SR, 14 CFR 25.107, from memory).`,
       engines,
-      requirement: { kind: 'climb-gradient', gradient: per(b), altitude: '0 ft', enginesInoperative: 1, speedFactor: 1.2 },
+      requirement: { kind: 'climb-gradient', gradient: per(b), altitude: '0 ft', enginesInoperative: 1, climbSpeedFactor: 1.2 },
     },
     {
       code: 'part-25',
       id: `14cfr-25.121c-${engines}eng`, title: `Final take-off climb, one engine out, ${engines} engines`, source: '14 CFR 25.121(c); 25.111(c)(3)',
-      note: `Gradient ${c} % with the critical engine inoperative, en-route configuration, at the final take-off speed; speedFactor 1.2 is a proxy for that speed.`,
+      note: `Gradient ${c} % with the critical engine inoperative, en-route configuration, at the final take-off speed; climbSpeedFactor 1.2 is a proxy for that speed.`,
       engines, configurations: ['clean'],
-      requirement: { kind: 'climb-gradient', gradient: per(c), altitude: '0 ft', enginesInoperative: 1, speedFactor: 1.2 },
+      requirement: { kind: 'climb-gradient', gradient: per(c), altitude: '0 ft', enginesInoperative: 1, climbSpeedFactor: 1.2 },
     },
     {
       code: 'part-25',
       id: `14cfr-25.121d-${engines}eng`, title: `Approach climb, one engine out, ${engines} engines`, source: '14 CFR 25.121(d)',
-      note: `Gradient ${d} % with the critical engine inoperative, approach configuration, at no more than 1.4 V_SR (speedFactor 1.4, the rule's upper bound).`,
+      note: `Gradient ${d} % with the critical engine inoperative, approach configuration, at no more than 1.4 V_SR (climbSpeedFactor 1.4, the rule's upper bound).`,
       engines, configurations: ['approach', 'landing'],
-      requirement: { kind: 'climb-gradient', gradient: per(d), altitude: '0 ft', enginesInoperative: 1, speedFactor: 1.4 },
+      requirement: { kind: 'climb-gradient', gradient: per(d), altitude: '0 ft', enginesInoperative: 1, climbSpeedFactor: 1.4 },
     },
   ]),
   {
     code: 'part-25',
     id: '14cfr-25.119', title: 'Landing climb, all engines, 3.2 %', source: '14 CFR 25.119',
-    note: 'Gradient 3.2 % with all engines, landing configuration, at V_REF; speedFactor 1.23 stands for V_REF (at least 1.23 V_SR0, 14 CFR 25.125, from memory).',
+    note: 'Gradient 3.2 % with all engines, landing configuration, at V_REF; climbSpeedFactor 1.23 stands for V_REF (at least 1.23 V_SR0, 14 CFR 25.125, from memory).',
     configurations: ['landing'],
-    requirement: { kind: 'climb-gradient', gradient: per(3.2), altitude: '0 ft', speedFactor: 1.23 },
+    requirement: { kind: 'climb-gradient', gradient: per(3.2), altitude: '0 ft', climbSpeedFactor: 1.23 },
   },
 ];
 
@@ -129,7 +130,7 @@ export const climbGradient = defineRequirement<'climb-gradient', ClimbGradientRe
   resolve: (r, si) => ({
     gradient: si(r.gradient, 'fraction', NaN),
     enginesInoperative: r.enginesInoperative ?? 0,
-    speedFactor: r.speedFactor ?? 1.2,
+    speedFactor: r.climbSpeedFactor ?? 1.2,
   }),
   drawnAs: 'curve',
   boundary: climbGradientBoundary,
@@ -139,8 +140,14 @@ export const climbGradient = defineRequirement<'climb-gradient', ClimbGradientRe
   atmosphere: { altitude: true, temperature: true },
   editorFields: [
     { key: 'gradient', title: 'Climb gradient', value: { type: 'percent' }, required: true },
-    { key: 'enginesInoperative', title: 'Engines inoperative', value: numberValue(true), defaultText: '0' },
-    { key: 'speedFactor', title: 'Climb speed / stall speed', value: numberValue(), defaultText: '1.2', advanced: true },
+    {
+      key: 'enginesInoperative',
+      title: 'Engines inoperative',
+      value: numberValue(true),
+      defaultText: '0',
+      help: "With engines out, name the configuration the rule flies in (for a second segment: take-off flaps, gear up) and give it its own CD0 increment holding the windmilling and trim drag (0.003-0.005 above that configuration's own, common practice); the default take-off configuration has neither.",
+    },
+    { key: 'climbSpeedFactor', title: 'Climb speed / stall speed', value: numberValue(), defaultText: '1.2', advanced: true },
   ],
   newRequirement: { gradient: '2.4 %' },
   summary: (r) => [
@@ -172,6 +179,7 @@ A curve: a steady climb at gradient G = sin(gamma) (0.024 for 2.4 %), at a speed
 
 - k_V: climb speed over stall speed, 1.2 by default; with V/V_s fixed, q/w is constant, so the jet boundary is flat and the propeller boundary grows as sqrt(w).
 - Engine-out drag (windmilling, trim) is the configuration's CD0 increment (0.003-0.005 typical, common practice); it is not added by itself.
+- Which configuration a one-engine-out climb uses: the one the rule flies in, named in the requirement's \`configuration\`. The take-off climb segments (14 CFR 25.121(a) and (b)) fly with take-off flaps, the second segment with the gear up; the final take-off climb flies clean (en-route); the approach climb with approach flaps. Give that configuration its own entry (e.g. \`engine-out\` or \`second-segment\`) whose CD0 increment is the flaps' and gear's plus the windmilling and trim drag, and whose C_Lmax is the flap setting's. Left unnamed, the requirement uses the take-off configuration, which carries no engine-out drag.
 - Propeller aircraft: eta_p 0.75 by default. No power or thrust is left when every engine is out; the engine warns instead of drawing.
 - Certification gradients (14 CFR 23.65, 23.67, 23.77, 23.2120; 25.119, 25.121) are offered as templates with their rule named; the rule's speed is stood for by k_V.
 - Source: Mattingly, Heiser and Pratt, *Aircraft Engine Design*; Raymer, *Aircraft Design: A Conceptual Approach*, ch. 5 (engine-out factor).`,

@@ -37,6 +37,8 @@ export interface EditorField {
   propellerOnly?: boolean;
   /** Typical range [low, high] in SI for assumptions, with a note. */
   typical?: { low: number; high: number; note: string };
+  /** One sentence the editor prints under the field: what to give with it. */
+  help?: string;
 }
 
 /** Turns a value written in the file into SI (already validated). */

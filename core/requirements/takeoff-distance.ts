@@ -4,6 +4,7 @@
  * Design: A Conceptual Approach, ch. 17).
  */
 import { z } from 'zod';
+import { RUNWAY_SURFACES } from '../assumptions/study-case';
 import { CL_GROUND_RUN, PROPELLER_CLIMB, PROPELLER_TAKEOFF, ROLLING_FRICTION } from '../assumptions/typical-ranges';
 import { stallSpeed } from '../aero/speeds';
 import { dragCoefficient } from '../aero/drag-polar';
@@ -18,12 +19,15 @@ import { formatQuantity } from '../units/display';
 import type { RequirementCommon } from './common';
 import { defineRequirement } from './descriptor';
 import { lengthValue, mark, numberValue, plain, speedFactor } from './fields';
+import type { RunwaySurface } from '../assumptions/study-case';
 
 export interface TakeoffDistanceRequirement extends RequirementCommon {
   kind: 'takeoff-distance';
   distanceM: number;
   obstacleHeightM: number;
   rollingFriction: number;
+  /** The surface the concept states for the run; only the studies read it (rolling friction's typical band). */
+  runwaySurface?: RunwaySurface;
   clGroundRun: number;
   liftoffSpeedFactor: number;
   rotationTimeS: number;
@@ -115,6 +119,7 @@ const shape = {
   distance: quantityField('length', { above: 0 }),
   obstacleHeight: quantityField('length', { from: 0, below: 1000 }).optional(),
   rollingFriction: z.number().gte(0).lt(1).optional(),
+  runwaySurface: z.enum(RUNWAY_SURFACES).optional(),
   clGroundRun: z.number().gte(0).optional(),
   liftoffSpeedFactor: speedFactor.optional(),
   rotationTime: quantityField('time', { from: 0, below: 60 }).optional(),
@@ -130,6 +135,7 @@ export const takeoffDistance = defineRequirement<'takeoff-distance', TakeoffDist
     distanceM: si(r.distance, 'length', NaN),
     obstacleHeightM: si(r.obstacleHeight, 'length', 50 * FOOT_M),
     rollingFriction: r.rollingFriction ?? 0.04,
+    ...(r.runwaySurface !== undefined ? { runwaySurface: r.runwaySurface } : {}),
     clGroundRun: r.clGroundRun ?? 0.5,
     liftoffSpeedFactor: r.liftoffSpeedFactor ?? 1.1,
     rotationTimeS: si(r.rotationTime, 'time', 3),

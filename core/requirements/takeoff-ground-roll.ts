@@ -3,6 +3,7 @@
  * lift-off within the distance.
  */
 import { z } from 'zod';
+import { RUNWAY_SURFACES } from '../assumptions/study-case';
 import { CL_GROUND_RUN, PROPELLER_TAKEOFF, ROLLING_FRICTION } from '../assumptions/typical-ranges';
 import { takeoffGroundRollBoundary, type TakeoffGroundRollRequirement } from '../constraints/takeoff-ground-roll';
 import { quantityField } from '../concept/quantity-field';
@@ -15,6 +16,7 @@ export type { TakeoffGroundRollRequirement };
 const shape = {
   distance: quantityField('length', { above: 0 }),
   rollingFriction: z.number().gte(0).lt(1).optional(),
+  runwaySurface: z.enum(RUNWAY_SURFACES).optional(),
   clGroundRun: z.number().gte(0).optional(),
   liftoffSpeedFactor: speedFactor.optional(),
 };
@@ -27,6 +29,7 @@ export const takeoffGroundRoll = defineRequirement<'takeoff-ground-roll', Takeof
   resolve: (r, si) => ({
     distanceM: si(r.distance, 'length', NaN),
     rollingFriction: r.rollingFriction ?? 0.04,
+    ...(r.runwaySurface !== undefined ? { runwaySurface: r.runwaySurface } : {}),
     clGroundRun: r.clGroundRun ?? 0.5,
     liftoffSpeedFactor: r.liftoffSpeedFactor ?? 1.1,
   }),

@@ -5,8 +5,10 @@
  * engineer edits them.
  */
 import { configurationRole } from '../assumptions/configuration-role';
+import type { Distribution } from './random';
 import type { TypicalBand } from '../assumptions/typical-range';
-import { ASPECT_RATIO, CD0_CLEAN, CD0_INCREMENT, CLMAX, OSWALD } from '../assumptions/typical-ranges';
+import { AIRCRAFT_CLASS_WORDS, RUNWAY_SURFACE_WORDS, type AircraftClass, type RunwaySurface } from '../assumptions/study-case';
+import { ASPECT_RATIO, CD0_CLEAN, CD0_INCREMENT, CLMAX, OSWALD, ROLLING_FRICTION } from '../assumptions/typical-ranges';
 import type { Design, Requirement } from '../model';
 import { propulsionKind } from '../propulsion/kinds';
 import { requirementKind } from '../requirements';
@@ -20,9 +22,34 @@ export interface TypicalRange {
   source: string;
   /** True when the published range was widened to contain the concept's own value. */
   widened: boolean;
+  /** Triangular with its peak at the concept's own value, so the studies weight it most. */
+  distribution: 'triangular';
+  /** Which published range was used and why, in words, ending with the peak. */
+  basis: string;
 }
 
 const SOURCE_PREFIX = 'Loftpoint methods reference, section 9: ';
+
+/** Band indexes of core/assumptions/typical-ranges.ts by case; absent: that case has no band of its own. */
+const ASPECT_RATIO_BY_CLASS: Partial<Record<AircraftClass, number>> = { 'light-aircraft': 0, transport: 2 };
+const CD0_BY_CLASS: Record<AircraftClass, number> = { 'light-aircraft': 0, 'business-jet': 1, transport: 2, 'small-uav': 3, sailplane: 4 };
+const ROLLING_FRICTION_BY_SURFACE: Record<RunwaySurface, number> = { paved: 0, grass: 1, soft: 2 };
+
+/** The published band the concept's stated case picks for this field, with the case in words; null: no case applies. */
+function caseBand(ref: FieldRef, design: Design): { band: TypicalBand; why: string } | null {
+  const cls = design.aircraft.class;
+  if (cls && ref.key === 'aspectRatio') {
+    const i = ASPECT_RATIO_BY_CLASS[cls];
+    return i === undefined ? null : { band: ASPECT_RATIO.bands[i] as TypicalBand, why: `aircraft class ${AIRCRAFT_CLASS_WORDS[cls]}` };
+  }
+  if (cls && ref.key === 'cd0') return { band: CD0_CLEAN.bands[CD0_BY_CLASS[cls]] as TypicalBand, why: `aircraft class ${AIRCRAFT_CLASS_WORDS[cls]}` };
+  if (ref.scope === 'requirement' && ref.key === 'rollingFriction') {
+    const requirement = design.requirements.find((r) => r.id === ref.id);
+    const surface = requirement && 'runwaySurface' in requirement ? requirement.runwaySurface : undefined;
+    if (surface) return { band: ROLLING_FRICTION.bands[ROLLING_FRICTION_BY_SURFACE[surface]] as TypicalBand, why: `runway surface ${RUNWAY_SURFACE_WORDS[surface]}` };
+  }
+  return null;
+}
 
 /** The published bands for one rangeable field of a design, most likely first; empty: none published. */
 function typicalBands(ref: FieldRef, design: Design): readonly TypicalBand[] {
@@ -52,33 +79,44 @@ function typicalBands(ref: FieldRef, design: Design): readonly TypicalBand[] {
   return descriptor.typicalRanges.find((entry) => entry.key === ref.key)?.range.bands ?? [];
 }
 
+const shown = (x: number) => String(Number(x.toPrecision(4)));
+
 /**
- * The published range for this field of this design: the first candidate
- * that contains the concept's value, else the nearest one widened to contain
- * it. Null for a valid field with no published range (cdLinear) or a field
+ * The published range for this field of this design, and why: the band the
+ * concept's stated case picks (aircraft class, runway surface), else the
+ * first band that holds the concept's value, else the nearest band; widened
+ * to contain the concept's value when it lies outside. The studies draw from
+ * it triangularly, peaking at the concept's value (core/methods.md, section
+ * 9). Null for a valid field with no published range (cdLinear) or a field
  * the design does not have.
  */
 export function typicalRange(field: string, design: Design): TypicalRange | null {
   const found = fieldRef(field, design);
   if (!found.ok) return null;
-  const candidates = typicalBands(found.ref, design).map((b) => ({ ...b, source: `${SOURCE_PREFIX}${b.source}` }));
-  if (candidates.length === 0) return null;
+  const bands = typicalBands(found.ref, design);
+  if (bands.length === 0) return null;
   const nominal = nominalOf(found.ref, design);
-  const containing = candidates.find((r) => r.low <= nominal && nominal <= r.high);
-  if (containing) return { field, low: containing.low, high: containing.high, source: containing.source, widened: false };
+  const byCase = caseBand(found.ref, design);
+  const containing = bands.find((r) => r.low <= nominal && nominal <= r.high);
   const distance = (r: TypicalBand) => Math.max(r.low - nominal, nominal - r.high);
-  const nearest = candidates.reduce((best, r) => (distance(r) < distance(best) ? r : best));
-  return { field, low: Math.min(nearest.low, nominal), high: Math.max(nearest.high, nominal), source: nearest.source, widened: true };
+  const chosen = byCase?.band ?? containing ?? bands.reduce((best, r) => (distance(r) < distance(best) ? r : best));
+  const why = byCase ? `${byCase.why}: ${chosen.source}` : containing ? `the band holding the concept's value: ${chosen.source}` : `no band holds the concept's value; nearest: ${chosen.source}`;
+  const low = Math.min(chosen.low, nominal);
+  const high = Math.max(chosen.high, nominal);
+  const widened = low < chosen.low || high > chosen.high;
+  const basis = `${why}${widened ? `, widened to ${shown(low)}-${shown(high)} to contain the concept's value` : ''}; triangular, peaking at the concept's ${shown(nominal)}`;
+  return { field, low, high, source: `${SOURCE_PREFIX}${chosen.source}`, widened, distribution: 'triangular', basis };
 }
 
 /**
  * An `uncertainty` block ranging every assumption of the design that has a
- * published typical range, uniform over it: a starting point to edit.
+ * published typical range, triangular over it with the peak at the
+ * concept's own value: a starting point to edit.
  */
 export function typicalUncertainty(design: Design, options: { seed?: number; samples?: number } = {}) {
   const parameters = rangeableFields(design)
     .map((field) => typicalRange(field, design))
     .filter((range): range is TypicalRange => range !== null)
-    .map(({ field, low, high }) => ({ field, low, high, distribution: 'uniform' as const }));
+    .map(({ field, low, high, distribution }) => ({ field, low, high, distribution: distribution as Distribution }));
   return { seed: options.seed ?? DEFAULT_SEED, samples: options.samples ?? DEFAULT_SAMPLES, parameters };
 }

@@ -28,6 +28,8 @@ export type DisplayQuantity =
   | 'speed'
   | 'mass'
   | 'length'
+  /** A dimension of the aircraft itself (span, chord): finer than a runway's length. */
+  | 'dimension'
   | 'altitude'
   | 'climbRate';
 
@@ -49,6 +51,7 @@ const SI_DISPLAY: Record<DisplayQuantity, DisplayUnit> = {
   speed: { unit: 'm/s', fromSi: 1, digits: 1 },
   mass: { unit: 'kg', fromSi: 1, digits: 0 },
   length: { unit: 'm', fromSi: 1, digits: 0 },
+  dimension: { unit: 'm', fromSi: 1, digits: 2 },
   altitude: { unit: 'm', fromSi: 1, digits: 0 },
   climbRate: { unit: 'm/s', fromSi: 1, digits: 2 },
 };
@@ -60,6 +63,7 @@ const DISPLAY: Record<UnitSystem, Record<DisplayQuantity, DisplayUnit>> = {
     ...SI_DISPLAY,
     speed: { unit: 'kt', fromSi: 1 / KNOT_MPS, digits: 0 },
     length: { unit: 'ft', fromSi: 1 / FOOT_M, digits: 0 },
+    dimension: { unit: 'ft', fromSi: 1 / FOOT_M, digits: 1 },
     altitude: { unit: 'ft', fromSi: 1 / FOOT_M, digits: 0 },
     climbRate: { unit: 'ft/min', fromSi: 1 / FOOT_PER_MINUTE_MPS, digits: 0 },
   },
@@ -73,6 +77,7 @@ const DISPLAY: Record<UnitSystem, Record<DisplayQuantity, DisplayUnit>> = {
     speed: { unit: 'kt', fromSi: 1 / KNOT_MPS, digits: 1 },
     mass: { unit: 'lb', fromSi: 1 / POUND_KG, digits: 0 },
     length: { unit: 'ft', fromSi: 1 / FOOT_M, digits: 0 },
+    dimension: { unit: 'ft', fromSi: 1 / FOOT_M, digits: 1 },
     altitude: { unit: 'ft', fromSi: 1 / FOOT_M, digits: 0 },
     climbRate: { unit: 'ft/min', fromSi: 1 / FOOT_PER_MINUTE_MPS, digits: 0 },
   },

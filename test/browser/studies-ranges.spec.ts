@@ -75,7 +75,9 @@ test('ranges: typical ranges, bands, the chance study with contours, cancel, and
 
   // A change to the concept greys the result until it is run again.
   await window.byTest('tab-ranges').click();
-  await aspect.getByTestId('range-distribution').selectOption('triangular');
+  // Typical ranges are filled in triangular (peaking at the concept's value); uniform is a change.
+  await expect(aspect.getByTestId('range-distribution')).toHaveValue('triangular');
+  await aspect.getByTestId('range-distribution').selectOption('uniform');
   await expect(window.byTest('study-result')).toHaveAttribute('data-stale', 'true');
   await expect(window.byTest('contours')).toHaveAttribute('data-stale', 'true');
   await window.shot('study-stale');
@@ -112,7 +114,7 @@ test('ranges: typical ranges, bands, the chance study with contours, cancel, and
   await expect(window.byTest('study-seed')).toHaveValue('4242');
   await expect(window.byTest('study-samples')).toHaveValue('50000');
   await expect(window.byTest('range-aircraft_aero_aspectRatio')).toHaveAttribute('data-included', 'true');
-  await expect(window.byTest('range-aircraft_aero_aspectRatio').getByTestId('range-distribution')).toHaveValue('triangular');
+  await expect(window.byTest('range-aircraft_aero_aspectRatio').getByTestId('range-distribution')).toHaveValue('uniform');
   await window.shot('reopened-version');
   await window.expectNoNaN();
 });

@@ -169,7 +169,7 @@ describe('loftpoint project versions, show, compare', () => {
     const { file } = await demoProject();
     const table = await cli('project', 'versions', file);
     expect(table.code).toBe(0);
-    expect(table.out).toMatch(/#\s+concept\s+parent\s+saved \(UTC\)\s+author\s+optimum\s+note/);
+    expect(table.out).toMatch(/#\s+concept\s+its v\s+parent\s+saved \(UTC\)\s+author\s+optimum\s+note/);
     for (const demo of DEMO_CONCEPTS) expect(table.out).toContain(demo.title.slice(0, 20));
     expect(table.out.trimEnd().endsWith(PRELIMINARY_CAUTION)).toBe(true);
     expect(table.out).not.toMatch(/NaN|undefined/);

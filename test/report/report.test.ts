@@ -121,6 +121,31 @@ describe('buildReport', () => {
     expect(sizing).toContain(formatQuantity(mass.takeoff, 'mass', 'si'));
   });
 
+  it('puts the optimum column before the design-point column in every table that has both', () => {
+    let tables = 0;
+    for (const table of trainer.querySelectorAll('table')) {
+      const heads = [...table.querySelectorAll('th')].map((th) => (th.textContent ?? '').toLowerCase());
+      const optimum = heads.findIndex((h) => h.includes('optimum') && !h.includes('design point'));
+      const point = heads.findIndex((h) => h.includes('design point'));
+      if (optimum < 0 || point < 0) continue;
+      tables++;
+      expect(optimum, heads.join(' | ')).toBeLessThan(point);
+    }
+    // The points, requirements, margins and sizing tables all have both.
+    expect(tables).toBeGreaterThanOrEqual(4);
+  });
+
+  it('sizes span and mean chord from wing area and aspect ratio', () => {
+    // The trainer's design point: S = 750 x 9.80665 / 650 = 11.3154 m^2 (g0, CGPM 1901), AR 7.4:
+    // b = sqrt(7.4 x 11.3154) = 9.1506 m, c = S/b = 1.2366 m (AR = b^2/S, Anderson, Introduction to Flight).
+    const rows = [...trainer.querySelectorAll('#sizing tr')].map((tr) => [...tr.children].map((c) => c.textContent ?? ''));
+    const span = rows.find((r) => r[0]?.startsWith('Span b'));
+    const chord = rows.find((r) => r[0]?.startsWith('Mean chord'));
+    expect(span?.[0]).toContain('aspect ratio 7.4');
+    expect(span?.[2]).toBe('9.15 m');
+    expect(chord?.[2]).toBe('1.24 m');
+  });
+
   it('never prints NaN, undefined or Infinity', () => {
     expect(trainer.body.textContent).not.toMatch(/NaN|undefined|Infinity|\[object/);
   });
@@ -204,8 +229,8 @@ describe('buildReport', () => {
             parent: 1,
             changesSinceParent: {
               format: 'loftpoint-comparison/1',
-              a: { number: 1, conceptName: 'T', createdAt: '2026-01-01T00:00:00Z', author: 'a' },
-              b: { number: 5, conceptName: 'T', createdAt: '2026-01-15T09:00:00Z', author: 'b' },
+              a: { number: 1, conceptVersion: 1, conceptName: 'T', createdAt: '2026-01-01T00:00:00Z', author: 'a' },
+              b: { number: 5, conceptVersion: 2, conceptName: 'T', createdAt: '2026-01-15T09:00:00Z', author: 'b' },
               axis: { before: 'powerToWeight', after: 'powerToWeight' },
               requirements: { added: [], removed: [], changed: [{ id: 'cruise', kind: 'cruise', fields: [{ path: 'speed', before: '110 kt', after: '115 kt' }] }] },
               assumptions: [{ path: 'aircraft.aero.configurations.landing.clMax', before: 2.05, after: 2.2 }],

@@ -17,6 +17,7 @@ export const businessJet: DemoConcept = {
     name: 'LP-60 light business jet',
     aircraft: {
       // A starting guess: the mission below closes the take-off mass.
+      class: 'business-jet',
       takeoffMass: '7400 kg',
       aero: {
         aspectRatio: 8.6,
@@ -73,7 +74,7 @@ export const businessJet: DemoConcept = {
         kind: 'approach-speed',
         label: 'VREF at most 115 kt CAS at landing mass, flown at 1.23 VSR0 (14 CFR 25.125)',
         speed: '115 kt',
-        speedFactor: 1.23,
+        approachSpeedFactor: 1.23,
         massFraction: 0.85,
       },
       {

@@ -16,6 +16,7 @@ export const surveyDrone: DemoConcept = {
     name: 'LP-S4 survey drone',
     aircraft: {
       // A starting guess: the mission below closes the take-off mass.
+      class: 'small-uav',
       takeoffMass: '14 kg',
       aero: {
         aspectRatio: 12,
@@ -38,11 +39,12 @@ export const surveyDrone: DemoConcept = {
       {
         id: 'launch',
         kind: 'takeoff-ground-roll',
-        label: '40 m take-off run on mown grass from a 500 m site on an ISA+15 K day (programme target)',
+        label: '40 m take-off run on mown grass from a site at 500 m elevation on an ISA+15 K day (programme target)',
         distance: '40 m',
         altitude: '500 m',
         temperatureOffset: '15 K',
         rollingFriction: 0.08,
+        runwaySurface: 'grass',
         propellerEfficiency: 0.5,
       },
       {
@@ -59,7 +61,7 @@ export const surveyDrone: DemoConcept = {
       {
         id: 'survey-cruise',
         kind: 'cruise',
-        label: '20 m/s at 120 m above a 500 m site on 50 % power, for long endurance (battery mass stays constant)',
+        label: '20 m/s at 120 m above the site (620 m altitude) on 50 % power, for long endurance (battery mass stays constant)',
         speed: '20 m/s',
         altitude: '620 m',
         temperatureOffset: '15 K',

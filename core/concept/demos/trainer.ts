@@ -17,6 +17,7 @@ export const trainer: DemoConcept = {
     name: 'LP-2 two-seat trainer',
     aircraft: {
       // A starting guess: the mission below closes the take-off mass.
+      class: 'light-aircraft',
       takeoffMass: '750 kg',
       aero: {
         aspectRatio: 7.4,
@@ -40,11 +41,12 @@ export const trainer: DemoConcept = {
       {
         id: 'takeoff-grass',
         kind: 'takeoff-ground-roll',
-        label: '250 m ground roll on short grass, 800 ft field on an ISA+15 K summer day (club requirement)',
+        label: '250 m take-off ground roll on short grass, field at 800 ft elevation on an ISA+15 K summer day (club requirement)',
         distance: '250 m',
         altitude: '800 ft',
         temperatureOffset: '15 K',
         rollingFriction: 0.05,
+        runwaySurface: 'grass',
       },
       {
         id: 'landing-grass',
@@ -83,7 +85,7 @@ export const trainer: DemoConcept = {
       {
         id: 'ceiling',
         kind: 'ceiling',
-        label: 'Service ceiling 13000 ft at 100 ft/min (textbook definition)',
+        label: 'Service ceiling 13,000 ft pressure altitude at 100 ft/min (textbook definition)',
         altitude: '13000 ft',
       },
     ],

@@ -9,7 +9,7 @@ export const utilityTwin: DemoConcept = {
   slug: 'utility-twin',
   title: 'LP-19 utility twin',
   summary:
-    'A 5,700 kg twin turboprop for people and freight into a 2,200 m gravel strip on ISA+25 K days: a 900 m take-off over 50 ft, a short landing roll, ' +
+    'A 5,700 kg twin turboprop for people and freight into a gravel strip at 2,200 m elevation on ISA+25 K days: a 900 m take-off over 50 ft, a short landing roll, ' +
     'the one-engine-out climb gradient from the strip, and a 230 kt cruise at 12,000 ft.' +
     ` ${DEMO_CAUTION}`,
   concept: {
@@ -50,7 +50,7 @@ export const utilityTwin: DemoConcept = {
       {
         id: 'landing-strip',
         kind: 'landing-ground-roll',
-        label: '450 m ground roll on gravel, same strip, 95 % of take-off mass (operator requirement)',
+        label: '450 m landing ground roll on gravel, same strip at 2,200 m elevation and ISA+25 K, 95 % of take-off mass (operator requirement)',
         distance: '450 m',
         altitude: '2200 m',
         temperatureOffset: '25 K',

@@ -25,7 +25,7 @@ const CASES: BadCase[] = [
   { what: 'a bare number for the mass', change: (c) => (c.aircraft.takeoffMass = 750), path: 'aircraft.takeoffMass', message: /bare number \(750\).*"750 kg"/ },
   { what: 'a missing mass', change: (c) => delete c.aircraft.takeoffMass, path: 'aircraft.takeoffMass', message: /^is required, e\.g\. "750 kg" \(or give a mission, from which the take-off mass is closed\)$/ },
   { what: 'an unknown top-level field', change: (c) => (c.notes = 'x'), path: 'notes', message: /^unknown field/ },
-  { what: 'an unknown field in aircraft', change: (c) => (c.aircraft.foo = 1), path: 'aircraft.foo', message: /^unknown field; fields here: takeoffMass, aero, propulsion$/ },
+  { what: 'an unknown field in aircraft', change: (c) => (c.aircraft.foo = 1), path: 'aircraft.foo', message: /^unknown field; fields here: takeoffMass, aero, propulsion, class$/ },
   {
     what: 'a misspelt field',
     change: (c) => (c.aircraft.aero.configurations.clean.oswald = 0.8),

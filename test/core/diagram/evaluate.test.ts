@@ -107,6 +107,10 @@ describe('evaluateDesign', () => {
     assertRelative(e.sizing!.wingArea, 33.3560, 1e-5);
     assertRelative(e.sizing!.thrust!, 6753.47, 1e-5);
     assertRelative(e.sizing!.perEngine!, 3376.73, 1e-5);
+    // Span and mean chord from AR = b^2/S (Anderson, Introduction to Flight, aspect ratio), AR 7.5, by hand:
+    // b = sqrt(7.5 x 33.356) = sqrt(250.17) = 15.817 m; c = S/b = 33.356/15.817 = 2.1089 m.
+    assertRelative(e.sizing!.span!, 15.817, 1e-4);
+    assertRelative(e.sizing!.meanChord!, 2.1089, 1e-4);
   });
 
   it('reports sea-level EAS speeds at the design point wing loading, with the approach at 1.3 V_s landing', () => {

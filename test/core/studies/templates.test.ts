@@ -28,7 +28,7 @@ describe('REQUIREMENT_TEMPLATES', () => {
     expect(gradients('14 CFR 25.121(b)')).toEqual(['2.4 %', '2.7 %', '3 %']);
     expect(gradients('14 CFR 25.121(c)')).toEqual(['1.2 %', '1.5 %', '1.7 %']);
     expect(gradients('14 CFR 25.121(d)')).toEqual(['2.1 %', '2.4 %', '2.7 %']);
-    expect(bySource('14 CFR 25.121(b)').map((t) => [t.engines, t.requirement.enginesInoperative, t.requirement.speedFactor])).toEqual([
+    expect(bySource('14 CFR 25.121(b)').map((t) => [t.engines, t.requirement.enginesInoperative, t.requirement.climbSpeedFactor])).toEqual([
       [2, 1, 1.2],
       [3, 1, 1.2],
       [4, 1, 1.2],

@@ -32,8 +32,8 @@ describe('typicalRange', () => {
   });
 
   it('picks the class that contains the value, or widens the nearest one to contain it', () => {
-    // Grass strip rolling friction 0.05 lies in the dry-paved class 0.02-0.05 (core/methods.md section 9).
-    expect(range('requirements.takeoff-grass.rollingFriction')).toEqual([0.02, 0.05]);
+    // The utility twin's gravel strip states no surface: its 0.05 lies in the dry-paved class 0.02-0.05 (core/methods.md section 9).
+    expect(range('requirements.takeoff-strip.rollingFriction', demo('utility-twin'))).toEqual([0.02, 0.05]);
     // Business-jet AR 8.6 is outside every class; the nearest (about 10, taken as 9-11) widens down to it.
     const ar = typicalRange('aircraft.aero.aspectRatio', jet.design);
     expect(ar && [ar.low, ar.high, ar.widened]).toEqual([8.6, 11, true]);

@@ -198,7 +198,7 @@ export class ProjectState {
       this.parent = result.value.version.number;
       this.saved = document;
       this.#forgetStoredDraft(this.conceptName);
-      this.status = { kind: 'info', text: `Saved version ${result.value.version.number}.` };
+      this.status = { kind: 'info', text: `Saved version ${result.value.version.number}: v${result.value.version.conceptVersion} of “${result.value.version.conceptName}”.` };
       await Promise.all([this.refreshVersions(), this.refreshConcepts()]);
       return true;
     } finally {
@@ -252,7 +252,7 @@ export class ProjectState {
     this.parent = viewing.number;
     this.saved = document;
     this.workspace.load(document, this.project?.readonly === true);
-    this.status = { kind: 'info', text: `Continuing from version ${viewing.number}; the next save will have it as parent.` };
+    this.status = { kind: 'info', text: `Continuing from version ${viewing.number} (v${viewing.conceptVersion}); the next save will have it as parent.` };
   }
 
   /**

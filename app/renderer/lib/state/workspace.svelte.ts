@@ -3,7 +3,7 @@
  * design it resolves to, and the evaluation the page draws. Every edit and
  * every drag recomputes here, in the page; the service is only for saving.
  */
-import { evaluateDesign, parseConcept, type Design, type Evaluation, type LoadingAxis } from '../../../../core';
+import { evaluateDesign, parseConcept, renameOlderFields, type Design, type Evaluation, type LoadingAxis } from '../../../../core';
 import { setDesignPoint, type ConceptDocument } from '../concept/edit';
 import { History } from './history.svelte';
 import { pointReporter, type PointReport } from './point-report';
@@ -33,6 +33,12 @@ function compute(document: ConceptDocument): Computed {
   }
 }
 
+/** A document with older field names under their current ones, so the editor shows what the file says. */
+function newerNames(document: ConceptDocument): ConceptDocument {
+  const renamed = renameOlderFields(document);
+  return renamed.ok ? (renamed.concept as ConceptDocument) : document;
+}
+
 export class Workspace {
   readonly #history = new History<ConceptDocument>({});
   /** Where the design point is while it is being dragged; null otherwise. */
@@ -43,7 +49,7 @@ export class Workspace {
   readOnly = $state(false);
 
   constructor(initial: ConceptDocument) {
-    this.#history.reset(initial);
+    this.#history.reset(newerNames(initial));
   }
 
   get document(): ConceptDocument {
@@ -113,7 +119,7 @@ export class Workspace {
     this.#dragPoint = null;
     this.#lastGood = null;
     this.readOnly = readOnly;
-    this.#history.reset(document);
+    this.#history.reset(newerNames(document));
   }
 
   dragTo(point: SiPoint): void {

@@ -54,7 +54,7 @@ export function fillTypicalRanges(document: ConceptDocument, design: Design, fie
     if (at >= 0) {
       next[at] = { ...(kept[at] as Entry), low: typical.low, high: typical.high };
     } else {
-      next.push({ field, low: typical.low, high: typical.high });
+      next.push({ field, low: typical.low, high: typical.high, distribution: typical.distribution });
     }
   }
   return setIn(document, ['uncertainty', 'parameters'], next);

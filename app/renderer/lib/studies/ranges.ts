@@ -16,6 +16,8 @@ export interface StudyRange {
   source?: string;
   /** A typical range widened to contain the concept's own value. */
   widened?: boolean;
+  /** Which typical range was used and why; absent for the concept's own. */
+  basis?: string;
 }
 
 export type StudyRanges =
@@ -33,7 +35,7 @@ export function studyRanges(document: { uncertainty?: unknown }, design: Design)
       low: p.low,
       nominal: p.nominal,
       high: p.high,
-      ...(typical ? { source: typical.source, widened: typical.widened } : {}),
+      ...(typical ? { source: typical.source, widened: typical.widened, basis: typical.basis } : {}),
     };
   });
   return { ok: true, whose: found.whose, parameters: found.parameters, ranges };
