@@ -15,3 +15,4 @@ export {
 } from './migrate';
 export * as conceptDefaults from './defaults';
 export { DEMO_CONCEPTS, type DemoConcept } from './demos';
+export { CONCEPT_STARTERS, AIRCRAFT_KINDS, conceptStarter, type AircraftKind, type ConceptStarter } from './starters';
