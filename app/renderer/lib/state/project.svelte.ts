@@ -6,9 +6,12 @@
 import { DEMO_CONCEPTS, evaluateDesign, parseConcept, type Evaluation } from '../../../../core';
 import type {
   ConceptSummary,
+  NewConceptRequest,
   ProjectInfo,
   RemoteService,
+  SaveVersionResponse,
   ServiceError,
+  ServiceResult,
   VersionComparison,
   VersionDetail,
   VersionSummary,
@@ -280,6 +283,87 @@ export class ProjectState {
       return true;
     } finally {
       this.busy = false;
+    }
+  }
+
+  /** A new concept from a kind of aircraft's starting values, switched to; the error (if any) is returned for the form. */
+  async newConcept(name: string, aircraftKind: NewConceptRequest['aircraftKind']): Promise<ServiceError | null> {
+    return this.#addConcept(() => this.#service!.newConcept({ name: name.trim(), aircraftKind }), 'New concept');
+  }
+
+  /** A concept file's text as a new concept; every problem comes back by field and nothing is saved. */
+  async importConcept(conceptText: string, name?: string): Promise<ServiceError | null> {
+    return this.#addConcept(() => this.#service!.importConcept({ conceptText, ...(name?.trim() ? { name: name.trim() } : {}) }), 'Imported concept');
+  }
+
+  async #addConcept(call: () => Promise<ServiceResult<SaveVersionResponse>>, what: string): Promise<ServiceError | null> {
+    if (!this.#service || !this.#canWrite()) return { code: 'read-only', message: 'No writable project is open.' };
+    this.busy = true;
+    try {
+      const result = await call();
+      if (!result.ok) return result.error;
+      this.#leaveView();
+      await this.refreshConcepts();
+      await this.selectConcept(result.value.version.conceptName);
+      const warned = result.value.warnings.length > 0 ? ` (${result.value.warnings.length} warning${result.value.warnings.length > 1 ? 's' : ''})` : '';
+      this.status = { kind: 'info', text: `${what} "${result.value.version.conceptName}" saved as version ${result.value.version.number}${warned}.` };
+      return null;
+    } finally {
+      this.busy = false;
+    }
+  }
+
+  /** Renames a concept; its versions, its unsaved draft and the window's place follow the new name. */
+  async renameConcept(from: string, to: string): Promise<ServiceError | null> {
+    if (!this.#service || !this.#canWrite()) return { code: 'read-only', message: 'No writable project is open.' };
+    const result = await this.#service.renameConcept({ from, to: to.trim() });
+    if (!result.ok) return result.error;
+    const name = result.value.name;
+    const kept = this.#drafts.get(from);
+    if (kept) {
+      this.#drafts.delete(from);
+      this.#drafts.set(name, kept);
+    }
+    this.#moveStoredDraft(from, name);
+    if (this.conceptName === from) {
+      this.conceptName = name;
+      this.#rememberConcept(name);
+      await this.refreshVersions();
+    }
+    await this.refreshConcepts();
+    this.status = { kind: 'info', text: `Concept "${from}" renamed "${name}".` };
+    return null;
+  }
+
+  /** Deletes a concept; the service refuses while it has versions (they are never deleted). */
+  async deleteConcept(name: string): Promise<ServiceError | null> {
+    if (!this.#service || !this.#canWrite()) return { code: 'read-only', message: 'No writable project is open.' };
+    const result = await this.#service.deleteConcept({ name });
+    if (!result.ok) return result.error;
+    this.#drafts.delete(name);
+    this.#forgetStoredDraft(name);
+    await this.refreshConcepts();
+    if (this.conceptName === name) {
+      const next = this.concepts[0];
+      this.conceptName = null;
+      if (next) await this.selectConcept(next.name);
+    }
+    this.status = { kind: 'info', text: `Concept "${name}" deleted.` };
+    return null;
+  }
+
+  #moveStoredDraft(from: string, to: string): void {
+    if (!this.project) return;
+    try {
+      const all = JSON.parse(localStorage.getItem(DRAFT_KEY) ?? '{}') as Record<string, unknown>;
+      const key = `${this.project.file}\n${from}`;
+      if (!(key in all)) return;
+      all[`${this.project.file}\n${to}`] = all[key];
+      delete all[key];
+      localStorage.setItem(DRAFT_KEY, JSON.stringify(all));
+      this.#mirrorDrafts(all);
+    } catch {
+      // Storage disabled: the draft in the page moved already.
     }
   }
 
