@@ -29,6 +29,13 @@ export const CHART_INKS = {
   caution: '#7b4b00',
 } as const;
 
+/**
+ * Inks of design alternatives drawn over the diagram, in the order they are
+ * switched on: darker than the boundary inks' mid-tones and far from the
+ * region's green, so an outline reads as another concept, not a boundary.
+ */
+export const ALTERNATIVE_INKS: readonly string[] = ['#6b3fa0', '#0f6f8f', '#b0480f', '#8a1f5a', '#3f6a12', '#5a4632'];
+
 /** Colour for a requirement kind; an unknown kind (a newer file) draws in the axis ink. */
 export function kindColour(kind: string): string {
   return findRequirementKind(kind)?.colour ?? CHART_INKS.axis;

@@ -67,6 +67,7 @@ export function loadingTop(data: ChartData): number {
   const candidates = [LOADING_HEADROOM * base, ...curveMinima.map((y) => 1.15 * y)];
   if (data.designPoint) candidates.push(1.2 * data.designPoint.loading);
   for (const overlay of data.overlays) if (overlay.optimum) candidates.push(1.2 * overlay.optimum.loading);
+  for (const alternative of data.alternatives) if (alternative.optimum) candidates.push(1.2 * alternative.optimum.loading);
   const top = Math.max(...candidates.filter(Number.isFinite));
   if (top > 0) return top;
   return data.axis === 'thrustToWeight' ? 1 : fallbackPowerTop(data);

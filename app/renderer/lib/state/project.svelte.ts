@@ -28,6 +28,14 @@ export interface Comparison {
   olderEvaluation: Evaluation | null;
 }
 
+/** Another concept drawn over the diagram: its newest saved version, evaluated in the page. */
+export interface Alternative {
+  name: string;
+  version: number;
+  concept: unknown;
+  evaluation: Evaluation;
+}
+
 export interface StatusMessage {
   kind: 'info' | 'error';
   text: string;
@@ -74,7 +82,19 @@ export class ProjectState {
   comparison = $state.raw<Comparison | null>(null);
   status = $state.raw<StatusMessage | null>(null);
   busy = $state(false);
+  /** Concepts chosen to be drawn over the diagram, in the order they were switched on. */
+  overlaid = $state.raw<string[]>([]);
+  /** Their newest versions, evaluated, by concept name. */
+  #alternatives = $state.raw<ReadonlyMap<string, Alternative>>(new Map());
   #stashed: Draft | null = null;
+
+  /** The alternatives to draw, in order, never the concept being worked on; colours follow this order. */
+  readonly alternatives = $derived(
+    this.overlaid.filter((name) => name !== this.conceptName).flatMap((name) => {
+      const found = this.#alternatives.get(name);
+      return found ? [found] : [];
+    }),
+  );
 
   readonly canSave = $derived(this.#canWrite() && this.viewing === null);
   // By content, so undoing back to the saved values is not "unsaved".
@@ -149,6 +169,43 @@ export class ProjectState {
     const concepts = await this.#service.listConcepts({});
     if (concepts.ok) this.concepts = concepts.value;
     else this.#fail(concepts.error);
+    await this.#refreshAlternatives();
+  }
+
+  /** Draws another concept's newest version over the diagram, or stops drawing it. */
+  async overlay(name: string, on: boolean): Promise<void> {
+    this.overlaid = on ? [...this.overlaid.filter((n) => n !== name), name] : this.overlaid.filter((n) => n !== name);
+    await this.#refreshAlternatives();
+  }
+
+  /** Keeps the drawn alternatives on each concept's newest version; a concept that went away (renamed) leaves the list. */
+  async #refreshAlternatives(): Promise<void> {
+    const service = this.#service;
+    if (!service) return;
+    const byName = new Map(this.concepts.map((concept) => [concept.name, concept]));
+    this.overlaid = this.overlaid.filter((name) => byName.get(name)?.latestVersion != null);
+    const next = new Map<string, Alternative>();
+    for (const name of this.overlaid) {
+      const latest = byName.get(name)!.latestVersion!;
+      const known = this.#alternatives.get(name);
+      if (known && known.version === latest) {
+        next.set(name, known);
+        continue;
+      }
+      const detail = await service.getVersion({ version: latest });
+      if (!detail.ok) {
+        this.#fail(detail.error);
+        continue;
+      }
+      const parsed = parseConcept(detail.value.concept);
+      if (!parsed.ok) continue;
+      try {
+        next.set(name, { name, version: latest, concept: detail.value.concept, evaluation: evaluateDesign(parsed.design) });
+      } catch {
+        // A version the engine cannot draw stays off the diagram; its own window says why.
+      }
+    }
+    this.#alternatives = next;
   }
 
   async refreshVersions(): Promise<void> {
@@ -325,6 +382,8 @@ export class ProjectState {
       this.#drafts.set(name, kept);
     }
     this.#moveStoredDraft(from, name);
+    this.overlaid = this.overlaid.map((n) => (n === from ? name : n));
+    this.#alternatives = new Map([...this.#alternatives].map(([key, value]) => (key === from ? [name, { ...value, name }] : [key, value])));
     if (this.conceptName === from) {
       this.conceptName = name;
       this.#rememberConcept(name);
@@ -365,6 +424,17 @@ export class ProjectState {
     } catch {
       // Storage disabled: the draft in the page moved already.
     }
+  }
+
+  /** Every version of every concept, newest first (to compare across concepts). */
+  async allVersions(): Promise<VersionSummary[]> {
+    if (!this.#service) return [];
+    const versions = await this.#service.listVersions({});
+    if (!versions.ok) {
+      this.#fail(versions.error);
+      return [];
+    }
+    return [...versions.value].sort((a, b) => b.number - a.number);
   }
 
   /** Compares two versions: the newer one shown read-only, the older drawn faintly behind. */
@@ -492,6 +562,7 @@ export class ProjectState {
     this.versions = [];
     this.parent = null;
     this.status = null;
+    this.overlaid = [];
     await this.start();
   }
 }
