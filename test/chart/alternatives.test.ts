@@ -100,3 +100,15 @@ describe('alternatives drawn over the diagram', () => {
     expect(svg).not.toMatch(/NaN|Infinity|undefined/);
   });
 });
+
+describe('the view widens to the alternatives', () => {
+  it("the wing-loading axis reaches past an alternative's optimum beyond the concept's own range", () => {
+    const twin = evaluate(DEMO_CONCEPTS[1].concept);
+    const data = chartData(evaluate(trainer()), { alternatives: [{ name: 'Twin', evaluation: twin }] });
+    const [lo, hi] = diagramGeometry(data, FRAME).scales.x.domain();
+    const w = twin.optimum!.wingLoading;
+    expect(w).toBeGreaterThan(data.wingLoadingRange[1]);
+    expect(lo).toBeLessThanOrEqual(data.wingLoadingRange[0]);
+    expect(hi).toBeGreaterThan(w);
+  });
+});
