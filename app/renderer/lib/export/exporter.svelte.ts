@@ -125,6 +125,7 @@ export class Exporter {
       powerLoading: preferences.powerLoading,
       view: this.#parts.view?.current ?? null,
       bands,
+      bandIds: studies?.bandedIds ?? null,
       ...(result ? { map: result.map, ...(studies?.stale ? { contourInk: STALE_CONTOUR_INK } : {}) } : {}),
     });
   }
