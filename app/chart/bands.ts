@@ -8,7 +8,7 @@
 import type { BoundaryBand } from '../../core/studies/bands';
 import type { LoadingAxis } from '../../core/model';
 import { toDisplay, type UnitSystem } from '../../core/units/display';
-import { kindColour } from './palette';
+import { boundaryColours, kindColour } from './palette';
 
 interface BandCommon {
   id: string;
@@ -42,8 +42,9 @@ const shown = (value: number, quantity: 'wingLoading' | LoadingAxis, system: Uni
 /** Bands in display units; a band whose numbers are all undefined is left out. */
 export function bandSeries(bands: readonly BoundaryBand[], axis: LoadingAxis, system: UnitSystem): BandSeries[] {
   const out: BandSeries[] = [];
+  const colours = boundaryColours(bands);
   for (const band of bands) {
-    const common = { id: band.id, kind: band.kind, colour: kindColour(band.kind), fields: [...band.fields] };
+    const common = { id: band.id, kind: band.kind, colour: colours.get(band.id) ?? kindColour(band.kind), fields: [...band.fields] };
     if (band.type === 'limit') {
       const [lo, hi] = band.limits;
       if (Number.isFinite(lo) && Number.isFinite(hi)) {

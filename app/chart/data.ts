@@ -9,6 +9,7 @@ import { displayUnit, toDisplay, type UnitSystem } from '../../core/units/displa
 import { upperEnvelope } from './envelope';
 import { designPointOf, optimumPoint } from './points';
 import { boundarySeries, overlaySeries } from './series';
+import { alternativeSeries } from './alternatives';
 import type { ChartData, CurveSeries, LimitSeries } from './series-types';
 
 export { upperEnvelope } from './envelope';
@@ -22,6 +23,8 @@ export interface ChartDataOptions {
   title?: string;
   /** Other evaluations drawn faintly behind this one, e.g. an earlier version. */
   overlays?: ReadonlyArray<{ name: string; evaluation: Evaluation }>;
+  /** Design alternatives (other concepts) whose region outline and optimum are drawn over this one, each in its own colour. */
+  alternatives?: ReadonlyArray<{ name: string; evaluation: Evaluation }>;
 }
 
 export function chartData(evaluation: Evaluation, options: ChartDataOptions = {}): ChartData {
@@ -45,6 +48,7 @@ export function chartData(evaluation: Evaluation, options: ChartDataOptions = {}
     wingLoadingLimit: tightest,
     envelope: upperEnvelope(curves, wingLoadingRange),
     overlays: (options.overlays ?? []).map(({ name, evaluation: other }) => overlaySeries(name, other, axis, system)),
+    alternatives: (options.alternatives ?? []).map(({ name, evaluation: other }, index) => alternativeSeries(name, index, other, axis, system)),
   };
 }
 

@@ -20,6 +20,8 @@ export interface Geometry {
   curvePaths: Array<{ id: string; d: string }>;
   regionPaths: string[];
   overlayPaths: Array<{ id: string; d: string }>;
+  /** Each drawn alternative's region outline, in pixels, with its colour. */
+  alternativePaths: Array<{ name: string; colour: string; d: string }>;
   labels: Labels;
   /** The notes placed beside marked points (empty unless asked for). */
   notes: PointNote[];
@@ -61,7 +63,7 @@ function polygonPath(polygon: XY[], scales: ChartScales): string {
 }
 
 /** Feasible polygons in the plotted quantity: above the curves for P/W or T/W, below them for W/P. */
-function region(source: ChartData, powerLoading: boolean, domains: Domains): XY[][] {
+function region(source: Pick<ChartData, 'system' | 'envelope' | 'wingLoadingRange' | 'wingLoadingLimit'>, powerLoading: boolean, domains: Domains): XY[][] {
   if (!powerLoading) return feasibleRegion(source, Math.max(domains.y[1], 0));
   const k = powerLoadingFactor(source.system);
   // The W/P region reaches down to W/P = 0, which is P/W without bound: a very tall P/W band.
@@ -86,6 +88,13 @@ export function diagramGeometry(source: ChartData, frame: ChartFrame, options: G
     powerLoading,
     curvePaths: data.curves.map((curve) => ({ id: curve.id, d: runsPath(curve.points, scales) })),
     regionPaths: region(source, powerLoading, domains).map((polygon) => polygonPath(polygon, scales)).filter((d) => d !== ''),
+    alternativePaths: source.alternatives.flatMap((alternative) =>
+      alternative.source
+        ? region(alternative.source, powerLoading, domains)
+            .map((polygon) => ({ name: alternative.name, colour: alternative.colour, d: polygonPath(polygon, scales) }))
+            .filter((path) => path.d !== '')
+        : [],
+    ),
     overlayPaths: data.overlays.flatMap((overlay) => overlay.curves.map((curve) => ({ id: `${overlay.name}:${curve.id}`, d: runsPath(curve.points, scales) }))),
     labels: placeLabels(data, scales, { fontSize, notes }),
     notes,

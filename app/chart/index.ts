@@ -8,5 +8,5 @@
 export { chartData, type ChartData } from './data';
 export type { ChartScales } from './scales';
 export type { Labels } from './labels';
-export { KIND_TITLES, CHART_INKS, kindColour, kindTitle } from './palette';
+export { KIND_TITLES, CHART_INKS, boundaryColours, kindColour, kindTitle } from './palette';
 export { shorten } from './text';

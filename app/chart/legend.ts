@@ -57,6 +57,17 @@ export function legendRows(data: ChartData, powerLoading = false): LegendRow[] {
       details: [data.designPoint.feasible ? 'meets every requirement' : 'misses at least one requirement'],
     });
   }
+  for (const alternative of data.alternatives) {
+    rows.push({
+      id: `alternative:${alternative.name}`,
+      swatch: 'line',
+      colour: alternative.colour,
+      dash: '8 3',
+      bold: true,
+      title: alternative.name,
+      details: [alternative.drawn ? (alternative.optimum ? 'its feasible region and optimum (open diamond)' : 'its feasible region; no optimum') : `not drawn: its diagram is ${data.axis === 'thrustToWeight' ? 'power' : 'thrust'}-to-weight`],
+    });
+  }
   for (const overlay of data.overlays) {
     rows.push({ id: `overlay:${overlay.name}`, swatch: 'line', colour: CHART_INKS.overlay, dash: '5 4', bold: false, title: overlay.name, details: ['drawn behind for comparison'] });
   }

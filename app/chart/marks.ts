@@ -22,6 +22,8 @@ export type MarkRole =
   | 'region'
   | 'overlay'
   | 'overlay-optimum'
+  | 'alternative'
+  | 'alternative-optimum'
   | 'limit'
   | 'curve'
   | 'curve-end'
@@ -82,6 +84,16 @@ function optimumMark(x: number, y: number, title?: string): Mark {
 /** An older version's optimum: the same diamond, open, in the overlay ink. */
 function overlayOptimumMark(x: number, y: number): Mark {
   return { tag: 'path', role: 'overlay-optimum', attrs: { d: diamond(x, y, 6), fill: 'none', stroke: CHART_INKS.overlay, 'stroke-width': 1.4 } };
+}
+
+/** An alternative's optimum: an open diamond in its colour, with its name as a tooltip. */
+function alternativeOptimumMark(name: string, colour: string, x: number, y: number): Mark {
+  return {
+    tag: 'path',
+    role: 'alternative-optimum',
+    attrs: { 'data-id': name, d: diamond(x, y, 6.5), fill: '#ffffff', stroke: colour, 'stroke-width': 2 },
+    children: [part('title', {}, `Optimum of ${name}`)],
+  };
 }
 
 /** The design point around (0, 0): a white ring with a dot; the ring is dashed when the point misses a requirement. */
@@ -220,6 +232,13 @@ export function diagramMarks(geometry: Geometry, options: MarkOptions = {}): Dia
     ...geometry.overlayPaths.filter((overlay) => overlay.d !== '').map((overlay): Mark => ({ tag: 'path', role: 'overlay', attrs: { 'data-id': overlay.id, d: overlay.d, fill: 'none', ...OVERLAY_STYLE } })),
     ...data.overlays.flatMap((overlay) => overlay.limits.map((limit) => limitMark({ ...limit, id: `${overlay.name}:${limit.id}` }, geometry, 'overlay'))),
     ...geometry.regionPaths.map((d): Mark => ({ tag: 'path', role: 'region', attrs: { d, fill: CHART_INKS.feasibleFill, 'fill-opacity': 0.85, stroke: 'none' } })),
+    ...geometry.alternativePaths.map(
+      (path): Mark => ({
+        tag: 'path',
+        role: 'alternative',
+        attrs: { 'data-id': path.name, d: path.d, fill: path.colour, 'fill-opacity': 0.05, stroke: path.colour, 'stroke-width': 2, 'stroke-dasharray': '8 3', 'stroke-linejoin': 'round' },
+      }),
+    ),
   ];
   const boundaries: Mark[] = [
     ...data.limits.map((limit) => limitMark(limit, geometry, 'limit')),
@@ -232,6 +251,9 @@ export function diagramMarks(geometry: Geometry, options: MarkOptions = {}): Dia
   ];
   const markers: Mark[] = [
     ...data.overlays.flatMap((overlay) => (overlay.optimum ? [overlayOptimumMark(scales.x(overlay.optimum.wingLoading), scales.y(overlay.optimum.loading))] : [])),
+    ...data.alternatives.flatMap((alternative) =>
+      alternative.optimum ? [alternativeOptimumMark(alternative.name, alternative.colour, scales.x(alternative.optimum.wingLoading), scales.y(alternative.optimum.loading))] : [],
+    ),
     ...(data.optimum ? [optimumMark(scales.x(data.optimum.wingLoading), scales.y(data.optimum.loading), options.optimumTitle)] : []),
   ];
   const labels: Mark[] = [

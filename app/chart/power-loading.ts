@@ -48,6 +48,7 @@ export function inverted(data: ChartData): ChartData {
       curves: overlay.curves.map((curve) => ({ ...curve, points: curve.points.map(([x, y]) => [x, flip(y)] as [number, number | null]) })),
       optimum: point(overlay.optimum),
     })),
+    alternatives: data.alternatives.map((alternative) => ({ ...alternative, optimum: point(alternative.optimum) })),
   };
 }
 

@@ -10,7 +10,7 @@ import { isDefinedPoint, valueAt, type XY } from './clip';
  * Polygons of the feasible region below `loadingTop`. More than one when a
  * curve cannot be met over part of the range; none when nothing is feasible.
  */
-export function feasibleRegion(data: ChartData, loadingTop: number): XY[][] {
+export function feasibleRegion(data: Pick<ChartData, 'envelope' | 'wingLoadingRange' | 'wingLoadingLimit'>, loadingTop: number): XY[][] {
   const [start] = data.wingLoadingRange;
   const limit = data.wingLoadingLimit;
   if (!(loadingTop > 0) || !(limit > start)) return [];

@@ -67,6 +67,7 @@ export function loadingTop(data: ChartData): number {
   const candidates = [LOADING_HEADROOM * base, ...curveMinima.map((y) => 1.15 * y)];
   if (data.designPoint) candidates.push(1.2 * data.designPoint.loading);
   for (const overlay of data.overlays) if (overlay.optimum) candidates.push(1.2 * overlay.optimum.loading);
+  for (const alternative of data.alternatives) if (alternative.optimum) candidates.push(1.2 * alternative.optimum.loading);
   const top = Math.max(...candidates.filter(Number.isFinite));
   if (top > 0) return top;
   return data.axis === 'thrustToWeight' ? 1 : fallbackPowerTop(data);
@@ -78,7 +79,15 @@ function fallbackPowerTop(data: ChartData): number {
 }
 
 export function chartDomains(data: ChartData): { x: [number, number]; y: [number, number] } {
-  const [lo, hi] = data.wingLoadingRange;
+  let [lo, hi] = data.wingLoadingRange;
+  // Alternatives drawn over the diagram widen the wing-loading range to their optima and the right edges of their regions.
+  for (const alternative of data.alternatives) {
+    const at = [alternative.optimum?.wingLoading, alternative.source?.wingLoadingLimit].filter((w): w is number => w !== undefined && Number.isFinite(w) && w > 0);
+    for (const w of at) {
+      lo = Math.min(lo, 0.85 * w);
+      hi = Math.max(hi, 1.1 * w);
+    }
+  }
   const y = scaleLinear().domain([0, loadingTop(data)]).nice(8).domain() as [number, number];
   return { x: [lo, hi], y };
 }

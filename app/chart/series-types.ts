@@ -4,6 +4,7 @@
  */
 import type { LoadingAxis } from '../../core/model';
 import type { UnitSystem } from '../../core/units/display';
+import type { AlternativeSeries } from './alternatives';
 
 export interface SeriesCommon {
   id: string;
@@ -66,4 +67,6 @@ export interface ChartData {
   /** Upper envelope of the curves at each sample; null where some curve cannot be met. */
   envelope: Array<[number, number | null]>;
   overlays: OverlaySeries[];
+  /** Other concepts' region outlines and optima, each in its own colour. */
+  alternatives: AlternativeSeries[];
 }

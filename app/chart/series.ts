@@ -9,7 +9,7 @@ import { toDisplay, type UnitSystem } from '../../core/units/display';
 import type { BoundarySeries, CurveSeries, LimitSeries, OverlaySeries, SeriesCommon } from './series-types';
 import { optimumPoint } from './points';
 import { drawnIndices } from './drawn-samples';
-import { kindColour, kindDash, kindTitle } from './palette';
+import { kindColour, kindDash, kindShade, kindTitle } from './palette';
 
 /** Labels longer than this are written in the legend; the plot shows the id. */
 export const PLOT_LABEL_CHARS = 26;
@@ -35,7 +35,7 @@ export function boundarySeries(
       label,
       plotLabel: [...label].length <= PLOT_LABEL_CHARS ? label : boundary.id,
       kindTitle: kindTitle(boundary.kind),
-      colour: kindColour(boundary.kind),
+      colour: kindShade(kindColour(boundary.kind), nth),
       dash: kindDash(nth),
       binding: active.has(boundary.id),
     };

@@ -16,6 +16,8 @@ import type { Geometry } from './geometry';
 
 export interface StudySvgOptions extends Omit<SvgOptions, 'layers'> {
   bands?: readonly BoundaryBand[];
+  /** Only these boundaries' bands (by requirement id); absent: every band. Colours stay those of the whole set. */
+  bandIds?: readonly string[] | null;
   /** The Monte Carlo map, on a grid covering the diagram's domains (see diagramGrid). */
   map?: ProbabilityGridValues;
   levels?: readonly number[];
@@ -27,12 +29,14 @@ export interface StudySvgOptions extends Omit<SvgOptions, 'layers'> {
 
 export function studyDiagramSvg(evaluation: Evaluation, options: StudySvgOptions = {}): string {
   const system = options.system ?? 'si';
-  const bands = bandSeries(options.bands ?? [], evaluation.axis, system).filter(bandHasWidth);
+  const bands = bandSeries(options.bands ?? [], evaluation.axis, system)
+    .filter(bandHasWidth)
+    .filter((band) => !options.bandIds || options.bandIds.includes(band.id));
   const contours = options.map ? probabilityContours(options.map, evaluation.axis, system, options.levels ?? PROBABILITY_LEVELS) : [];
   const what = evaluation.axis === 'thrustToWeight' ? 'thrust-to-weight' : options.powerLoading ? 'power loading W/P' : 'power-to-weight';
   const units = system === 'us' ? 'US customary units' : system === 'kt-ft' ? 'knots and feet, SI for mass, area, force and power' : 'SI units';
   const shows = [bands.length > 0 ? 'boundary bands' : '', contours.length > 0 ? 'probability contours' : ''].filter(Boolean).join(' and ');
-  const { bands: _bands, map, levels: _levels, runNote, contourInk, ...plain } = options;
+  const { bands: _bands, bandIds: _bandIds, map, levels: _levels, runNote, contourInk, ...plain } = options;
   let drawn: { geometry: Geometry; marks: ContourMarks } | null = null;
   const contoursOf = (geometry: Geometry): ContourMarks => {
     if (!map) return { lines: [], labels: [] };

@@ -7,7 +7,7 @@ import type { Evaluation } from '../../core/evaluation';
 import { SIZING_CAUTION } from './caution';
 import { chartData, type ChartData, type ChartDataOptions } from './data';
 import { diagramGeometry, type Geometry } from './geometry';
-import type { PointNote } from './labels';
+import { pointNotes } from './point-notes';
 import { legendRows, type LegendRow } from './legend';
 import { markSvg, marksSvg } from './markup';
 import { diagramMarks } from './marks';
@@ -109,36 +109,3 @@ function heading(title: string, data: ChartData, scales: ChartScales, powerLoadi
   ].join('\n');
 }
 
-/** Notes beside the optimum and the design point, in the plotted quantity. */
-function pointNotes(data: ChartData, powerLoading: boolean): PointNote[] {
-  const loading = (value: number) =>
-    data.axis === 'thrustToWeight'
-      ? `T/W ${formatDisplayed(value, 'thrustToWeight', data.system)}`
-      : powerLoading
-        ? `W/P ${value.toFixed(1)} ${data.units.loading}`
-        : formatDisplayed(value, 'powerToWeight', data.system);
-  const notes: PointNote[] = [];
-  if (data.optimum) {
-    notes.push({
-      id: 'optimum',
-      lines: [
-        data.optimum.unbounded ? 'Optimum (at the end of the range)' : 'Optimum',
-        `${formatDisplayed(data.optimum.wingLoading, 'wingLoading', data.system)} · ${loading(data.optimum.loading)}`,
-      ],
-      colour: CHART_INKS.optimum,
-      at: data.optimum,
-    });
-  }
-  if (data.designPoint) {
-    notes.push({
-      id: 'design-point',
-      lines: [
-        data.designPoint.feasible ? 'Design point' : 'Design point: not feasible',
-        `${formatDisplayed(data.designPoint.wingLoading, 'wingLoading', data.system)} · ${loading(data.designPoint.loading)}`,
-      ],
-      colour: CHART_INKS.designPoint,
-      at: data.designPoint,
-    });
-  }
-  return notes;
-}

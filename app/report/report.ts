@@ -36,6 +36,8 @@ export interface ReportInput {
   /** No version because the concept is an unsaved draft in the window (not a concept file). */
   unsavedDraft?: boolean;
   generatedAt?: Date;
+  /** Other concepts drawn over the diagram, each with its region outline and optimum, and listed under it. */
+  alternatives?: ReadonlyArray<{ name: string; evaluation: Evaluation }>;
   /** Studies already run (the command line reuses them for other outputs); run here when absent. */
   studyResults?: ReportStudies;
 }
@@ -60,7 +62,7 @@ export function buildReport(input: ReportInput): string {
     jobSection(ctx),
     requirementsSection(ctx),
     assumptionsSection(ctx, studies),
-    diagramSection(ctx),
+    diagramSection(ctx, input.alternatives ?? []),
     marginsSection(ctx),
     ...(evaluation.mass ? [massSection(ctx, evaluation.mass)] : []),
     `<div class="two-up">\n${sizingSection(ctx)}\n${speedsSection(ctx)}\n</div>`,

@@ -3,7 +3,7 @@
  * every margin (tightest first), the sizing they mean at take-off mass, and
  * the characteristic speeds.
  */
-import { formatMargin, formatQuantity, sizingAt, type SizingJson } from '../../core';
+import { formatMargin, formatQuantity, sizingAt, type Evaluation, type SizingJson } from '../../core';
 import { kindTitle } from '../chart/palette';
 import { constraintDiagramSvg } from '../chart/svg';
 import { loadingOf, marginValue, type ReportContext } from './context';
@@ -13,10 +13,25 @@ export const DIAGRAM_SIZE = { width: 1040, height: 600 } as const;
 /** The study diagram's legend has rows for the bands and contours too. */
 export const STUDY_DIAGRAM_SIZE = { width: 1040, height: 700 } as const;
 
-export function diagramSection(ctx: ReportContext): string {
-  const svg = constraintDiagramSvg(ctx.evaluation, { title: ctx.design.name, system: ctx.system, ...DIAGRAM_SIZE });
-  const body = [inlineSvg(svg, 'diagram', `Constraint diagram of ${ctx.design.name}`), optimumTable(ctx)].join('\n');
+export function diagramSection(ctx: ReportContext, alternatives: ReadonlyArray<{ name: string; evaluation: Evaluation }> = []): string {
+  const svg = constraintDiagramSvg(ctx.evaluation, { title: ctx.design.name, system: ctx.system, alternatives, ...DIAGRAM_SIZE });
+  const body = [inlineSvg(svg, 'diagram', `Constraint diagram of ${ctx.design.name}`), optimumTable(ctx), alternativesTable(ctx, alternatives)].filter(Boolean).join('\n');
   return section('diagram', 'Constraint diagram, optimum and design point', body);
+}
+
+/** The alternatives drawn over the diagram: each one's optimum beside this concept's. */
+function alternativesTable(ctx: ReportContext, alternatives: ReadonlyArray<{ name: string; evaluation: Evaluation }>): string {
+  if (alternatives.length === 0) return '';
+  const rows = [ctx.design.name, ...alternatives.map((alternative) => alternative.name)].map((name, index) => {
+    const evaluation = index === 0 ? ctx.evaluation : alternatives[index - 1].evaluation;
+    if (evaluation.axis !== ctx.evaluation.axis) return [name, '—', 'other vertical axis: not drawn', '—'];
+    const optimum = evaluation.optimum;
+    return [name, ctx.wingLoading(optimum?.wingLoading), ctx.loading(loadingOf(optimum, evaluation)), optimum ? optimum.active.join(', ') || '—' : 'no optimum'];
+  });
+  return [
+    paragraph('Alternatives drawn over the diagram (dashed outline of each feasible region, open diamond at its optimum), each at its newest saved version:', 'small'),
+    table(['Concept', 'Optimum W/S', `Optimum ${ctx.axisSymbol}`, 'Bound by'], rows, { numeric: [1, 2], className: 'alternatives' }),
+  ].join('\n');
 }
 
 function optimumTable(ctx: ReportContext): string {

@@ -11,11 +11,14 @@ import type {
   CompareVersionsRequest,
   ConceptSummary,
   CreateProjectRequest,
+  DeleteConceptRequest,
   Empty,
   EvaluationSummary,
+  ImportConceptRequest,
   ImportProjectRequest,
   ImportVersionRequest,
   ListVersionsRequest,
+  NewConceptRequest,
   OpenProjectRequest,
   ProjectExport,
   ProjectInfo,
@@ -35,7 +38,8 @@ import type {
   VersionSummary,
 } from './contract';
 import { compareVersions } from './compare';
-import { checkAndEvaluate, checkAndEvaluateText, demoConcepts } from './engine';
+import { checkAndEvaluate, checkAndEvaluateText, demoConcepts, type CheckedConcept } from './engine';
+import { AIRCRAFT_KINDS, conceptStarter } from '../../core';
 import { checkVersionNumber, cleanName, cleanTag, conceptInput, defaultAuthor } from './request-checks';
 import { ServiceFailure, badRequest } from './failure';
 import { VERSION_EXPORT_FORMAT, readExport } from './transfer';
@@ -234,6 +238,65 @@ export class ProjectService implements ServiceHandlers {
     }
     store.renameConcept(concept.id, to);
     return { ...store.conceptById(concept.id)! };
+  }
+
+  /** A new concept from a kind of aircraft's starting values; its first version has no parent. */
+  newConcept(request: NewConceptRequest): SaveVersionResponse {
+    this.#writable();
+    const name = cleanName(request.name, 'name');
+    const starter = conceptStarter(String(request.aircraftKind));
+    if (!starter) throw badRequest('aircraftKind', `must be one of ${AIRCRAFT_KINDS.join(', ')}, got ${JSON.stringify(request.aircraftKind)}`);
+    const text = `${JSON.stringify(starter.concept(name), null, 2)}\n`;
+    const note = request.note?.trim() || `New ${starter.title.toLowerCase()} concept from starting values: replace them with the programme's own.`;
+    return this.#firstVersion(name, text, checkAndEvaluateText(text, `new ${starter.kind} concept`), note, request.author);
+  }
+
+  /** A concept file's text as a new concept; checked first, nothing saved when it fails (every issue by field). */
+  importConcept(request: ImportConceptRequest): SaveVersionResponse {
+    this.#writable();
+    if (typeof request.conceptText !== 'string') throw badRequest('conceptText', 'must be the text of a concept file');
+    const checked = checkAndEvaluateText(request.conceptText, 'imported concept');
+    const name = request.name === undefined ? (checked.name ?? FALLBACK_CONCEPT_NAME) : cleanName(request.name, 'name');
+    const note = request.note?.trim() || 'Imported from a concept file.';
+    return this.#firstVersion(name, request.conceptText, checked, note, request.author);
+  }
+
+  #firstVersion(name: string, conceptJson: string, checked: CheckedConcept, note: string, author: string | undefined): SaveVersionResponse {
+    const store = this.#writable();
+    const createdAt = this.#time();
+    const number = store.write(() => {
+      if (store.conceptByName(name)) {
+        throw new ServiceFailure('name-taken', `${store.file}: a concept "${name}" already exists; choose another name`, { file: store.file, field: 'name' });
+      }
+      return store.insertVersion({
+        conceptId: store.insertConcept(name, createdAt),
+        parent: null,
+        conceptJson,
+        evaluationJson: JSON.stringify(checked.summary),
+        note,
+        author: author?.trim() || this.#author,
+        createdAt,
+      });
+    });
+    return { version: this.#summary(store.version(number)!), warnings: checked.warnings };
+  }
+
+  /** Deletes a concept without versions; one with versions is refused (versions are kept forever: export them to take them elsewhere). */
+  deleteConcept(request: DeleteConceptRequest): { deleted: string } {
+    const store = this.#writable();
+    const name = cleanName(request.name, 'name');
+    const concept = store.conceptByName(name);
+    if (!concept) throw new ServiceFailure('not-found', `${store.file}: there is no concept "${name}"`, { file: store.file, field: 'name' });
+    if (concept.versionCount > 0 || !store.deleteEmptyConcept(concept.id)) {
+      const count = store.conceptById(concept.id)?.versionCount ?? concept.versionCount;
+      throw new ServiceFailure(
+        'has-versions',
+        `${store.file}: concept "${name}" has ${count} saved version${count === 1 ? '' : 's'}, and saved versions are never deleted; ` +
+          'rename it to set it aside, or export its versions to keep them elsewhere',
+        { file: store.file, field: 'name' },
+      );
+    }
+    return { deleted: name };
   }
 
   listVersions(request: ListVersionsRequest = {}): VersionSummary[] {

@@ -38,8 +38,10 @@ export type ServiceErrorCode =
   | 'no-project'
   /** The request itself is malformed: a missing or mistyped field (see `field`). */
   | 'bad-request'
-  /** A concept name that is already taken (startConcept, renameConcept). */
+  /** A concept name that is already taken (startConcept, renameConcept, newConcept, importConcept). */
   | 'name-taken'
+  /** deleteConcept on a concept that has versions: versions are never deleted. Nothing was changed. */
+  | 'has-versions'
   /** The file could not be read or written for a reason of the operating system (see message). */
   | 'io'
   /** The disk (or the user's quota) is full: the save was not made; versions saved before are kept. */
@@ -336,6 +338,28 @@ export interface RenameConceptRequest {
   to: string;
 }
 
+export interface NewConceptRequest {
+  /** The new concept's name in the project, also written as the concept JSON's `name`. */
+  name: string;
+  /** The kind of aircraft whose starting values and configurations it takes (core/concept/starters.ts). */
+  aircraftKind: 'single-piston' | 'twin-turboprop' | 'business-jet' | 'small-uav';
+  note?: string;
+  author?: string;
+}
+
+export interface ImportConceptRequest {
+  /** A `loftpoint-concept/1` file's text, stored exactly as given once it passes the checks. */
+  conceptText: string;
+  /** The new concept's name; default the concept JSON's `name`. Refused when taken. */
+  name?: string;
+  note?: string;
+  author?: string;
+}
+
+export interface DeleteConceptRequest {
+  name: string;
+}
+
 export interface ImportProjectRequest {
   /** New project file to create; never overwrites. */
   file: string;
@@ -376,6 +400,9 @@ export interface ServiceMap {
   updateProject: { request: UpdateProjectRequest; response: ProjectInfo };
   listConcepts: { request: Empty; response: ConceptSummary[] };
   renameConcept: { request: RenameConceptRequest; response: ConceptSummary };
+  newConcept: { request: NewConceptRequest; response: SaveVersionResponse };
+  importConcept: { request: ImportConceptRequest; response: SaveVersionResponse };
+  deleteConcept: { request: DeleteConceptRequest; response: { deleted: string } };
   listVersions: { request: ListVersionsRequest; response: VersionSummary[] };
   getVersion: { request: VersionRequest; response: VersionDetail };
   saveVersion: { request: SaveVersionRequest; response: SaveVersionResponse };
@@ -403,6 +430,9 @@ export const SERVICE_METHODS = [
   'updateProject',
   'listConcepts',
   'renameConcept',
+  'newConcept',
+  'importConcept',
+  'deleteConcept',
   'listVersions',
   'getVersion',
   'saveVersion',

@@ -29,6 +29,14 @@ export const REQUEST_SCHEMAS: Schemas = {
   updateProject: z.strictObject({ name: name.optional(), description: text(10_000).optional(), units: units.optional() }),
   listConcepts: empty,
   renameConcept: z.strictObject({ from: name, to: name }),
+  newConcept: z.strictObject({
+    name,
+    aircraftKind: z.enum(['single-piston', 'twin-turboprop', 'business-jet', 'small-uav']),
+    note: text(100_000).optional(),
+    author: text(200).optional(),
+  }),
+  importConcept: z.strictObject({ conceptText: text(1_000_000), name: name.optional(), note: text(100_000).optional(), author: text(200).optional() }),
+  deleteConcept: z.strictObject({ name }),
   listVersions: z.strictObject({ concept: name.optional() }),
   getVersion: z.strictObject({ version }),
   saveVersion: z.strictObject({

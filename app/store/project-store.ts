@@ -190,6 +190,13 @@ export class ProjectStore {
     });
   }
 
+  /** Deletes a concept that has no versions; false when it has some (versions are never deleted). */
+  deleteEmptyConcept(id: number): boolean {
+    return this.write(
+      () => this.#prepare('DELETE FROM concept WHERE id = ? AND NOT EXISTS (SELECT 1 FROM version WHERE concept_id = ?)').run(id, id).changes > 0,
+    );
+  }
+
   /** Inside a write: appends a version and returns its number. */
   insertVersion(version: NewVersion): number {
     const sql = `INSERT INTO version (number, concept_id, parent, concept_json, evaluation_json, note, author, created_at)

@@ -17,3 +17,4 @@ export {
 } from './migrate';
 export * as conceptDefaults from './defaults';
 export { DEMO_CONCEPTS, type DemoConcept } from './demos';
+export { CONCEPT_STARTERS, AIRCRAFT_KINDS, conceptStarter, type AircraftKind, type ConceptStarter } from './starters';

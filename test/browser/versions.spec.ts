@@ -58,7 +58,9 @@ test('save a version with a note, reload, reopen the older version and compare t
   await expect(window.byTest('diagram').locator('[data-role="overlay"]')).not.toHaveCount(0);
   const changes = window.byTest('changes');
   await expect(changes).toContainText(`Version ${newestBefore} → version ${newest}`);
-  await expect(changes.getByTestId('change-requirement')).toContainText('cruise.speed');
+  // The field in plain words, its path in the tooltip.
+  await expect(changes.getByTestId('change-requirement')).toContainText('cruise: Cruise speed (TAS)');
+  await expect(changes.getByTestId('change-requirement').locator('[title="requirements.cruise.speed"]')).toHaveCount(1);
   await expect(changes.getByTestId('change-requirement')).toContainText('250 kt');
   await window.shot('compare');
   // The exported diagram draws the older version behind as the window does: its boundaries and its optimum's open diamond.

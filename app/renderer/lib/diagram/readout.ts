@@ -3,7 +3,7 @@
  * requirement's value in the diagram's own quantity and which one binds.
  */
 import { readAt, toDisplay, type Design, type LoadingAxis, type UnitSystem } from '../../../../core';
-import { kindColour, shorten } from '../../../chart';
+import { boundaryColours, kindColour, shorten } from '../../../chart';
 import { powerLoadingFactor } from './geometry';
 import { plotName } from '../concept/names';
 
@@ -28,6 +28,7 @@ export interface Readout {
 
 export function readoutAt(design: Design, wingLoadingPa: number, axis: LoadingAxis, system: UnitSystem, powerLoading: boolean): Readout {
   const read = readAt(design, wingLoadingPa);
+  const colours = boundaryColours(design.requirements.filter((requirement) => requirement.enabled));
   const loading = (value: number | null): number | null => {
     if (value === null) return null;
     const shown = toDisplay(value, axis, system);
@@ -40,7 +41,7 @@ export function readoutAt(design: Design, wingLoadingPa: number, axis: LoadingAx
     rows: read.entries.map((entry) => ({
       id: entry.id,
       label: shorten(plotName(entry), 30),
-      colour: kindColour(entry.kind),
+      colour: colours.get(entry.id) ?? kindColour(entry.kind),
       type: entry.type,
       value: entry.type === 'limit' ? toDisplay(entry.wingLoadingMax, 'wingLoading', system) : loading(entry.required),
       binds: entry.id === read.binding,

@@ -121,9 +121,11 @@ export class Exporter {
       system: preferences.units,
       title: String(workspace.document.name ?? ''),
       overlays,
+      alternatives: project.alternatives.map(({ name, evaluation: other }) => ({ name, evaluation: other })),
       powerLoading: preferences.powerLoading,
       view: this.#parts.view?.current ?? null,
       bands,
+      bandIds: studies?.bandedIds ?? null,
       ...(result ? { map: result.map, ...(studies?.stale ? { contourInk: STALE_CONTOUR_INK } : {}) } : {}),
     });
   }
@@ -161,7 +163,8 @@ export class Exporter {
     const system = preferences.units;
     const origin = reportOrigin({ project: project.project, service: connection.service, viewing: project.viewing, parent: project.parent, dirty: project.dirty });
     project.status = { kind: 'info', text: 'Preparing the report… (running the studies)' };
-    const request: WindowReportRequest = { concept, system, ...(await origin), generatedAt: new Date().toISOString() };
+    const alternatives = project.alternatives.map(({ name, concept: other }) => ({ name, concept: JSON.parse(JSON.stringify(other)) as unknown }));
+    const request: WindowReportRequest = { concept, system, ...(await origin), generatedAt: new Date().toISOString(), ...(alternatives.length > 0 ? { alternatives } : {}) };
     return buildReportOffThread(request);
   }
 }

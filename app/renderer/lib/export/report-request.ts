@@ -24,6 +24,8 @@ export interface WindowReportRequest {
   source: string;
   /** ISO 8601. */
   generatedAt: string;
+  /** Other concepts drawn over the diagram (as the window shows them), by name with their concept documents. */
+  alternatives?: Array<{ name: string; concept: unknown }>;
 }
 
 /** The report's HTML; throws an Error naming the first field when the concept cannot be read. */
@@ -36,7 +38,12 @@ export function windowReportHtml(request: WindowReportRequest): string {
   }
   const { concept, design, uncertainty } = parsed;
   const evaluation = evaluateDesign(design);
+  const alternatives = (request.alternatives ?? []).flatMap(({ name, concept: other }) => {
+    const read = parseConcept(other);
+    return read.ok ? [{ name, evaluation: evaluateDesign(read.design) }] : [];
+  });
   return buildReport({
+    alternatives,
     concept,
     design,
     evaluation,

@@ -6,9 +6,12 @@
 import { DEMO_CONCEPTS, evaluateDesign, parseConcept, type Evaluation } from '../../../../core';
 import type {
   ConceptSummary,
+  NewConceptRequest,
   ProjectInfo,
   RemoteService,
+  SaveVersionResponse,
   ServiceError,
+  ServiceResult,
   VersionComparison,
   VersionDetail,
   VersionSummary,
@@ -23,6 +26,14 @@ export interface Comparison {
   newer: VersionDetail;
   /** The older version evaluated in the page, drawn faintly behind the newer one. */
   olderEvaluation: Evaluation | null;
+}
+
+/** Another concept drawn over the diagram: its newest saved version, evaluated in the page. */
+export interface Alternative {
+  name: string;
+  version: number;
+  concept: unknown;
+  evaluation: Evaluation;
 }
 
 export interface StatusMessage {
@@ -71,7 +82,19 @@ export class ProjectState {
   comparison = $state.raw<Comparison | null>(null);
   status = $state.raw<StatusMessage | null>(null);
   busy = $state(false);
+  /** Concepts chosen to be drawn over the diagram, in the order they were switched on. */
+  overlaid = $state.raw<string[]>([]);
+  /** Their newest versions, evaluated, by concept name. */
+  #alternatives = $state.raw<ReadonlyMap<string, Alternative>>(new Map());
   #stashed: Draft | null = null;
+
+  /** The alternatives to draw, in order, never the concept being worked on; colours follow this order. */
+  readonly alternatives = $derived(
+    this.overlaid.filter((name) => name !== this.conceptName).flatMap((name) => {
+      const found = this.#alternatives.get(name);
+      return found ? [found] : [];
+    }),
+  );
 
   readonly canSave = $derived(this.#canWrite() && this.viewing === null);
   // By content, so undoing back to the saved values is not "unsaved".
@@ -146,6 +169,43 @@ export class ProjectState {
     const concepts = await this.#service.listConcepts({});
     if (concepts.ok) this.concepts = concepts.value;
     else this.#fail(concepts.error);
+    await this.#refreshAlternatives();
+  }
+
+  /** Draws another concept's newest version over the diagram, or stops drawing it. */
+  async overlay(name: string, on: boolean): Promise<void> {
+    this.overlaid = on ? [...this.overlaid.filter((n) => n !== name), name] : this.overlaid.filter((n) => n !== name);
+    await this.#refreshAlternatives();
+  }
+
+  /** Keeps the drawn alternatives on each concept's newest version; a concept that went away (renamed) leaves the list. */
+  async #refreshAlternatives(): Promise<void> {
+    const service = this.#service;
+    if (!service) return;
+    const byName = new Map(this.concepts.map((concept) => [concept.name, concept]));
+    this.overlaid = this.overlaid.filter((name) => byName.get(name)?.latestVersion != null);
+    const next = new Map<string, Alternative>();
+    for (const name of this.overlaid) {
+      const latest = byName.get(name)!.latestVersion!;
+      const known = this.#alternatives.get(name);
+      if (known && known.version === latest) {
+        next.set(name, known);
+        continue;
+      }
+      const detail = await service.getVersion({ version: latest });
+      if (!detail.ok) {
+        this.#fail(detail.error);
+        continue;
+      }
+      const parsed = parseConcept(detail.value.concept);
+      if (!parsed.ok) continue;
+      try {
+        next.set(name, { name, version: latest, concept: detail.value.concept, evaluation: evaluateDesign(parsed.design) });
+      } catch {
+        // A version the engine cannot draw stays off the diagram; its own window says why.
+      }
+    }
+    this.#alternatives = next;
   }
 
   async refreshVersions(): Promise<void> {
@@ -283,6 +343,100 @@ export class ProjectState {
     }
   }
 
+  /** A new concept from a kind of aircraft's starting values, switched to; the error (if any) is returned for the form. */
+  async newConcept(name: string, aircraftKind: NewConceptRequest['aircraftKind']): Promise<ServiceError | null> {
+    return this.#addConcept(() => this.#service!.newConcept({ name: name.trim(), aircraftKind }), 'New concept');
+  }
+
+  /** A concept file's text as a new concept; every problem comes back by field and nothing is saved. */
+  async importConcept(conceptText: string, name?: string): Promise<ServiceError | null> {
+    return this.#addConcept(() => this.#service!.importConcept({ conceptText, ...(name?.trim() ? { name: name.trim() } : {}) }), 'Imported concept');
+  }
+
+  async #addConcept(call: () => Promise<ServiceResult<SaveVersionResponse>>, what: string): Promise<ServiceError | null> {
+    if (!this.#service || !this.#canWrite()) return { code: 'read-only', message: 'No writable project is open.' };
+    this.busy = true;
+    try {
+      const result = await call();
+      if (!result.ok) return result.error;
+      this.#leaveView();
+      await this.refreshConcepts();
+      await this.selectConcept(result.value.version.conceptName);
+      const warned = result.value.warnings.length > 0 ? ` (${result.value.warnings.length} warning${result.value.warnings.length > 1 ? 's' : ''})` : '';
+      this.status = { kind: 'info', text: `${what} "${result.value.version.conceptName}" saved as version ${result.value.version.number}${warned}.` };
+      return null;
+    } finally {
+      this.busy = false;
+    }
+  }
+
+  /** Renames a concept; its versions, its unsaved draft and the window's place follow the new name. */
+  async renameConcept(from: string, to: string): Promise<ServiceError | null> {
+    if (!this.#service || !this.#canWrite()) return { code: 'read-only', message: 'No writable project is open.' };
+    const result = await this.#service.renameConcept({ from, to: to.trim() });
+    if (!result.ok) return result.error;
+    const name = result.value.name;
+    const kept = this.#drafts.get(from);
+    if (kept) {
+      this.#drafts.delete(from);
+      this.#drafts.set(name, kept);
+    }
+    this.#moveStoredDraft(from, name);
+    this.overlaid = this.overlaid.map((n) => (n === from ? name : n));
+    this.#alternatives = new Map([...this.#alternatives].map(([key, value]) => (key === from ? [name, { ...value, name }] : [key, value])));
+    if (this.conceptName === from) {
+      this.conceptName = name;
+      this.#rememberConcept(name);
+      await this.refreshVersions();
+    }
+    await this.refreshConcepts();
+    this.status = { kind: 'info', text: `Concept "${from}" renamed "${name}".` };
+    return null;
+  }
+
+  /** Deletes a concept; the service refuses while it has versions (they are never deleted). */
+  async deleteConcept(name: string): Promise<ServiceError | null> {
+    if (!this.#service || !this.#canWrite()) return { code: 'read-only', message: 'No writable project is open.' };
+    const result = await this.#service.deleteConcept({ name });
+    if (!result.ok) return result.error;
+    this.#drafts.delete(name);
+    this.#forgetStoredDraft(name);
+    await this.refreshConcepts();
+    if (this.conceptName === name) {
+      const next = this.concepts[0];
+      this.conceptName = null;
+      if (next) await this.selectConcept(next.name);
+    }
+    this.status = { kind: 'info', text: `Concept "${name}" deleted.` };
+    return null;
+  }
+
+  #moveStoredDraft(from: string, to: string): void {
+    if (!this.project) return;
+    try {
+      const all = JSON.parse(localStorage.getItem(DRAFT_KEY) ?? '{}') as Record<string, unknown>;
+      const key = `${this.project.file}\n${from}`;
+      if (!(key in all)) return;
+      all[`${this.project.file}\n${to}`] = all[key];
+      delete all[key];
+      localStorage.setItem(DRAFT_KEY, JSON.stringify(all));
+      this.#mirrorDrafts(all);
+    } catch {
+      // Storage disabled: the draft in the page moved already.
+    }
+  }
+
+  /** Every version of every concept, newest first (to compare across concepts). */
+  async allVersions(): Promise<VersionSummary[]> {
+    if (!this.#service) return [];
+    const versions = await this.#service.listVersions({});
+    if (!versions.ok) {
+      this.#fail(versions.error);
+      return [];
+    }
+    return [...versions.value].sort((a, b) => b.number - a.number);
+  }
+
   /** Compares two versions: the newer one shown read-only, the older drawn faintly behind. */
   async compare(a: number, b: number): Promise<void> {
     const service = this.#service;
@@ -408,6 +562,7 @@ export class ProjectState {
     this.versions = [];
     this.parent = null;
     this.status = null;
+    this.overlaid = [];
     await this.start();
   }
 }

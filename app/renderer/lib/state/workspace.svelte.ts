@@ -6,6 +6,7 @@
 import { evaluateDesign, parseConcept, renameOlderFields, type Design, type Evaluation, type LoadingAxis } from '../../../../core';
 import { setDesignPoint, type ConceptDocument } from '../concept/edit';
 import { History } from './history.svelte';
+import { boundaryColours, kindColour } from '../../../chart/palette';
 import { pointReporter, type PointReport } from './point-report';
 
 export interface Issue {
@@ -70,6 +71,13 @@ export class Workspace {
   readonly issues = $derived(this.#computed.ok ? [] : this.#computed.issues);
 
   readonly axis: LoadingAxis = $derived(this.current?.evaluation.axis ?? 'powerToWeight');
+  /** Each boundary's colour as the diagram draws it (a second boundary of a kind in a shade of the kind's colour). */
+  readonly #colours = $derived(boundaryColours(this.current?.evaluation.boundaries ?? []));
+
+  /** The colour of requirement `id` on the diagram; its kind's colour when it is not drawn. */
+  colourOf(id: string, kind: string): string {
+    return this.#colours.get(id) ?? kindColour(kind);
+  }
 
   /** The design point in SI: the dragged one, else the document's. */
   readonly point = $derived.by((): SiPoint | null => {

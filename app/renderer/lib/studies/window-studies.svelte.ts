@@ -31,6 +31,8 @@ function bandsOf(document: Record<string, unknown>, design: Design, evaluation: 
 
 export class WindowStudies {
   showBands = $state(false);
+  /** The boundaries banded, by requirement id; null: every boundary. */
+  bandedIds = $state.raw<readonly string[] | null>(null);
   showContours = $state(true);
   readonly probability: ProbabilityStudy;
   readonly #workspace: Workspace;

@@ -1,0 +1,55 @@
+/**
+ * Design alternatives drawn over the diagram: each other concept's feasible
+ * region as an outline and its optimum, in a colour of its own, so several
+ * alternatives can be read on one plot. Pure; the window, its SVG export and
+ * the report draw them through the same marks.
+ */
+import type { Evaluation } from '../../core/evaluation';
+import type { LoadingAxis } from '../../core/model';
+import type { UnitSystem } from '../../core/units/display';
+import { upperEnvelope } from './envelope';
+import { optimumPoint } from './points';
+import { boundarySeries } from './series';
+import type { ChartData, MarkedPoint } from './series-types';
+import { ALTERNATIVE_INKS } from './palette';
+
+export interface AlternativeSeries {
+  name: string;
+  colour: string;
+  /** False when the alternative's diagram has the other vertical axis (thrust against power): listed, not drawn. */
+  drawn: boolean;
+  /** The alternative's own boundaries and envelope, not inverted: its region is worked out from them for each view. */
+  source: Pick<ChartData, 'system' | 'axis' | 'curves' | 'limits' | 'envelope' | 'wingLoadingRange' | 'wingLoadingLimit'> | null;
+  /** Its optimum as plotted (inverted with the rest in the power-loading view). */
+  optimum: MarkedPoint | null;
+}
+
+/** The n-th alternative's ink; after the last, they repeat. */
+export function alternativeColour(index: number): string {
+  return ALTERNATIVE_INKS[index % ALTERNATIVE_INKS.length];
+}
+
+export function alternativeSeries(name: string, index: number, evaluation: Evaluation, axis: LoadingAxis, system: UnitSystem): AlternativeSeries {
+  const colour = alternativeColour(index);
+  if (evaluation.axis !== axis) return { name, colour, drawn: false, source: null, optimum: null };
+  const { curves, limits } = boundarySeries(evaluation.boundaries, axis, system, new Set());
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const curve of curves) {
+    for (const [x] of curve.points) {
+      if (!Number.isFinite(x)) continue;
+      if (x < lo) lo = x;
+      if (x > hi) hi = x;
+    }
+  }
+  const range: [number, number] = hi > lo ? [lo, hi] : [0, Math.max(...limits.map((limit) => limit.wingLoading), 1) * 1.25];
+  const wingLoadingLimit = Math.min(...limits.map((limit) => limit.wingLoading), range[1]);
+  const optimum = optimumPoint(evaluation, system);
+  return {
+    name,
+    colour,
+    drawn: true,
+    source: { system, axis, curves, limits, envelope: upperEnvelope(curves, range), wingLoadingRange: range, wingLoadingLimit },
+    optimum: optimum ? { wingLoading: optimum.wingLoading, loading: optimum.loading } : null,
+  };
+}
