@@ -55,17 +55,17 @@ import { G0 } from '../units/factors';
 
 /** S = W_TO/w; P_SL or T_SL = y W_TO, all engines, and per engine; W_TO = m g0. */
 export function sizingAt(aircraft: Aircraft, axis: LoadingAxis, wingLoadingPa: number, loading: number): SizingJson {
-  if (stryMutAct_9fa48("1172")) {
+  if (stryMutAct_9fa48("471")) {
     {}
   } else {
-    stryCov_9fa48("1172");
-    const takeoffWeight = stryMutAct_9fa48("1173") ? aircraft.takeoffMassKg / G0 : (stryCov_9fa48("1173"), aircraft.takeoffMassKg * G0);
-    const installed = stryMutAct_9fa48("1174") ? loading / takeoffWeight : (stryCov_9fa48("1174"), loading * takeoffWeight);
-    const key = (stryMutAct_9fa48("1177") ? axis !== 'thrustToWeight' : stryMutAct_9fa48("1176") ? false : stryMutAct_9fa48("1175") ? true : (stryCov_9fa48("1175", "1176", "1177"), axis === (stryMutAct_9fa48("1178") ? "" : (stryCov_9fa48("1178"), 'thrustToWeight')))) ? stryMutAct_9fa48("1179") ? "" : (stryCov_9fa48("1179"), 'thrust') : stryMutAct_9fa48("1180") ? "" : (stryCov_9fa48("1180"), 'power');
-    return stryMutAct_9fa48("1181") ? {} : (stryCov_9fa48("1181"), {
-      wingArea: stryMutAct_9fa48("1182") ? takeoffWeight * wingLoadingPa : (stryCov_9fa48("1182"), takeoffWeight / wingLoadingPa),
+    stryCov_9fa48("471");
+    const takeoffWeight = stryMutAct_9fa48("472") ? aircraft.takeoffMassKg / G0 : (stryCov_9fa48("472"), aircraft.takeoffMassKg * G0);
+    const installed = stryMutAct_9fa48("473") ? loading / takeoffWeight : (stryCov_9fa48("473"), loading * takeoffWeight);
+    const key = (stryMutAct_9fa48("476") ? axis !== 'thrustToWeight' : stryMutAct_9fa48("475") ? false : stryMutAct_9fa48("474") ? true : (stryCov_9fa48("474", "475", "476"), axis === (stryMutAct_9fa48("477") ? "" : (stryCov_9fa48("477"), 'thrustToWeight')))) ? stryMutAct_9fa48("478") ? "" : (stryCov_9fa48("478"), 'thrust') : stryMutAct_9fa48("479") ? "" : (stryCov_9fa48("479"), 'power');
+    return stryMutAct_9fa48("480") ? {} : (stryCov_9fa48("480"), {
+      wingArea: stryMutAct_9fa48("481") ? takeoffWeight * wingLoadingPa : (stryCov_9fa48("481"), takeoffWeight / wingLoadingPa),
       [key]: installed,
-      perEngine: stryMutAct_9fa48("1183") ? installed * aircraft.propulsion.engines : (stryCov_9fa48("1183"), installed / aircraft.propulsion.engines),
+      perEngine: stryMutAct_9fa48("482") ? installed * aircraft.propulsion.engines : (stryCov_9fa48("482"), installed / aircraft.propulsion.engines),
       takeoffWeight
     });
   }

@@ -58,16 +58,16 @@ export function flightMachAt(entry: {
   requirement: RequirementCommon;
   boundary: Boundary;
 }, wingLoadingPa: number): number | undefined {
-  if (stryMutAct_9fa48("642")) {
+  if (stryMutAct_9fa48("44")) {
     {}
   } else {
-    stryCov_9fa48("642");
+    stryCov_9fa48("44");
     const {
       requirement,
       boundary
     } = entry;
-    const speed = stryMutAct_9fa48("643") ? boundary.speedAt(wingLoadingPa) : (stryCov_9fa48("643"), boundary.speedAt?.(wingLoadingPa));
-    if (stryMutAct_9fa48("646") ? (speed === undefined || !Number.isFinite(speed)) && !(speed > 0) : stryMutAct_9fa48("645") ? false : stryMutAct_9fa48("644") ? true : (stryCov_9fa48("644", "645", "646"), (stryMutAct_9fa48("648") ? speed === undefined && !Number.isFinite(speed) : stryMutAct_9fa48("647") ? false : (stryCov_9fa48("647", "648"), (stryMutAct_9fa48("650") ? speed !== undefined : stryMutAct_9fa48("649") ? false : (stryCov_9fa48("649", "650"), speed === undefined)) || (stryMutAct_9fa48("651") ? Number.isFinite(speed) : (stryCov_9fa48("651"), !Number.isFinite(speed))))) || (stryMutAct_9fa48("652") ? speed > 0 : (stryCov_9fa48("652"), !(stryMutAct_9fa48("656") ? speed <= 0 : stryMutAct_9fa48("655") ? speed >= 0 : stryMutAct_9fa48("654") ? false : stryMutAct_9fa48("653") ? true : (stryCov_9fa48("653", "654", "655", "656"), speed > 0)))))) return undefined;
-    return stryMutAct_9fa48("657") ? speed * atmosphere(requirement.altitudeM, requirement.temperatureOffsetK).speedOfSoundMps : (stryCov_9fa48("657"), speed / atmosphere(requirement.altitudeM, requirement.temperatureOffsetK).speedOfSoundMps);
+    const speed = stryMutAct_9fa48("45") ? boundary.speedAt(wingLoadingPa) : (stryCov_9fa48("45"), boundary.speedAt?.(wingLoadingPa));
+    if (stryMutAct_9fa48("48") ? (speed === undefined || !Number.isFinite(speed)) && !(speed > 0) : stryMutAct_9fa48("47") ? false : stryMutAct_9fa48("46") ? true : (stryCov_9fa48("46", "47", "48"), (stryMutAct_9fa48("50") ? speed === undefined && !Number.isFinite(speed) : stryMutAct_9fa48("49") ? false : (stryCov_9fa48("49", "50"), (stryMutAct_9fa48("52") ? speed !== undefined : stryMutAct_9fa48("51") ? false : (stryCov_9fa48("51", "52"), speed === undefined)) || (stryMutAct_9fa48("53") ? Number.isFinite(speed) : (stryCov_9fa48("53"), !Number.isFinite(speed))))) || (stryMutAct_9fa48("54") ? speed > 0 : (stryCov_9fa48("54"), !(stryMutAct_9fa48("58") ? speed <= 0 : stryMutAct_9fa48("57") ? speed >= 0 : stryMutAct_9fa48("56") ? false : stryMutAct_9fa48("55") ? true : (stryCov_9fa48("55", "56", "57", "58"), speed > 0)))))) return undefined;
+    return stryMutAct_9fa48("59") ? speed * atmosphere(requirement.altitudeM, requirement.temperatureOffsetK).speedOfSoundMps : (stryCov_9fa48("59"), speed / atmosphere(requirement.altitudeM, requirement.temperatureOffsetK).speedOfSoundMps);
   }
 }

@@ -61,19 +61,19 @@ export type RequiredLoading = (wingLoadingPa: number) => number;
 
 /** E(w) = max_i y_i(w) (core/methods.md section 7); NaN where any curve cannot be met; 0 with no curves. */
 export function envelopeAt(required: readonly RequiredLoading[], wingLoadingPa: number): number {
-  if (stryMutAct_9fa48("422")) {
+  if (stryMutAct_9fa48("8")) {
     {}
   } else {
-    stryCov_9fa48("422");
+    stryCov_9fa48("8");
     let top = 0;
-    for (let i = 0; stryMutAct_9fa48("425") ? i >= required.length : stryMutAct_9fa48("424") ? i <= required.length : stryMutAct_9fa48("423") ? false : (stryCov_9fa48("423", "424", "425"), i < required.length); stryMutAct_9fa48("426") ? i-- : (stryCov_9fa48("426"), i++)) {
-      if (stryMutAct_9fa48("427")) {
+    for (let i = 0; stryMutAct_9fa48("11") ? i >= required.length : stryMutAct_9fa48("10") ? i <= required.length : stryMutAct_9fa48("9") ? false : (stryCov_9fa48("9", "10", "11"), i < required.length); stryMutAct_9fa48("12") ? i-- : (stryCov_9fa48("12"), i++)) {
+      if (stryMutAct_9fa48("13")) {
         {}
       } else {
-        stryCov_9fa48("427");
+        stryCov_9fa48("13");
         const y = required[i](wingLoadingPa);
-        if (stryMutAct_9fa48("430") ? false : stryMutAct_9fa48("429") ? true : stryMutAct_9fa48("428") ? Number.isFinite(y) : (stryCov_9fa48("428", "429", "430"), !Number.isFinite(y))) return NaN;
-        if (stryMutAct_9fa48("433") ? i === 0 && y > top : stryMutAct_9fa48("432") ? false : stryMutAct_9fa48("431") ? true : (stryCov_9fa48("431", "432", "433"), (stryMutAct_9fa48("435") ? i !== 0 : stryMutAct_9fa48("434") ? false : (stryCov_9fa48("434", "435"), i === 0)) || (stryMutAct_9fa48("438") ? y <= top : stryMutAct_9fa48("437") ? y >= top : stryMutAct_9fa48("436") ? false : (stryCov_9fa48("436", "437", "438"), y > top)))) top = y;
+        if (stryMutAct_9fa48("16") ? false : stryMutAct_9fa48("15") ? true : stryMutAct_9fa48("14") ? Number.isFinite(y) : (stryCov_9fa48("14", "15", "16"), !Number.isFinite(y))) return NaN;
+        if (stryMutAct_9fa48("19") ? i === 0 && y > top : stryMutAct_9fa48("18") ? false : stryMutAct_9fa48("17") ? true : (stryCov_9fa48("17", "18", "19"), (stryMutAct_9fa48("21") ? i !== 0 : stryMutAct_9fa48("20") ? false : (stryCov_9fa48("20", "21"), i === 0)) || (stryMutAct_9fa48("24") ? y <= top : stryMutAct_9fa48("23") ? y >= top : stryMutAct_9fa48("22") ? false : (stryCov_9fa48("22", "23", "24"), y > top)))) top = y;
       }
     }
     return top;
@@ -82,18 +82,18 @@ export function envelopeAt(required: readonly RequiredLoading[], wingLoadingPa: 
 
 /** The largest of the curves that can be met at w, ignoring those that cannot; NaN when none can. */
 export function definedEnvelopeAt(required: readonly RequiredLoading[], wingLoadingPa: number): number {
-  if (stryMutAct_9fa48("439")) {
+  if (stryMutAct_9fa48("25")) {
     {}
   } else {
-    stryCov_9fa48("439");
+    stryCov_9fa48("25");
     let top = NaN;
-    for (let i = 0; stryMutAct_9fa48("442") ? i >= required.length : stryMutAct_9fa48("441") ? i <= required.length : stryMutAct_9fa48("440") ? false : (stryCov_9fa48("440", "441", "442"), i < required.length); stryMutAct_9fa48("443") ? i-- : (stryCov_9fa48("443"), i++)) {
-      if (stryMutAct_9fa48("444")) {
+    for (let i = 0; stryMutAct_9fa48("28") ? i >= required.length : stryMutAct_9fa48("27") ? i <= required.length : stryMutAct_9fa48("26") ? false : (stryCov_9fa48("26", "27", "28"), i < required.length); stryMutAct_9fa48("29") ? i-- : (stryCov_9fa48("29"), i++)) {
+      if (stryMutAct_9fa48("30")) {
         {}
       } else {
-        stryCov_9fa48("444");
+        stryCov_9fa48("30");
         const y = required[i](wingLoadingPa);
-        if (stryMutAct_9fa48("447") ? Number.isFinite(y) || !(y <= top) : stryMutAct_9fa48("446") ? false : stryMutAct_9fa48("445") ? true : (stryCov_9fa48("445", "446", "447"), Number.isFinite(y) && (stryMutAct_9fa48("448") ? y <= top : (stryCov_9fa48("448"), !(stryMutAct_9fa48("452") ? y > top : stryMutAct_9fa48("451") ? y < top : stryMutAct_9fa48("450") ? false : stryMutAct_9fa48("449") ? true : (stryCov_9fa48("449", "450", "451", "452"), y <= top)))))) top = y;
+        if (stryMutAct_9fa48("33") ? Number.isFinite(y) || !(y <= top) : stryMutAct_9fa48("32") ? false : stryMutAct_9fa48("31") ? true : (stryCov_9fa48("31", "32", "33"), Number.isFinite(y) && (stryMutAct_9fa48("34") ? y <= top : (stryCov_9fa48("34"), !(stryMutAct_9fa48("38") ? y > top : stryMutAct_9fa48("37") ? y < top : stryMutAct_9fa48("36") ? false : stryMutAct_9fa48("35") ? true : (stryCov_9fa48("35", "36", "37", "38"), y <= top)))))) top = y;
       }
     }
     return top;
@@ -102,12 +102,12 @@ export function definedEnvelopeAt(required: readonly RequiredLoading[], wingLoad
 
 /** The smallest wing-loading limit; Infinity with none. */
 export function wingLoadingCap(limits: readonly LimitBoundary[]): number {
-  if (stryMutAct_9fa48("453")) {
+  if (stryMutAct_9fa48("39")) {
     {}
   } else {
-    stryCov_9fa48("453");
+    stryCov_9fa48("39");
     let cap = Infinity;
-    for (const limit of limits) if (stryMutAct_9fa48("457") ? limit.wingLoadingMaxPa >= cap : stryMutAct_9fa48("456") ? limit.wingLoadingMaxPa <= cap : stryMutAct_9fa48("455") ? false : stryMutAct_9fa48("454") ? true : (stryCov_9fa48("454", "455", "456", "457"), limit.wingLoadingMaxPa < cap)) cap = limit.wingLoadingMaxPa;
+    for (const limit of limits) if (stryMutAct_9fa48("43") ? limit.wingLoadingMaxPa >= cap : stryMutAct_9fa48("42") ? limit.wingLoadingMaxPa <= cap : stryMutAct_9fa48("41") ? false : stryMutAct_9fa48("40") ? true : (stryCov_9fa48("40", "41", "42", "43"), limit.wingLoadingMaxPa < cap)) cap = limit.wingLoadingMaxPa;
     return cap;
   }
 }

@@ -51,16 +51,16 @@ function stryMutAct_9fa48(id) {
   return isActive(id);
 }
 export function sampleWingLoadings(range: readonly [number, number], samples: number): Float64Array {
-  if (stryMutAct_9fa48("1159")) {
+  if (stryMutAct_9fa48("458")) {
     {}
   } else {
-    stryCov_9fa48("1159");
+    stryCov_9fa48("458");
     const [lo, hi] = range;
-    const count = stryMutAct_9fa48("1160") ? Math.min(2, Math.floor(samples)) : (stryCov_9fa48("1160"), Math.max(2, Math.floor(samples)));
+    const count = stryMutAct_9fa48("459") ? Math.min(2, Math.floor(samples)) : (stryCov_9fa48("459"), Math.max(2, Math.floor(samples)));
     const out = new Float64Array(count);
-    const step = stryMutAct_9fa48("1161") ? (hi - lo) * (count - 1) : (stryCov_9fa48("1161"), (stryMutAct_9fa48("1162") ? hi + lo : (stryCov_9fa48("1162"), hi - lo)) / (stryMutAct_9fa48("1163") ? count + 1 : (stryCov_9fa48("1163"), count - 1)));
-    for (let i = 0; stryMutAct_9fa48("1166") ? i >= count - 1 : stryMutAct_9fa48("1165") ? i <= count - 1 : stryMutAct_9fa48("1164") ? false : (stryCov_9fa48("1164", "1165", "1166"), i < (stryMutAct_9fa48("1167") ? count + 1 : (stryCov_9fa48("1167"), count - 1))); stryMutAct_9fa48("1168") ? i-- : (stryCov_9fa48("1168"), i++)) out[i] = stryMutAct_9fa48("1169") ? lo - i * step : (stryCov_9fa48("1169"), lo + (stryMutAct_9fa48("1170") ? i / step : (stryCov_9fa48("1170"), i * step)));
-    out[stryMutAct_9fa48("1171") ? count + 1 : (stryCov_9fa48("1171"), count - 1)] = hi;
+    const step = stryMutAct_9fa48("460") ? (hi - lo) * (count - 1) : (stryCov_9fa48("460"), (stryMutAct_9fa48("461") ? hi + lo : (stryCov_9fa48("461"), hi - lo)) / (stryMutAct_9fa48("462") ? count + 1 : (stryCov_9fa48("462"), count - 1)));
+    for (let i = 0; stryMutAct_9fa48("465") ? i >= count - 1 : stryMutAct_9fa48("464") ? i <= count - 1 : stryMutAct_9fa48("463") ? false : (stryCov_9fa48("463", "464", "465"), i < (stryMutAct_9fa48("466") ? count + 1 : (stryCov_9fa48("466"), count - 1))); stryMutAct_9fa48("467") ? i-- : (stryCov_9fa48("467"), i++)) out[i] = stryMutAct_9fa48("468") ? lo - i * step : (stryCov_9fa48("468"), lo + (stryMutAct_9fa48("469") ? i / step : (stryCov_9fa48("469"), i * step)));
+    out[stryMutAct_9fa48("470") ? count + 1 : (stryCov_9fa48("470"), count - 1)] = hi;
     return out;
   }
 }

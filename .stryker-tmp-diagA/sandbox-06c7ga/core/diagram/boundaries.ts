@@ -59,17 +59,17 @@ export interface RequirementBoundary {
 
 /** Every enabled requirement with its boundary, in the design's order. */
 export function requirementBoundaries(design: Design): RequirementBoundary[] {
-  if (stryMutAct_9fa48("105")) {
+  if (stryMutAct_9fa48("0")) {
     {}
   } else {
-    stryCov_9fa48("105");
-    const out: RequirementBoundary[] = stryMutAct_9fa48("106") ? ["Stryker was here"] : (stryCov_9fa48("106"), []);
+    stryCov_9fa48("0");
+    const out: RequirementBoundary[] = stryMutAct_9fa48("1") ? ["Stryker was here"] : (stryCov_9fa48("1"), []);
     design.requirements.forEach((requirement, index) => {
-      if (stryMutAct_9fa48("107")) {
+      if (stryMutAct_9fa48("2")) {
         {}
       } else {
-        stryCov_9fa48("107");
-        if (stryMutAct_9fa48("109") ? false : stryMutAct_9fa48("108") ? true : (stryCov_9fa48("108", "109"), requirement.enabled)) out.push(stryMutAct_9fa48("110") ? {} : (stryCov_9fa48("110"), {
+        stryCov_9fa48("2");
+        if (stryMutAct_9fa48("4") ? false : stryMutAct_9fa48("3") ? true : (stryCov_9fa48("3", "4"), requirement.enabled)) out.push(stryMutAct_9fa48("5") ? {} : (stryCov_9fa48("5"), {
           index,
           requirement,
           boundary: boundaryOf(requirement, design.aircraft)
@@ -82,10 +82,10 @@ export function requirementBoundaries(design: Design): RequirementBoundary[] {
 
 /** The boundaries of the enabled requirements, in the design's order. */
 export function boundariesOf(design: Design): Boundary[] {
-  if (stryMutAct_9fa48("111")) {
+  if (stryMutAct_9fa48("6")) {
     {}
   } else {
-    stryCov_9fa48("111");
-    return requirementBoundaries(design).map(stryMutAct_9fa48("112") ? () => undefined : (stryCov_9fa48("112"), entry => entry.boundary));
+    stryCov_9fa48("6");
+    return requirementBoundaries(design).map(stryMutAct_9fa48("7") ? () => undefined : (stryCov_9fa48("7"), entry => entry.boundary));
   }
 }
