@@ -1,0 +1,134 @@
+/**
+ * What `loftpoint evaluate` reads: a concept JSON file, or one stored
+ * version of a project file. Every way the input can be wrong becomes an
+ * InputError that names the file, the field and what to change.
+ */
+// @ts-nocheck
+
+import { closeSync, openSync, readFileSync, readSync, statSync } from 'node:fs';
+import { parseConceptText, type ConceptIssue, type ConceptJson, type Design, type WarningJson } from '../../core';
+import { InputError } from './errors';
+import { oneLine } from './output-file';
+
+/** A project file that could not be read for a reason other than the user's input (busy, I/O): exit status 1. */
+export class ProjectReadFailure extends Error {
+  constructor(readonly line: string) {
+    super(line);
+    this.name = 'ProjectReadFailure';
+  }
+}
+
+/** Service error codes that are not the user's input. */
+const NOT_INPUT = new Set(['busy', 'io', 'disk-full', 'internal']);
+
+export interface EvaluateInput {
+  /** The file as the user named it. */
+  file: string;
+  /** "trainer.json", or "project.loftpoint, version 3". */
+  source: string;
+  concept: ConceptJson;
+  design: Design;
+  /** Concept warnings from reading (defaults that fell back, and the like). */
+  warnings: WarningJson[];
+}
+
+const SQLITE_HEADER = 'SQLite format 3\0';
+
+/** Read FILE (and `--version`) into a resolved design, or throw InputError. */
+export async function readEvaluateInput(file: string, version: string | undefined): Promise<EvaluateInput> {
+  const kind = fileKind(file);
+  if (kind === 'project') return readProjectVersion(file, version);
+  if (version !== undefined) {
+    throw new InputError('applies only to project files; this is a concept JSON file (drop --version, or name a project file)', file, '--version');
+  }
+  return conceptFrom(file, file, readText(file));
+}
+
+function fileKind(file: string): 'concept' | 'project' {
+  let stats;
+  try {
+    stats = statSync(file);
+  } catch (error) {
+    throw fileError(error, file);
+  }
+  if (stats.isDirectory()) throw new InputError('is a folder; name a concept JSON file or a project file', file);
+  if (!stats.isFile()) throw new InputError('is not a regular file; name a concept JSON file or a project file', file);
+  const header = Buffer.alloc(16);
+  let fd: number | undefined;
+  try {
+    fd = openSync(file, 'r');
+    const read = readSync(fd, header, 0, 16, 0);
+    return read === 16 && header.toString('latin1') === SQLITE_HEADER ? 'project' : 'concept';
+  } catch (error) {
+    throw fileError(error, file);
+  } finally {
+    if (fd !== undefined) closeSync(fd);
+  }
+}
+
+function readText(file: string): string {
+  try {
+    return readFileSync(file, 'utf8').replace(/^\uFEFF/, '');
+  } catch (error) {
+    throw fileError(error, file);
+  }
+}
+
+function fileError(error: unknown, file: string): InputError {
+  const code = (error as NodeJS.ErrnoException | undefined)?.code;
+  switch (code) {
+    case 'ENOENT':
+      return new InputError('no such file', file);
+    case 'EACCES':
+    case 'EPERM':
+      return new InputError('cannot be read (permission denied)', file);
+    case 'EISDIR':
+      return new InputError('is a folder; name a concept JSON file or a project file', file);
+    default:
+      return new InputError(`cannot be read (${code ?? (error instanceof Error ? error.message : String(error))})`, file);
+  }
+}
+
+function conceptFrom(file: string, source: string, text: string): EvaluateInput {
+  const parsed = parseConceptText(text);
+  if (!parsed.ok) throw issueError(file, parsed.issues);
+  return { file, source, concept: parsed.concept, design: parsed.design, warnings: parsed.warnings };
+}
+
+/** The first problem on one line, with a count of the rest. */
+function issueError(file: string, issues: readonly ConceptIssue[]): InputError {
+  const [first] = issues;
+  if (!first) return new InputError('is not a valid concept', file);
+  const more = issues.length > 1 ? ` (and ${issues.length - 1} more problem${issues.length > 2 ? 's' : ''})` : '';
+  return new InputError(`${oneLine(first.message)}${more}`, file, first.path);
+}
+
+function versionNumber(file: string, version: string | undefined): number {
+  if (version === undefined) {
+    throw new InputError(`is a project file; say which version to evaluate with --version N (list them with: loftpoint project versions ${file})`, file, '--version');
+  }
+  if (!/^\s*\d+\s*$/.test(version) || Number(version) < 1) {
+    throw new InputError(`must be a version number (1, 2, 3, ...), not "${oneLine(version)}"`, file, '--version');
+  }
+  return Number(version);
+}
+
+async function readProjectVersion(file: string, version: string | undefined): Promise<EvaluateInput> {
+  const number = versionNumber(file, version);
+  // Loaded only here: reading a concept JSON file never touches the native SQLite module.
+  const service = await import('../service');
+  let detail;
+  try {
+    detail = service.getStoredVersion(file, number);
+  } catch (error) {
+    const failure = service.toServiceError(error);
+    const message = oneLine(failure.message).replace(new RegExp(`^${escapeRegExp(file)}:\\s*`), '');
+    if (NOT_INPUT.has(failure.code)) throw new ProjectReadFailure(`${file}: ${message}`);
+    throw new InputError(message, file, failure.code === 'not-found' ? '--version' : failure.field);
+  }
+  return conceptFrom(file, `${file}, version ${number}`, detail.conceptText);
+}
+
+function escapeRegExp(text: string): string {
+  return text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+}

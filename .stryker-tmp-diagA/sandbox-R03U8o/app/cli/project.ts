@@ -1,0 +1,271 @@
+/**
+ * `loftpoint project ...`: the project file from the command line. Scripts
+ * rely on these verbs and their output: `save` prints only the new version's
+ * number, `show` prints the concept JSON exactly as saved, `--json` prints
+ * JSON only; readable output ends with the preliminary-sizing caution.
+ */
+// @ts-nocheck
+
+import type { Command } from 'commander';
+import { readFileSync, writeFileSync, existsSync } from 'node:fs';
+import { checkOutputTarget, writeWhole, type OutputTarget } from './output-file';
+import { basename, extname } from 'node:path';
+import { PRELIMINARY_CAUTION } from '../../core/caution';
+import type { ProjectService, ServiceError, UnitSystem } from '../service';
+import { EXIT_FAILURE, InputError } from './errors';
+import type { CliIO } from './io';
+import type { SetExitCode } from './io';
+
+/** Errors that are not the user's input: reported in one line with exit status 1. */
+const NOT_INPUT = new Set(['busy', 'io', 'disk-full', 'internal']);
+
+function versionNumber(text: string, argument: string): number {
+  if (!/^\d+$/.test(text.trim()) || Number(text) < 1) {
+    throw new InputError(`"${text}" is not a version number (1, 2, 3, ...)`, undefined, argument);
+  }
+  return Number(text);
+}
+
+function unitsOption(value: string | undefined): UnitSystem | undefined {
+  if (value === undefined) return undefined;
+  if (value !== 'si' && value !== 'us' && value !== 'kt-ft') throw new InputError(`"${value}" is not a unit system: use si, us or kt-ft`, undefined, '--units');
+  return value;
+}
+
+function readText(file: string): string {
+  try {
+    return readFileSync(file, 'utf8');
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    throw new InputError(code === 'ENOENT' ? 'no such file' : `cannot read the file (${code ?? String(error)})`, file);
+  }
+}
+
+class ReportedFailure extends Error {}
+
+type ServiceModule = typeof import('../service');
+let serviceModule: ServiceModule | undefined;
+/** The project service's module: loaded by the project verbs only, so the other verbs start without the project store. */
+const projects = (): ServiceModule => serviceModule as ServiceModule;
+
+/** Runs one verb: service errors become one line, input errors exit 2, the rest exit 1. */
+function run(io: CliIO, setExitCode: SetExitCode, verb: (service: ProjectService) => void | Promise<void>) {
+  return async () => {
+    serviceModule ??= await import('../service');
+    const { StoreError } = await import('../store/errors');
+    const { ServiceFailure } = serviceModule;
+    const service = new serviceModule.ProjectService();
+    try {
+      await verb(service);
+    } catch (error) {
+      const serviceError: ServiceError | undefined =
+        error instanceof ServiceFailure
+          ? error.error
+          : error instanceof StoreError
+            ? { code: error.code, message: error.message }
+            : undefined;
+      if (!serviceError) throw error;
+      if (NOT_INPUT.has(serviceError.code)) {
+        io.err(`loftpoint: ${serviceError.message}\n`);
+        setExitCode(EXIT_FAILURE);
+        return;
+      }
+      throw new InputError(serviceError.message);
+    } finally {
+      service.closeProject({});
+    }
+  };
+}
+
+export function registerProject(program: Command, io: CliIO, setExitCode: SetExitCode): void {
+  const project = program
+    .command('project')
+    .description('Project files: every concept version with its note, author and time (preliminary sizing only).');
+
+  project
+    .command('create')
+    .description('Create a new project file; never overwrites an existing file.')
+    .argument('<file>', 'the new project file')
+    .option('--demo', 'add the demo concepts as first versions')
+    .option('--name <name>', 'project name (default: the file name)')
+    .option('--description <text>', 'project description')
+    .option('--units <system>', 'preferred units: si, us or kt-ft', 'si')
+    .action((file: string, options: { demo?: boolean; name?: string; description?: string; units?: string }) =>
+      run(io, setExitCode, (service) => {
+        const info = service.createProject({
+          file,
+          name: options.name ?? basename(file, extname(file)),
+          description: options.description ?? '',
+          units: unitsOption(options.units) ?? 'si',
+          demo: options.demo === true,
+        });
+        const versions =
+          info.versionCount === 0 ? 'no versions yet' : `${info.conceptCount} concepts, versions 1 to ${info.versionCount}`;
+        io.out(`Created project "${info.name}" in ${info.file} (${versions}).\n${PRELIMINARY_CAUTION}\n`);
+      })(),
+    );
+
+  project
+    .command('save')
+    .description('Save a concept as a new version; prints only the new version number.')
+    .argument('<file>', 'the project file')
+    .argument('<concept>', 'the concept JSON file')
+    .requiredOption('--note <text>', 'why this version exists (plain text or Markdown)')
+    .option('--concept <name>', 'the concept (design alternative) to save into; created when new')
+    .option('--parent <version>', 'the version this one was edited from (default: the newest of its concept)')
+    .option('--author <name>', 'author (default: $LOFTPOINT_AUTHOR or your user name)')
+    .action((file: string, conceptFile: string, options: { note: string; concept?: string; parent?: string; author?: string }) =>
+      run(io, setExitCode, (service) => {
+        const conceptText = readText(conceptFile);
+        const parent = options.parent === undefined ? undefined : versionNumber(options.parent, '--parent');
+        service.openProject({ file });
+        let saved;
+        try {
+          saved = service.saveVersion({
+            conceptText,
+            note: options.note,
+            ...(options.concept !== undefined ? { conceptName: options.concept } : {}),
+            ...(parent !== undefined ? { parent } : {}),
+            ...(options.author !== undefined ? { author: options.author } : {}),
+          });
+        } catch (error) {
+          if (error instanceof projects().ServiceFailure && error.error.code === 'invalid-concept') {
+            const issues = error.error.issues ?? [];
+            const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
+            const first = issues[0];
+            throw new InputError(`${first?.message ?? 'is not a valid concept'}${more}; nothing was saved`, conceptFile, first?.path || undefined);
+          }
+          throw error;
+        }
+        for (const warning of saved.warnings) io.err(`loftpoint: warning: ${conceptFile}: ${warning}\n`);
+        io.out(`${saved.version.number}\n`);
+      })(),
+    );
+
+  project
+    .command('branch')
+    .description('Start a new concept (a design alternative) from a stored version; prints only its first version number.')
+    .argument('<file>', 'the project file')
+    .argument('<version>', 'the version to start from (the new concept\'s first version has it as parent)')
+    .requiredOption('--name <name>', 'the new concept\'s name in the project')
+    .option('--title <title>', 'write this as the concept\'s own name (its title on diagrams and reports); default: copy the concept unchanged')
+    .option('--note <text>', 'why this alternative exists (default: "Started from version N of ...")')
+    .option('--author <name>', 'author (default: $LOFTPOINT_AUTHOR or your user name)')
+    .action((file: string, version: string, options: { name: string; title?: string; note?: string; author?: string }) =>
+      run(io, setExitCode, (service) => {
+        const fromVersion = versionNumber(version, 'VERSION');
+        service.openProject({ file });
+        const started = service.startConcept({
+          fromVersion,
+          name: options.name,
+          ...(options.title !== undefined ? { title: options.title } : {}),
+          ...(options.note !== undefined ? { note: options.note } : {}),
+          ...(options.author !== undefined ? { author: options.author } : {}),
+        });
+        for (const warning of started.warnings) io.err(`loftpoint: warning: ${file}: ${warning}\n`);
+        io.out(`${started.version.number}\n`);
+      })(),
+    );
+
+  project
+    .command('versions')
+    .description('List every version: number, concept, parent, time, author, optimum, note.')
+    .argument('<file>', 'the project file')
+    .option('--json', 'print the versions as JSON')
+    .option('--concept <name>', 'only this concept')
+    .option('--units <system>', 'si, us or kt-ft (default: the project preference)')
+    .action((file: string, options: { json?: boolean; concept?: string; units?: string }) =>
+      run(io, setExitCode, (service) => {
+        const units = unitsOption(options.units);
+        const info = service.openProject({ file, readonly: true });
+        const versions = service.listVersions(options.concept !== undefined ? { concept: options.concept } : {});
+        io.out(options.json ? `${JSON.stringify(versions, null, 2)}\n` : projects().versionsText(versions, units ?? info.units, info.name));
+      })(),
+    );
+
+  project
+    .command('show')
+    .description("Print one version's concept JSON exactly as saved.")
+    .argument('<file>', 'the project file')
+    .argument('<version>', 'version number')
+    .action((file: string, version: string) =>
+      run(io, setExitCode, (service) => {
+        const number = versionNumber(version, 'VERSION');
+        service.openProject({ file, readonly: true });
+        io.out(service.getVersion({ version: number }).conceptText);
+      })(),
+    );
+
+  project
+    .command('compare')
+    .description('Compare two versions: requirements, assumptions, optimum, design point, margins.')
+    .argument('<file>', 'the project file')
+    .argument('<a>', 'the earlier version')
+    .argument('<b>', 'the later version')
+    .option('--json', 'print the comparison as JSON')
+    .option('--units <system>', 'si, us or kt-ft (default: the project preference)')
+    .action((file: string, a: string, b: string, options: { json?: boolean; units?: string }) =>
+      run(io, setExitCode, (service) => {
+        const numbers = { a: versionNumber(a, 'A'), b: versionNumber(b, 'B') };
+        const units = unitsOption(options.units);
+        const info = service.openProject({ file, readonly: true });
+        const comparison = service.compareVersions(numbers);
+        io.out(options.json ? `${JSON.stringify(comparison, null, 2)}\n` : projects().comparisonText(comparison, units ?? info.units));
+      })(),
+    );
+
+  project
+    .command('export')
+    .description('Export the whole project, or one version, as JSON (stdout, or --out FILE).')
+    .argument('<file>', 'the project file')
+    .option('--version <n>', 'export only this version')
+    .option('--out <file>', 'write to this file instead of stdout (never replaces an existing file without --force)')
+    .option('--force', 'with --out: replace an existing file (never a read-only one)')
+    .action((file: string, options: { version?: string; out?: string; force?: boolean }) =>
+      run(io, setExitCode, (service) => {
+        const number = options.version === undefined ? undefined : versionNumber(options.version, '--version');
+        service.openProject({ file, readonly: true });
+        const document = number === undefined ? service.exportProject({}) : service.exportVersion({ version: number });
+        const text = `${JSON.stringify(document, null, 2)}\n`;
+        if (options.out === undefined) {
+          io.out(text);
+          return;
+        }
+        const target: OutputTarget = { file, out: options.out, flag: '--out', extension: '.json', exampleName: 'export.json', inputRole: 'the project file', force: options.force === true };
+        writeWhole(target, checkOutputTarget(target), text);
+        io.out(`Exported ${number === undefined ? 'the project' : `version ${number}`} to ${options.out}.\n${PRELIMINARY_CAUTION}\n`);
+      })(),
+    );
+
+  project
+    .command('import')
+    .description('Create a new project file from an export (never overwrites).')
+    .argument('<export>', 'a project or version export (JSON)')
+    .argument('<file>', 'the new project file')
+    .action((exportFile: string, file: string) =>
+      run(io, setExitCode, (service) => {
+        let document: unknown;
+        try {
+          document = JSON.parse(readText(exportFile));
+        } catch (error) {
+          if (error instanceof InputError) throw error;
+          throw new InputError(`is not valid JSON (${(error as Error).message})`, exportFile);
+        }
+        const info = service.importProject({ file, document });
+        io.out(`Imported ${info.versionCount} versions of ${info.conceptCount} concepts into ${info.file}.\n${PRELIMINARY_CAUTION}\n`);
+      })(),
+    );
+
+  project
+    .command('backup')
+    .description('Copy the project into a new file, safely even while it is in use (never overwrites).')
+    .argument('<file>', 'the project file')
+    .argument('<destination>', 'the new backup file')
+    .action((file: string, destination: string) =>
+      run(io, setExitCode, async (service) => {
+        service.openProject({ file, readonly: true });
+        const result = await service.backupProject({ file: destination });
+        io.out(`Backed up ${file} to ${result.file} (${result.bytes} bytes).\n${PRELIMINARY_CAUTION}\n`);
+      })(),
+    );
+}

@@ -1,0 +1,3 @@
+// @ts-nocheck
+/// <reference types="svelte" />
+/// <reference types="vite/client" />

@@ -1,0 +1,415 @@
+/**
+ * The project as the window sees it: which concept is being worked on, its
+ * saved versions, the version being looked at read-only, and a comparison of
+ * two versions. Talks to the service; the concept itself lives in Workspace.
+ */
+// @ts-nocheck
+
+import { DEMO_CONCEPTS, evaluateDesign, parseConcept, type Evaluation } from '../../../../core';
+import type {
+  ConceptSummary,
+  ProjectInfo,
+  RemoteService,
+  ServiceError,
+  VersionComparison,
+  VersionDetail,
+  VersionSummary,
+} from '../../../shared/contract';
+import type { Connection } from '../api/client';
+import type { ConceptDocument } from '../concept/edit';
+import type { Workspace } from './workspace.svelte';
+
+export interface Comparison {
+  result: VersionComparison;
+  older: VersionDetail;
+  newer: VersionDetail;
+  /** The older version evaluated in the page, drawn faintly behind the newer one. */
+  olderEvaluation: Evaluation | null;
+}
+
+export interface StatusMessage {
+  kind: 'info' | 'error';
+  text: string;
+}
+
+interface Draft {
+  document: ConceptDocument;
+  parent: number | null;
+  /** The document as last saved or opened, to tell whether there are unsaved changes. */
+  saved: ConceptDocument | null;
+  /** Came back from local storage after a reload. */
+  restored?: boolean;
+}
+
+const DRAFT_KEY = 'loftpoint.drafts';
+
+function asDocument(value: unknown): ConceptDocument {
+  return value && typeof value === 'object' && !Array.isArray(value) ? (value as ConceptDocument) : {};
+}
+
+function errorText(error: ServiceError): string {
+  const first = error.issues?.[0];
+  return first && !error.message.includes(first.message) ? `${error.message} (${first.path}: ${first.message})` : error.message;
+}
+
+export class ProjectState {
+  readonly connection: Connection;
+  readonly workspace: Workspace;
+  readonly #service: RemoteService | null;
+  /** Unsaved drafts of the other concepts, by name, kept while the page is open. */
+  readonly #drafts = new Map<string, Draft>();
+
+  project = $state.raw<ProjectInfo | null>(null);
+  concepts = $state.raw<ConceptSummary[]>([]);
+  /** Versions of the current concept, newest first. */
+  versions = $state.raw<VersionSummary[]>([]);
+  conceptName = $state<string | null>(null);
+  /** The version the draft was edited from: the parent of the next save. */
+  parent = $state<number | null>(null);
+  /** The draft as last saved or opened. */
+  saved = $state.raw<ConceptDocument | null>(null);
+  /** A saved version shown read-only, or null when the draft is shown. */
+  viewing = $state.raw<VersionDetail | null>(null);
+  comparison = $state.raw<Comparison | null>(null);
+  status = $state.raw<StatusMessage | null>(null);
+  busy = $state(false);
+  #stashed: Draft | null = null;
+
+  readonly canSave = $derived(this.#canWrite() && this.viewing === null);
+  // By content, so undoing back to the saved values is not "unsaved".
+  readonly dirty = $derived(
+    this.viewing === null &&
+      this.saved !== null &&
+      this.workspaceDocument !== this.saved &&
+      JSON.stringify(this.workspaceDocument) !== JSON.stringify(this.saved),
+  );
+
+  constructor(connection: Connection, workspace: Workspace) {
+    this.connection = connection;
+    this.workspace = workspace;
+    this.#service = connection.service;
+  }
+
+  get workspaceDocument(): ConceptDocument {
+    return this.workspace.document;
+  }
+
+  get online(): boolean {
+    return this.#service !== null && this.project !== null;
+  }
+
+  /** A project is open and its file may be written (saving may still wait for a viewed version to be left). */
+  get writable(): boolean {
+    return this.#canWrite();
+  }
+
+  #canWrite(): boolean {
+    return this.#service !== null && this.project !== null && !this.project.readonly;
+  }
+
+  #fail(error: ServiceError): void {
+    this.status = { kind: 'error', text: errorText(error) };
+  }
+
+  /** First load: the project's concepts, the last one worked on, its newest version. */
+  async start(): Promise<void> {
+    const service = this.#service;
+    if (!service) {
+      this.#loadOffline(this.connection.problem ?? 'No project is open.');
+      return;
+    }
+    const project = await service.getProject({});
+    if (!project.ok) {
+      this.#loadOffline(errorText(project.error));
+      return;
+    }
+    this.project = project.value;
+    await this.#restoreKeptDrafts();
+    await this.refreshConcepts();
+    const remembered = this.#rememberedConcept();
+    const first = this.concepts.find((concept) => concept.name === remembered) ?? this.concepts.find((concept) => concept.latestVersion !== null);
+    if (first) await this.selectConcept(first.name);
+    else this.#loadOffline('The project has no concepts yet; this demo concept is not saved until you save a version.', true);
+  }
+
+  #loadOffline(reason: string, keepProject = false): void {
+    if (!keepProject) this.project = null;
+    const demo = DEMO_CONCEPTS[0];
+    const document = asDocument(JSON.parse(JSON.stringify(demo.concept)));
+    this.conceptName = typeof document.name === 'string' ? document.name : demo.title;
+    this.parent = null;
+    this.saved = document;
+    this.workspace.load(document, false);
+    this.status = { kind: 'info', text: reason };
+  }
+
+  async refreshConcepts(): Promise<void> {
+    if (!this.#service) return;
+    const concepts = await this.#service.listConcepts({});
+    if (concepts.ok) this.concepts = concepts.value;
+    else this.#fail(concepts.error);
+  }
+
+  async refreshVersions(): Promise<void> {
+    if (!this.#service || this.conceptName === null) return;
+    const versions = await this.#service.listVersions({ concept: this.conceptName });
+    if (versions.ok) this.versions = [...versions.value].sort((a, b) => b.number - a.number);
+    else this.#fail(versions.error);
+  }
+
+  /** Switches to another concept; the draft of the one left behind is kept. */
+  async selectConcept(name: string): Promise<void> {
+    const service = this.#service;
+    if (!service) return;
+    this.#leaveView();
+    if (this.conceptName !== null && this.saved !== null) {
+      this.#drafts.set(this.conceptName, { document: this.workspace.document, parent: this.parent, saved: this.saved });
+    }
+    this.conceptName = name;
+    this.#rememberConcept(name);
+    await this.refreshVersions();
+    const kept = this.#drafts.get(name) ?? this.#storedDraft(name);
+    if (kept) {
+      this.parent = kept.parent;
+      this.saved = kept.saved;
+      this.workspace.load(kept.document, false);
+      if (kept.restored) this.status = { kind: 'info', text: 'Unsaved changes from last time were restored.' };
+      return;
+    }
+    const latest = this.versions[0];
+    if (!latest) return;
+    const detail = await service.getVersion({ version: latest.number });
+    if (!detail.ok) return this.#fail(detail.error);
+    const document = asDocument(detail.value.concept);
+    this.parent = detail.value.number;
+    this.saved = document;
+    this.workspace.load(document, this.project?.readonly === true);
+  }
+
+  async saveVersion(note: string): Promise<boolean> {
+    const service = this.#service;
+    if (!service || !this.canSave || this.conceptName === null) return false;
+    this.busy = true;
+    try {
+      const document = this.workspace.document;
+      const result = await service.saveVersion({ concept: document, note, conceptName: this.conceptName, parent: this.parent });
+      if (!result.ok) {
+        this.#fail(result.error);
+        return false;
+      }
+      this.parent = result.value.version.number;
+      this.saved = document;
+      this.#forgetStoredDraft(this.conceptName);
+      this.status = { kind: 'info', text: `Saved version ${result.value.version.number}.` };
+      await Promise.all([this.refreshVersions(), this.refreshConcepts()]);
+      return true;
+    } finally {
+      this.busy = false;
+    }
+  }
+
+  /** Shows a saved version exactly as it was saved; the draft waits aside. */
+  async openVersion(number: number): Promise<void> {
+    const service = this.#service;
+    if (!service) return;
+    const detail = await service.getVersion({ version: number });
+    if (!detail.ok) return this.#fail(detail.error);
+    this.comparison = null;
+    this.#show(detail.value);
+  }
+
+  #show(detail: VersionDetail): void {
+    if (this.viewing === null) this.#stashed = { document: this.workspace.document, parent: this.parent, saved: this.saved };
+    this.viewing = detail;
+    this.workspace.load(asDocument(detail.concept), true);
+  }
+
+  /** Leaves the read-only view and returns to the draft as it was. */
+  backToDraft(): void {
+    this.comparison = null;
+    this.#leaveView();
+  }
+
+  #leaveView(): void {
+    if (this.viewing === null) return;
+    const stashed = this.#stashed;
+    this.viewing = null;
+    this.comparison = null;
+    this.#stashed = null;
+    if (stashed) {
+      this.parent = stashed.parent;
+      this.saved = stashed.saved;
+      this.workspace.load(stashed.document, this.project?.readonly === true);
+    }
+  }
+
+  /** The viewed version becomes the draft; the next save has it as parent. */
+  continueFromViewed(): void {
+    const viewing = this.viewing;
+    if (!viewing) return;
+    const document = asDocument(viewing.concept);
+    this.viewing = null;
+    this.comparison = null;
+    this.#stashed = null;
+    this.parent = viewing.number;
+    this.saved = document;
+    this.workspace.load(document, this.project?.readonly === true);
+    this.status = { kind: 'info', text: `Continuing from version ${viewing.number}; the next save will have it as parent.` };
+  }
+
+  /**
+   * Starts a new concept (a design alternative) whose first version copies
+   * `fromVersion`, with that version as its parent, and switches to it.
+   * The name is checked by the service; a taken name leaves everything as it was.
+   */
+  async startConceptFrom(fromVersion: number, name: string, note?: string): Promise<boolean> {
+    const service = this.#service;
+    if (!service || !this.#canWrite()) return false;
+    this.busy = true;
+    try {
+      // The concept's title on the diagram and in reports follows its name in the project, as for the demos.
+      const result = await service.startConcept({ fromVersion, name: name.trim(), title: name.trim(), ...(note?.trim() ? { note: note.trim() } : {}) });
+      if (!result.ok) {
+        this.#fail(result.error);
+        return false;
+      }
+      this.viewing = null;
+      this.comparison = null;
+      this.#stashed = null;
+      await this.refreshConcepts();
+      await this.selectConcept(result.value.version.conceptName);
+      this.status = { kind: 'info', text: `Started concept "${result.value.version.conceptName}" from version ${fromVersion} (its version ${result.value.version.number}).` };
+      return true;
+    } finally {
+      this.busy = false;
+    }
+  }
+
+  /** Compares two versions: the newer one shown read-only, the older drawn faintly behind. */
+  async compare(a: number, b: number): Promise<void> {
+    const service = this.#service;
+    if (!service || a === b) return;
+    const [olderNumber, newerNumber] = a < b ? [a, b] : [b, a];
+    const [result, older, newer] = await Promise.all([
+      service.compareVersions({ a: olderNumber, b: newerNumber }),
+      service.getVersion({ version: olderNumber }),
+      service.getVersion({ version: newerNumber }),
+    ]);
+    if (!result.ok) return this.#fail(result.error);
+    if (!older.ok) return this.#fail(older.error);
+    if (!newer.ok) return this.#fail(newer.error);
+    let olderEvaluation: Evaluation | null = null;
+    const parsed = parseConcept(older.value.concept);
+    if (parsed.ok) {
+      try {
+        olderEvaluation = evaluateDesign(parsed.design);
+      } catch {
+        olderEvaluation = null;
+      }
+    }
+    this.#show(newer.value);
+    this.comparison = { result: result.value, older: older.value, newer: newer.value, olderEvaluation };
+  }
+
+  /** Browser mode: drafts the server kept for this project file (a restart starts on a new origin with empty storage). */
+  async #restoreKeptDrafts(): Promise<void> {
+    const mirror = this.connection.drafts;
+    if (!mirror || !this.project) return;
+    const kept = await mirror.load();
+    try {
+      const all = JSON.parse(localStorage.getItem(DRAFT_KEY) ?? '{}') as Record<string, unknown>;
+      for (const [name, draft] of Object.entries(kept)) {
+        const key = `${this.project.file}\n${name}`;
+        if (!(key in all)) all[key] = draft;
+      }
+      localStorage.setItem(DRAFT_KEY, JSON.stringify(all));
+    } catch {
+      // Storage disabled: nothing to offer.
+    }
+  }
+
+  /** Sends this project's stored drafts to the server (browser mode), by concept name. */
+  #mirrorDrafts(all: Record<string, unknown>): void {
+    const mirror = this.connection.drafts;
+    if (!mirror || !this.project) return;
+    const prefix = `${this.project.file}\n`;
+    const mine = Object.fromEntries(Object.entries(all).filter(([key]) => key.startsWith(prefix)).map(([key, draft]) => [key.slice(prefix.length), draft]));
+    void mirror.save(mine);
+  }
+
+  /** Keeps the draft in local storage so a reload does not lose unsaved work. */
+  storeDraft(): void {
+    if (this.viewing !== null || this.conceptName === null || !this.project) return;
+    const key = `${this.project.file}\n${this.conceptName}`;
+    try {
+      const all = JSON.parse(localStorage.getItem(DRAFT_KEY) ?? '{}') as Record<string, unknown>;
+      const had = key in all;
+      if (this.dirty) all[key] = { document: this.workspace.document, parent: this.parent };
+      else delete all[key];
+      localStorage.setItem(DRAFT_KEY, JSON.stringify(all));
+      if (this.dirty || had) this.#mirrorDrafts(all);
+    } catch {
+      // Storage full or disabled: the draft stays in the page.
+    }
+  }
+
+  #storedDraft(name: string): Draft | null {
+    if (!this.project) return null;
+    try {
+      const all = JSON.parse(localStorage.getItem(DRAFT_KEY) ?? '{}') as Record<string, { document?: unknown; parent?: unknown }>;
+      const entry = all[`${this.project.file}\n${name}`];
+      if (!entry || !entry.document || typeof entry.document !== 'object') return null;
+      const parent = typeof entry.parent === 'number' ? entry.parent : null;
+      if (parent !== null && this.versions[0] && this.versions[0].number !== parent) return null;
+      // An empty "saved" document marks the restored draft as unsaved.
+      return { document: asDocument(entry.document), parent, saved: {}, restored: true };
+    } catch {
+      return null;
+    }
+  }
+
+  #forgetStoredDraft(name: string): void {
+    if (!this.project) return;
+    try {
+      const all = JSON.parse(localStorage.getItem(DRAFT_KEY) ?? '{}') as Record<string, unknown>;
+      delete all[`${this.project.file}\n${name}`];
+      localStorage.setItem(DRAFT_KEY, JSON.stringify(all));
+      this.#mirrorDrafts(all);
+    } catch {
+      // Nothing to forget.
+    }
+  }
+
+  #rememberedConcept(): string | null {
+    try {
+      return this.project ? localStorage.getItem(`loftpoint.concept:${this.project.file}`) : null;
+    } catch {
+      return null;
+    }
+  }
+
+  #rememberConcept(name: string): void {
+    try {
+      if (this.project) localStorage.setItem(`loftpoint.concept:${this.project.file}`, name);
+    } catch {
+      // Not remembered; the first concept opens next time.
+    }
+  }
+
+  /** Reloads everything after the shell opened another project. */
+  async reload(): Promise<void> {
+    this.#drafts.clear();
+    this.viewing = null;
+    this.comparison = null;
+    this.#stashed = null;
+    this.conceptName = null;
+    this.saved = null;
+    // Nothing of the previous project may stay listed: its versions are not in the new file.
+    this.project = null;
+    this.concepts = [];
+    this.versions = [];
+    this.parent = null;
+    this.status = null;
+    await this.start();
+  }
+}

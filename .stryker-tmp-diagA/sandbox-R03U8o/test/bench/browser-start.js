@@ -1,0 +1,96 @@
+#!/usr/bin/env node
+// @ts-nocheck
+// Browser mode from launch to the first diagram: `node app/cli/browser-mode.js`
+// (what `npm start` runs without Electron) on a fresh project, its address
+// opened in Chromium, until the page shows a requirement's curve. Beside it,
+// interleaved run by run, a floor: a bare Node HTTP server started the same
+// way, serving a page that draws one SVG path. Chromium is started once
+// beforehand and is not in either time. Run: node test/bench/browser-start.js
+//
+// Target: under 1 s from launch to the first diagram.
+import { spawn } from 'node:child_process';
+import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { loadavg, tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium } from '@playwright/test';
+
+const root = new URL('../..', import.meta.url).pathname;
+const RUNS = Number(process.env.RUNS ?? 7);
+const browserPath = [process.env.CHROMIUM_PATH, '/usr/bin/chromium', '/usr/bin/chromium-browser'].find((p) => p && existsSync(p));
+
+const FLOOR_SERVER = `
+const http = require('node:http');
+const page = '<!doctype html><title>floor</title><svg width="400" height="300"><path data-testid="curve-floor" d="M10 10 L390 290" stroke="black"/></svg>';
+const server = http.createServer((req, res) => { res.writeHead(200, { 'content-type': 'text/html' }); res.end(page); });
+server.listen(0, '127.0.0.1', () => console.log('http://127.0.0.1:' + server.address().port + '/'));
+process.on('SIGTERM', () => server.close(() => process.exit(0)));
+`;
+
+/** Starts a server, waits for its address line, opens it, waits for a curve; answers ms from launch. */
+async function launchToDiagram(browser, args, env) {
+  const start = performance.now();
+  const child = spawn(process.execPath, args, { cwd: root, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
+  try {
+    const url = await new Promise((resolve, reject) => {
+      let text = '';
+      child.stdout.on('data', (chunk) => {
+        text += chunk;
+        const line = text.split('\n').find((l) => l.startsWith('http'));
+        if (line) resolve(line.trim());
+      });
+      child.on('exit', (code) => reject(new Error(`the server exited (${code}) before printing its address`)));
+    });
+    const page = await browser.newPage();
+    await page.goto(url);
+    await page.locator('[data-testid^="curve-"]').first().waitFor({ state: 'visible', timeout: 30_000 });
+    const ms = performance.now() - start;
+    await page.close();
+    return ms;
+  } finally {
+    child.kill('SIGTERM');
+    await new Promise((resolve) => (child.exitCode !== null ? resolve() : child.once('exit', resolve)));
+  }
+}
+
+function stats(xs) {
+  const s = [...xs].sort((a, b) => a - b);
+  const at = (q) => s[Math.min(s.length - 1, Math.floor(q * s.length))];
+  return { median: at(0.5), p10: at(0.1), p90: at(0.9) };
+}
+const fmt = (x) => `${Math.round(x.median)} ms (${Math.round(x.p10)}-${Math.round(x.p90)})`;
+
+if (!browserPath) {
+  console.log('No Chromium (set CHROMIUM_PATH or install Debian\'s chromium): browser-mode start not measured.');
+  process.exit(0);
+}
+if (!existsSync(join(root, 'out/renderer/index.html'))) {
+  console.log('The page is not built (npm run build:renderer): browser-mode start not measured.');
+  process.exit(0);
+}
+const browser = await chromium.launch({ executablePath: browserPath });
+const folder = mkdtempSync(join(tmpdir(), 'loftpoint-start-'));
+try {
+  const mode = [];
+  const floor = [];
+  const serve = (r) => launchToDiagram(browser, [join(root, 'app/cli/browser-mode.js'), '--port', '0', '--project', join(folder, `start-${r}.loftpoint`)], { LOFTPOINT_DATA_DIR: join(folder, 'data') });
+  const bare = () => launchToDiagram(browser, ['-e', FLOOR_SERVER], {});
+  await serve('warm'); // a stale build is rebuilt here, outside the timing
+  for (let r = 0; r < RUNS; r++) {
+    if (r % 2 === 0) {
+      mode.push(await serve(r));
+      floor.push(await bare());
+    } else {
+      floor.push(await bare());
+      mode.push(await serve(r));
+    }
+  }
+  const m = stats(mode);
+  const f = stats(floor);
+  console.log(`Browser mode, launch to first diagram, median (10th-90th percentile) of ${RUNS} interleaved runs; load average ${loadavg().map((x) => x.toFixed(2)).join(' ')}`);
+  console.log(`  loftpoint browser mode (new project)   ${fmt(m)}`);
+  console.log(`  floor: bare server and one-path page   ${fmt(f)}   ratio ${(m.median / f.median).toFixed(1)}x`);
+  console.log(`Target under 1 s: ${m.median < 1000 ? 'met' : 'NOT met'}`);
+} finally {
+  await browser.close();
+  rmSync(folder, { recursive: true, force: true });
+}

@@ -1,0 +1,55 @@
+// @ts-nocheck
+import { expect, serverAddress, test } from './window';
+
+test('first start shows a full diagram of a demo concept', async ({ window, page }) => {
+  await window.shot('opened');
+  // The address bar no longer carries the token once the page has read it.
+  expect(page.url()).not.toContain('token=');
+  await expect(window.byTest('caution')).toContainText('Preliminary sizing');
+  await expect(window.byTest('caution')).toContainText('applicable authority');
+  await expect(window.byTest('caution')).toContainText('licensed engineering review');
+  await expect(window.byTest('x-title')).toHaveText('Wing loading W/S [N/m²]');
+  await expect(window.byTest('y-title')).toHaveText('Power-to-weight P/W [W/N]');
+  // Every requirement of the demo has a boundary on the plot, each labelled.
+  const ids = await window.page.locator('li[data-testid^="requirement-"]').evaluateAll((items) => items.map((item) => item.getAttribute('data-testid')!.slice('requirement-'.length)));
+  expect(ids.length).toBeGreaterThan(3);
+  for (const id of ids) {
+    await expect(page.locator(`[data-testid="curve-${id}"], [data-testid="limit-${id}"]`)).toHaveCount(1);
+    await expect(window.byTest(`label-${id}`)).toBeVisible();
+  }
+  await expect(window.byTest('feasible-region').first()).toBeVisible();
+  await expect(window.byTest('optimum-marker')).toBeVisible();
+  await expect(window.byTest('margin-row')).toHaveCount(ids.length);
+  await expect(window.byTest('sizing-wing-area')).toHaveText(/^\d[\d,.]* m²$/);
+  await expect(window.byTest('sizing-installed')).toHaveText(/^\d[\d,.]* kW$/);
+  await window.expectNoNaN();
+
+  // Hovering reads every boundary at the pointer's wing loading and names the one that binds.
+  const plot = await window.byTest('diagram').boundingBox();
+  await page.mouse.move(plot!.x + plot!.width * 0.45, plot!.y + plot!.height * 0.5);
+  await expect(window.byTest('readout')).toBeVisible();
+  await expect(window.byTest('readout')).toContainText('W/S');
+  await expect(window.byTest('readout')).toContainText('binds here');
+  await window.shot('hover-readout');
+});
+
+test('the server refuses API calls without the token or from another origin', async ({ window, page }) => {
+  const base = new URL(page.url()).origin;
+  const noToken = await page.request.post(`${base}/api/getProject`, { data: {}, headers: { 'Content-Type': 'application/json' } });
+  expect(noToken.status()).toBe(401);
+  const token = new URL(serverAddress()).hash.replace('#token=', '');
+  const otherOrigin = await page.request.post(`${base}/api/getProject`, {
+    data: {},
+    headers: { 'Content-Type': 'application/json', 'X-Loftpoint-Token': token, Origin: 'http://evil.example' },
+  });
+  expect(otherOrigin.status()).toBe(403);
+  const rebound = await page.request.post(`${base}/api/getProject`, {
+    data: {},
+    headers: { 'Content-Type': 'application/json', 'X-Loftpoint-Token': token, Host: 'evil.example' },
+  });
+  expect(rebound.status()).toBe(403);
+  const fine = await page.request.post(`${base}/api/getProject`, { data: {}, headers: { 'Content-Type': 'application/json', 'X-Loftpoint-Token': token } });
+  expect(fine.status()).toBe(200);
+  expect((await fine.json()).ok).toBe(true);
+  void window;
+});

@@ -1,0 +1,155 @@
+/**
+ * The `loftpoint` command as installed runs JavaScript built ahead into
+ * out/cli (app/build-cli.js). These tests run that built command and the
+ * TypeScript sources through tsx (LOFTPOINT_FROM_SOURCE=1) side by side and
+ * require the same bytes and exit status; they check that the build never
+ * carries the page build tools, and that an edited source is rebuilt before
+ * it runs, in a copy of the project.
+ */
+// @ts-nocheck
+
+import { spawnSync } from 'node:child_process';
+import { cpSync, existsSync, mkdtempSync, readFileSync, readdirSync, rmSync, symlinkSync, utimesSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_CONCEPTS } from '../../core';
+
+const ROOT = resolve(__dirname, '../..');
+const BIN = join(ROOT, 'app/cli/loftpoint.js');
+const CAUTION = /certification requirements come from the applicable authority.*licensed engineering review/s;
+
+let dir: string;
+
+function run(args: string[], fromSource: boolean, bin = BIN, extra: Record<string, string> = {}) {
+  const env = { ...process.env, LOFTPOINT_FROM_SOURCE: fromSource ? '1' : '0', ...extra };
+  const result = spawnSync(process.execPath, [bin, ...args], { cwd: dir, encoding: 'utf8', env, timeout: 120_000 });
+  return { status: result.status, stdout: result.stdout, stderr: result.stderr };
+}
+
+beforeAll(() => {
+  dir = mkdtempSync(join(tmpdir(), 'loftpoint-built-'));
+  for (const demo of DEMO_CONCEPTS) writeFileSync(join(dir, `${demo.slug}.json`), `${JSON.stringify(demo.concept, null, 2)}\n`);
+  const bad = structuredClone(DEMO_CONCEPTS[0].concept) as any;
+  bad.aircraft.aero.configurations.clean.oswaldEfficiency = 1.2;
+  writeFileSync(join(dir, 'bad.json'), JSON.stringify(bad));
+  // The first run builds out/cli when it is missing or stale, as `npm install` would have.
+  expect(run(['demo'], false).status).toBe(0);
+}, 120_000);
+
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+describe('the built command line', () => {
+  it('is built, with a manifest naming its entries and sources', () => {
+    const manifest = JSON.parse(readFileSync(join(ROOT, 'out/cli/manifest.json'), 'utf8'));
+    expect(Object.keys(manifest.entries).sort()).toEqual(['loftpoint', 'serve']);
+    for (const entry of Object.values(manifest.entries) as string[]) expect(existsSync(join(ROOT, 'out/cli', entry))).toBe(true);
+    expect(manifest.inputs).toContain('app/cli/main.ts');
+    expect(manifest.inputs).toContain('core/diagram/evaluate.ts');
+  });
+
+  it('never loads the page build tools or the Svelte compiler', () => {
+    const files = readdirSync(join(ROOT, 'out/cli')).filter((name) => name.endsWith('.js'));
+    expect(files.length).toBeGreaterThan(1); // split into chunks
+    for (const name of files) {
+      const text = readFileSync(join(ROOT, 'out/cli', name), 'utf8');
+      expect(text, name).not.toMatch(/from\s*["'](vite|svelte|@sveltejs\/[^"']*|tsx[^"']*|esbuild)["']/);
+      expect(text, name).not.toMatch(/import\(\s*["'](vite|svelte|@sveltejs\/[^"']*|tsx[^"']*|esbuild)["']\)/);
+    }
+  });
+
+  for (const demo of DEMO_CONCEPTS) {
+    it(`prints the same evaluation of the ${demo.slug} demo as the sources (JSON, report, CSV)`, () => {
+      for (const extra of [['--json'], [], ['--csv', '--units', 'us']]) {
+        const args = ['evaluate', join(dir, `${demo.slug}.json`), ...extra];
+        const built = run(args, false);
+        const source = run(args, true);
+        expect(built.status).toBe(0);
+        expect(built.stderr).toBe('');
+        expect(built.stdout.length).toBeGreaterThan(100);
+        expect(built).toEqual(source);
+      }
+    }, 120_000);
+  }
+
+  it('answers bad input, help and the demo list as the sources do', () => {
+    for (const args of [['evaluate', join(dir, 'bad.json'), '--json'], ['evaluate', join(dir, 'missing.json')], ['--help'], ['demo'], ['evaluate', join(dir, 'trainer.json'), '--units', 'imperial']]) {
+      const built = run(args, false);
+      expect(built).toEqual(run(args, true));
+    }
+    const bad = run(['evaluate', join(dir, 'bad.json'), '--json'], false);
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toContain('aircraft.aero.configurations.clean.oswaldEfficiency');
+    expect(bad.stderr.trimEnd().split('\n')).toHaveLength(1);
+  }, 120_000);
+});
+
+describe('the Monte Carlo on several threads', () => {
+  it('draws the very same probability map with 1, 2 and 3 worker threads, and as the sources on one', () => {
+    // 3,000 samples are six random blocks: 1, 2 and 3 threads split them differently.
+    const svg = (workers: string, fromSource = false) => {
+      const out = join(dir, `chance-${workers}-${fromSource ? 'source' : 'built'}.svg`);
+      const result = run(['report', join(dir, 'business-jet.json'), '--out', out, '--samples', '3000', '--seed', '11'], fromSource, BIN, { LOFTPOINT_WORKERS: workers });
+      expect(result.stderr).toBe('');
+      expect(result.status).toBe(0);
+      return readFileSync(out, 'utf8');
+    };
+    const one = svg('1');
+    expect(one).toMatch(/<svg[\s>]/);
+    expect(svg('2')).toBe(one);
+    expect(svg('3')).toBe(one);
+    expect(svg('2', true)).toBe(one);
+    // Another seed draws other samples: the comparison above can fail.
+    const other = join(dir, 'chance-other-seed.svg');
+    expect(run(['report', join(dir, 'business-jet.json'), '--out', other, '--samples', '3000', '--seed', '12'], false).status).toBe(0);
+    expect(readFileSync(other, 'utf8')).not.toBe(one);
+  }, 180_000);
+});
+
+describe('a copy of the project', () => {
+  let copy: string;
+
+  beforeAll(() => {
+    copy = mkdtempSync(join(tmpdir(), 'loftpoint-copy-'));
+    for (const part of ['app', 'core', 'package.json', 'package-lock.json']) cpSync(join(ROOT, part), join(copy, part), { recursive: true });
+    symlinkSync(join(ROOT, 'node_modules'), join(copy, 'node_modules'), 'dir');
+  });
+
+  afterAll(() => rmSync(copy, { recursive: true, force: true }));
+
+  it('builds on first use, then rebuilds when a source is edited', () => {
+    const bin = join(copy, 'app/cli/loftpoint.js');
+    const first = run(['evaluate', join(dir, 'trainer.json')], false, bin);
+    expect(first.status).toBe(0);
+    expect(first.stdout).toMatch(CAUTION);
+    const manifest = join(copy, 'out/cli/manifest.json');
+    expect(existsSync(manifest)).toBe(true);
+    const builtAt = JSON.parse(readFileSync(manifest, 'utf8')).builtAt;
+
+    // Unchanged sources: the build is used as it is.
+    expect(run(['demo'], false, bin).status).toBe(0);
+    expect(JSON.parse(readFileSync(manifest, 'utf8')).builtAt).toBe(builtAt);
+
+    // An edited source, dated after the build: the next run carries the edit.
+    const caution = join(copy, 'core/caution.ts');
+    writeFileSync(caution, readFileSync(caution, 'utf8').replace('Preliminary sizing only', 'Preliminary sizing only (edited copy)'));
+    const later = new Date(builtAt + 5_000);
+    utimesSync(caution, later, later);
+    const edited = run(['evaluate', join(dir, 'trainer.json')], false, bin);
+    expect(edited.status).toBe(0);
+    expect(edited.stdout).toContain('Preliminary sizing only (edited copy)');
+    expect(JSON.parse(readFileSync(manifest, 'utf8')).builtAt).toBeGreaterThan(builtAt);
+  }, 120_000);
+
+  it('finds its project through a link, as npm links the bin', () => {
+    const links = mkdtempSync(join(tmpdir(), 'loftpoint-bin-'));
+    try {
+      symlinkSync(join(copy, 'app/cli/loftpoint.js'), join(links, 'loftpoint'));
+      const result = run(['evaluate', join(dir, 'survey-drone.json'), '--json'], false, join(links, 'loftpoint'));
+      expect(result.status).toBe(0);
+      expect(result).toEqual(run(['evaluate', join(dir, 'survey-drone.json'), '--json'], true));
+    } finally {
+      rmSync(links, { recursive: true, force: true });
+    }
+  }, 120_000);
+});

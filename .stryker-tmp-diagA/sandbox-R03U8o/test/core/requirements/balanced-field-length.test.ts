@@ -1,0 +1,75 @@
+// @ts-nocheck
+import { describe, expect, it } from 'vitest';
+import { formatIssue, parseConcept } from '../../../core/concept';
+import { balancedFieldAt, balancedFieldLengthBoundary } from '../../../core/requirements/balanced-field-length';
+import { takeoffDistanceBoundary } from '../../../core/requirements/takeoff-distance';
+import { dragCoefficient, polarOf, type Polar } from '../../../core/aero/drag-polar';
+import { aircraft, balancedField, takeoffDistance } from '../helpers/design';
+import { assertRelative } from '../helpers/asserts';
+import { curveOf } from '../constraints/curve';
+import { conceptWith } from '../concept/fixture';
+
+const twin = (engines = 2) =>
+  aircraft({ kind: 'turbofan', engines, aspectRatio: 8.6, increments: { takeoff: { cd0Increment: 0.02, oswaldEfficiency: 0.76, clMax: 1.85 } } });
+
+/**
+ * Torenbeek's balanced field length in Raymer's customary units (Aircraft Design: A Conceptual
+ * Approach, ch. 17, eq. 17.111, from memory): feet, lb/ft^2, slug/ft^3, g = 32.174 ft/s^2.
+ */
+function bflFeet(p: { wPsf: number; rhoSlug: number; cl2: number; hFt: number; tavW: number; u: number; dG: number; sigma: number }): number {
+  return (0.863 / (1 + 2.3 * p.dG)) * (p.wPsf / (p.rhoSlug * 32.174 * p.cl2) + p.hFt) * (1 / (p.tavW - p.u) + 2.7) + 655 / Math.sqrt(p.sigma);
+}
+
+describe('balanced field length (Torenbeek, as given by Raymer)', () => {
+  it('matches the formula as printed in customary units (within 0.01 %)', () => {
+    // Sea level ISA: rho 0.0023769 slug/ft^3 (US Standard Atmosphere 1976); 1 lb/ft^2 = 47.880 Pa.
+    const ac = twin();
+    const polar = polarOf(ac, 'takeoff') as Polar;
+    const w = 3400;
+    const loading = 0.32;
+    const t = balancedFieldAt(balancedField(1200), ac, w, loading);
+    const cl2 = 1.85 / 1.44;
+    const gamma2 = 0.5 * loading - dragCoefficient(polar, cl2) / cl2;
+    assertRelative(t.climbGradient, gamma2, 1e-12);
+    const feet = bflFeet({ wPsf: w / 47.880259, rhoSlug: 0.0023769, cl2, hFt: 35, tavW: 0.75 * (10 / 9) * loading, u: 0.01 * 1.85 + 0.02, dG: gamma2 - 0.024, sigma: 1 });
+    assertRelative(t.lengthM, feet * 0.3048, 1e-4);
+  });
+
+  it('is at or above the all-engines take-off distance over 35 ft for the same aircraft', () => {
+    // An engine failure can only lengthen the field: the loading for a BFL of D is at least the all-engines one for D.
+    for (const engines of [2, 3, 4]) {
+      const ac = twin(engines);
+      for (const w of [2500, 3500, 5000]) {
+        for (const d of [1200, 1800, 2500]) {
+          const bfl = curveOf(balancedFieldLengthBoundary(balancedField(d), ac)).required(w);
+          const aeo = curveOf(takeoffDistanceBoundary(takeoffDistance(d, { obstacleHeightM: 35 * 0.3048, rollingFriction: 0.02 }), ac)).required(w);
+          expect(bfl, `${engines} engines, w ${w}, ${d} m`).toBeGreaterThanOrEqual(aeo);
+        }
+      }
+    }
+  });
+
+  it('gives the distance it was solved for at the required loading', () => {
+    const ac = twin();
+    const y = curveOf(balancedFieldLengthBoundary(balancedField(1500), ac)).required(3500);
+    assertRelative(balancedFieldAt(balancedField(1500), ac, 3500, y).lengthM, 1500, 1e-6);
+  });
+
+  it('demands more when higher, hotter, shorter or heavier', () => {
+    const ac = twin();
+    const at = (extra: Parameters<typeof balancedField>[1], d = 1500, w = 3500) => curveOf(balancedFieldLengthBoundary(balancedField(d, extra), ac)).required(w);
+    const base = at({});
+    expect(at({ altitudeM: 1500 })).toBeGreaterThan(base);
+    expect(at({ temperatureOffsetK: 20 })).toBeGreaterThan(base);
+    expect(at({}, 1300)).toBeGreaterThan(base);
+    expect(at({}, 1500, 3900)).toBeGreaterThan(base);
+  });
+
+  it('refuses a single-engine concept, naming the field', () => {
+    const parsed = parseConcept(conceptWith([{ id: 'bfl', kind: 'balanced-field-length', distance: '1200 m' }]));
+    expect(parsed.ok).toBe(false);
+    if (parsed.ok) return;
+    expect(parsed.issues).toHaveLength(1);
+    expect(formatIssue(parsed.issues[0])).toMatch(/^requirements\[0\]: needs a multi-engine aircraft.*aircraft\.propulsion\.engines is 1/);
+  });
+});
