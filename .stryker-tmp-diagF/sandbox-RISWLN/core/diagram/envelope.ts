@@ -61,19 +61,19 @@ export type RequiredLoading = (wingLoadingPa: number) => number;
 
 /** E(w) = max_i y_i(w) (core/methods.md section 7); NaN where any curve cannot be met; 0 with no curves. */
 export function envelopeAt(required: readonly RequiredLoading[], wingLoadingPa: number): number {
-  if (stryMutAct_9fa48("8")) {
+  if (stryMutAct_9fa48("120")) {
     {}
   } else {
-    stryCov_9fa48("8");
+    stryCov_9fa48("120");
     let top = 0;
-    for (let i = 0; stryMutAct_9fa48("11") ? i >= required.length : stryMutAct_9fa48("10") ? i <= required.length : stryMutAct_9fa48("9") ? false : (stryCov_9fa48("9", "10", "11"), i < required.length); stryMutAct_9fa48("12") ? i-- : (stryCov_9fa48("12"), i++)) {
-      if (stryMutAct_9fa48("13")) {
+    for (let i = 0; stryMutAct_9fa48("123") ? i >= required.length : stryMutAct_9fa48("122") ? i <= required.length : stryMutAct_9fa48("121") ? false : (stryCov_9fa48("121", "122", "123"), i < required.length); stryMutAct_9fa48("124") ? i-- : (stryCov_9fa48("124"), i++)) {
+      if (stryMutAct_9fa48("125")) {
         {}
       } else {
-        stryCov_9fa48("13");
+        stryCov_9fa48("125");
         const y = required[i](wingLoadingPa);
-        if (stryMutAct_9fa48("16") ? false : stryMutAct_9fa48("15") ? true : stryMutAct_9fa48("14") ? Number.isFinite(y) : (stryCov_9fa48("14", "15", "16"), !Number.isFinite(y))) return NaN;
-        if (stryMutAct_9fa48("19") ? i === 0 && y > top : stryMutAct_9fa48("18") ? false : stryMutAct_9fa48("17") ? true : (stryCov_9fa48("17", "18", "19"), (stryMutAct_9fa48("21") ? i !== 0 : stryMutAct_9fa48("20") ? false : (stryCov_9fa48("20", "21"), i === 0)) || (stryMutAct_9fa48("24") ? y <= top : stryMutAct_9fa48("23") ? y >= top : stryMutAct_9fa48("22") ? false : (stryCov_9fa48("22", "23", "24"), y > top)))) top = y;
+        if (stryMutAct_9fa48("128") ? false : stryMutAct_9fa48("127") ? true : stryMutAct_9fa48("126") ? Number.isFinite(y) : (stryCov_9fa48("126", "127", "128"), !Number.isFinite(y))) return NaN;
+        if (stryMutAct_9fa48("131") ? i === 0 && y > top : stryMutAct_9fa48("130") ? false : stryMutAct_9fa48("129") ? true : (stryCov_9fa48("129", "130", "131"), (stryMutAct_9fa48("133") ? i !== 0 : stryMutAct_9fa48("132") ? false : (stryCov_9fa48("132", "133"), i === 0)) || (stryMutAct_9fa48("136") ? y <= top : stryMutAct_9fa48("135") ? y >= top : stryMutAct_9fa48("134") ? false : (stryCov_9fa48("134", "135", "136"), y > top)))) top = y;
       }
     }
     return top;
@@ -82,18 +82,18 @@ export function envelopeAt(required: readonly RequiredLoading[], wingLoadingPa: 
 
 /** The largest of the curves that can be met at w, ignoring those that cannot; NaN when none can. */
 export function definedEnvelopeAt(required: readonly RequiredLoading[], wingLoadingPa: number): number {
-  if (stryMutAct_9fa48("25")) {
+  if (stryMutAct_9fa48("137")) {
     {}
   } else {
-    stryCov_9fa48("25");
+    stryCov_9fa48("137");
     let top = NaN;
-    for (let i = 0; stryMutAct_9fa48("28") ? i >= required.length : stryMutAct_9fa48("27") ? i <= required.length : stryMutAct_9fa48("26") ? false : (stryCov_9fa48("26", "27", "28"), i < required.length); stryMutAct_9fa48("29") ? i-- : (stryCov_9fa48("29"), i++)) {
-      if (stryMutAct_9fa48("30")) {
+    for (let i = 0; stryMutAct_9fa48("140") ? i >= required.length : stryMutAct_9fa48("139") ? i <= required.length : stryMutAct_9fa48("138") ? false : (stryCov_9fa48("138", "139", "140"), i < required.length); stryMutAct_9fa48("141") ? i-- : (stryCov_9fa48("141"), i++)) {
+      if (stryMutAct_9fa48("142")) {
         {}
       } else {
-        stryCov_9fa48("30");
+        stryCov_9fa48("142");
         const y = required[i](wingLoadingPa);
-        if (stryMutAct_9fa48("33") ? Number.isFinite(y) || !(y <= top) : stryMutAct_9fa48("32") ? false : stryMutAct_9fa48("31") ? true : (stryCov_9fa48("31", "32", "33"), Number.isFinite(y) && (stryMutAct_9fa48("34") ? y <= top : (stryCov_9fa48("34"), !(stryMutAct_9fa48("38") ? y > top : stryMutAct_9fa48("37") ? y < top : stryMutAct_9fa48("36") ? false : stryMutAct_9fa48("35") ? true : (stryCov_9fa48("35", "36", "37", "38"), y <= top)))))) top = y;
+        if (stryMutAct_9fa48("145") ? Number.isFinite(y) || !(y <= top) : stryMutAct_9fa48("144") ? false : stryMutAct_9fa48("143") ? true : (stryCov_9fa48("143", "144", "145"), Number.isFinite(y) && (stryMutAct_9fa48("146") ? y <= top : (stryCov_9fa48("146"), !(stryMutAct_9fa48("150") ? y > top : stryMutAct_9fa48("149") ? y < top : stryMutAct_9fa48("148") ? false : stryMutAct_9fa48("147") ? true : (stryCov_9fa48("147", "148", "149", "150"), y <= top)))))) top = y;
       }
     }
     return top;
@@ -102,12 +102,12 @@ export function definedEnvelopeAt(required: readonly RequiredLoading[], wingLoad
 
 /** The smallest wing-loading limit; Infinity with none. */
 export function wingLoadingCap(limits: readonly LimitBoundary[]): number {
-  if (stryMutAct_9fa48("39")) {
+  if (stryMutAct_9fa48("151")) {
     {}
   } else {
-    stryCov_9fa48("39");
+    stryCov_9fa48("151");
     let cap = Infinity;
-    for (const limit of limits) if (stryMutAct_9fa48("43") ? limit.wingLoadingMaxPa >= cap : stryMutAct_9fa48("42") ? limit.wingLoadingMaxPa <= cap : stryMutAct_9fa48("41") ? false : stryMutAct_9fa48("40") ? true : (stryCov_9fa48("40", "41", "42", "43"), limit.wingLoadingMaxPa < cap)) cap = limit.wingLoadingMaxPa;
+    for (const limit of limits) if (stryMutAct_9fa48("155") ? limit.wingLoadingMaxPa >= cap : stryMutAct_9fa48("154") ? limit.wingLoadingMaxPa <= cap : stryMutAct_9fa48("153") ? false : stryMutAct_9fa48("152") ? true : (stryCov_9fa48("152", "153", "154", "155"), limit.wingLoadingMaxPa < cap)) cap = limit.wingLoadingMaxPa;
     return cap;
   }
 }

@@ -58,16 +58,16 @@ export function flightMachAt(entry: {
   requirement: RequirementCommon;
   boundary: Boundary;
 }, wingLoadingPa: number): number | undefined {
-  if (stryMutAct_9fa48("44")) {
+  if (stryMutAct_9fa48("156")) {
     {}
   } else {
-    stryCov_9fa48("44");
+    stryCov_9fa48("156");
     const {
       requirement,
       boundary
     } = entry;
-    const speed = stryMutAct_9fa48("45") ? boundary.speedAt(wingLoadingPa) : (stryCov_9fa48("45"), boundary.speedAt?.(wingLoadingPa));
-    if (stryMutAct_9fa48("48") ? (speed === undefined || !Number.isFinite(speed)) && !(speed > 0) : stryMutAct_9fa48("47") ? false : stryMutAct_9fa48("46") ? true : (stryCov_9fa48("46", "47", "48"), (stryMutAct_9fa48("50") ? speed === undefined && !Number.isFinite(speed) : stryMutAct_9fa48("49") ? false : (stryCov_9fa48("49", "50"), (stryMutAct_9fa48("52") ? speed !== undefined : stryMutAct_9fa48("51") ? false : (stryCov_9fa48("51", "52"), speed === undefined)) || (stryMutAct_9fa48("53") ? Number.isFinite(speed) : (stryCov_9fa48("53"), !Number.isFinite(speed))))) || (stryMutAct_9fa48("54") ? speed > 0 : (stryCov_9fa48("54"), !(stryMutAct_9fa48("58") ? speed <= 0 : stryMutAct_9fa48("57") ? speed >= 0 : stryMutAct_9fa48("56") ? false : stryMutAct_9fa48("55") ? true : (stryCov_9fa48("55", "56", "57", "58"), speed > 0)))))) return undefined;
-    return stryMutAct_9fa48("59") ? speed * atmosphere(requirement.altitudeM, requirement.temperatureOffsetK).speedOfSoundMps : (stryCov_9fa48("59"), speed / atmosphere(requirement.altitudeM, requirement.temperatureOffsetK).speedOfSoundMps);
+    const speed = stryMutAct_9fa48("157") ? boundary.speedAt(wingLoadingPa) : (stryCov_9fa48("157"), boundary.speedAt?.(wingLoadingPa));
+    if (stryMutAct_9fa48("160") ? (speed === undefined || !Number.isFinite(speed)) && !(speed > 0) : stryMutAct_9fa48("159") ? false : stryMutAct_9fa48("158") ? true : (stryCov_9fa48("158", "159", "160"), (stryMutAct_9fa48("162") ? speed === undefined && !Number.isFinite(speed) : stryMutAct_9fa48("161") ? false : (stryCov_9fa48("161", "162"), (stryMutAct_9fa48("164") ? speed !== undefined : stryMutAct_9fa48("163") ? false : (stryCov_9fa48("163", "164"), speed === undefined)) || (stryMutAct_9fa48("165") ? Number.isFinite(speed) : (stryCov_9fa48("165"), !Number.isFinite(speed))))) || (stryMutAct_9fa48("166") ? speed > 0 : (stryCov_9fa48("166"), !(stryMutAct_9fa48("170") ? speed <= 0 : stryMutAct_9fa48("169") ? speed >= 0 : stryMutAct_9fa48("168") ? false : stryMutAct_9fa48("167") ? true : (stryCov_9fa48("167", "168", "169", "170"), speed > 0)))))) return undefined;
+    return stryMutAct_9fa48("171") ? speed * atmosphere(requirement.altitudeM, requirement.temperatureOffsetK).speedOfSoundMps : (stryCov_9fa48("171"), speed / atmosphere(requirement.altitudeM, requirement.temperatureOffsetK).speedOfSoundMps);
   }
 }

@@ -51,16 +51,16 @@ function stryMutAct_9fa48(id) {
   return isActive(id);
 }
 export function sampleWingLoadings(range: readonly [number, number], samples: number): Float64Array {
-  if (stryMutAct_9fa48("458")) {
+  if (stryMutAct_9fa48("570")) {
     {}
   } else {
-    stryCov_9fa48("458");
+    stryCov_9fa48("570");
     const [lo, hi] = range;
-    const count = stryMutAct_9fa48("459") ? Math.min(2, Math.floor(samples)) : (stryCov_9fa48("459"), Math.max(2, Math.floor(samples)));
+    const count = stryMutAct_9fa48("571") ? Math.min(2, Math.floor(samples)) : (stryCov_9fa48("571"), Math.max(2, Math.floor(samples)));
     const out = new Float64Array(count);
-    const step = stryMutAct_9fa48("460") ? (hi - lo) * (count - 1) : (stryCov_9fa48("460"), (stryMutAct_9fa48("461") ? hi + lo : (stryCov_9fa48("461"), hi - lo)) / (stryMutAct_9fa48("462") ? count + 1 : (stryCov_9fa48("462"), count - 1)));
-    for (let i = 0; stryMutAct_9fa48("465") ? i >= count - 1 : stryMutAct_9fa48("464") ? i <= count - 1 : stryMutAct_9fa48("463") ? false : (stryCov_9fa48("463", "464", "465"), i < (stryMutAct_9fa48("466") ? count + 1 : (stryCov_9fa48("466"), count - 1))); stryMutAct_9fa48("467") ? i-- : (stryCov_9fa48("467"), i++)) out[i] = stryMutAct_9fa48("468") ? lo - i * step : (stryCov_9fa48("468"), lo + (stryMutAct_9fa48("469") ? i / step : (stryCov_9fa48("469"), i * step)));
-    out[stryMutAct_9fa48("470") ? count + 1 : (stryCov_9fa48("470"), count - 1)] = hi;
+    const step = stryMutAct_9fa48("572") ? (hi - lo) * (count - 1) : (stryCov_9fa48("572"), (stryMutAct_9fa48("573") ? hi + lo : (stryCov_9fa48("573"), hi - lo)) / (stryMutAct_9fa48("574") ? count + 1 : (stryCov_9fa48("574"), count - 1)));
+    for (let i = 0; stryMutAct_9fa48("577") ? i >= count - 1 : stryMutAct_9fa48("576") ? i <= count - 1 : stryMutAct_9fa48("575") ? false : (stryCov_9fa48("575", "576", "577"), i < (stryMutAct_9fa48("578") ? count + 1 : (stryCov_9fa48("578"), count - 1))); stryMutAct_9fa48("579") ? i-- : (stryCov_9fa48("579"), i++)) out[i] = stryMutAct_9fa48("580") ? lo - i * step : (stryCov_9fa48("580"), lo + (stryMutAct_9fa48("581") ? i / step : (stryCov_9fa48("581"), i * step)));
+    out[stryMutAct_9fa48("582") ? count + 1 : (stryCov_9fa48("582"), count - 1)] = hi;
     return out;
   }
 }

@@ -55,17 +55,17 @@ import { G0 } from '../units/factors';
 
 /** S = W_TO/w; P_SL or T_SL = y W_TO, all engines, and per engine; W_TO = m g0. */
 export function sizingAt(aircraft: Aircraft, axis: LoadingAxis, wingLoadingPa: number, loading: number): SizingJson {
-  if (stryMutAct_9fa48("471")) {
+  if (stryMutAct_9fa48("583")) {
     {}
   } else {
-    stryCov_9fa48("471");
-    const takeoffWeight = stryMutAct_9fa48("472") ? aircraft.takeoffMassKg / G0 : (stryCov_9fa48("472"), aircraft.takeoffMassKg * G0);
-    const installed = stryMutAct_9fa48("473") ? loading / takeoffWeight : (stryCov_9fa48("473"), loading * takeoffWeight);
-    const key = (stryMutAct_9fa48("476") ? axis !== 'thrustToWeight' : stryMutAct_9fa48("475") ? false : stryMutAct_9fa48("474") ? true : (stryCov_9fa48("474", "475", "476"), axis === (stryMutAct_9fa48("477") ? "" : (stryCov_9fa48("477"), 'thrustToWeight')))) ? stryMutAct_9fa48("478") ? "" : (stryCov_9fa48("478"), 'thrust') : stryMutAct_9fa48("479") ? "" : (stryCov_9fa48("479"), 'power');
-    return stryMutAct_9fa48("480") ? {} : (stryCov_9fa48("480"), {
-      wingArea: stryMutAct_9fa48("481") ? takeoffWeight * wingLoadingPa : (stryCov_9fa48("481"), takeoffWeight / wingLoadingPa),
+    stryCov_9fa48("583");
+    const takeoffWeight = stryMutAct_9fa48("584") ? aircraft.takeoffMassKg / G0 : (stryCov_9fa48("584"), aircraft.takeoffMassKg * G0);
+    const installed = stryMutAct_9fa48("585") ? loading / takeoffWeight : (stryCov_9fa48("585"), loading * takeoffWeight);
+    const key = (stryMutAct_9fa48("588") ? axis !== 'thrustToWeight' : stryMutAct_9fa48("587") ? false : stryMutAct_9fa48("586") ? true : (stryCov_9fa48("586", "587", "588"), axis === (stryMutAct_9fa48("589") ? "" : (stryCov_9fa48("589"), 'thrustToWeight')))) ? stryMutAct_9fa48("590") ? "" : (stryCov_9fa48("590"), 'thrust') : stryMutAct_9fa48("591") ? "" : (stryCov_9fa48("591"), 'power');
+    return stryMutAct_9fa48("592") ? {} : (stryCov_9fa48("592"), {
+      wingArea: stryMutAct_9fa48("593") ? takeoffWeight * wingLoadingPa : (stryCov_9fa48("593"), takeoffWeight / wingLoadingPa),
       [key]: installed,
-      perEngine: stryMutAct_9fa48("482") ? installed * aircraft.propulsion.engines : (stryCov_9fa48("482"), installed / aircraft.propulsion.engines),
+      perEngine: stryMutAct_9fa48("594") ? installed * aircraft.propulsion.engines : (stryCov_9fa48("594"), installed / aircraft.propulsion.engines),
       takeoffWeight
     });
   }
