@@ -12,6 +12,7 @@ import { definedEnvelopeAt, envelopeAt, wingLoadingCap, type LimitBoundary } fro
 import { allMet, FEASIBLE_TOLERANCE, marginOf } from '../../../core/diagram/margins';
 import { sizingAt } from '../../../core/diagram/sizing';
 import { readAt } from '../../../core/diagram/read-out';
+import { boundariesOf } from '../../../core/diagram/boundaries';
 import { flightMachAt } from '../../../core/diagram/flight-mach';
 import { characteristicApproach, reportedSpeeds } from '../../../core/diagram/speeds';
 import type { Boundary } from '../../../core/model';
@@ -267,4 +268,27 @@ describe('reported approach speed', () => {
     const own = reportedSpeeds(aircraft(), 800, [approachSpeed(40, { speedFactor: 1.2, massFraction: 1, configuration: 'landing' })]);
     assertRelative(own.approach!, 1.2 * Math.sqrt(1600 / (1.225 * 2.1)), 1e-7);
   });
+
+describe('ties in the read-out and the approach requirement among others', () => {
+  it('of two equal limits both exceeded, the first binds; of two equal curves, the first', () => {
+    const limits = design({ requirements: [stall(20, { id: 'first' }), stall(20, { id: 'second' })], rangePa: [100, 2000] });
+    expect(readAt(limits, 900).binding).toBe('first');
+    const curves = design({ requirements: [cruise(60, { id: 'first' }), cruise(60, { id: 'second' })], rangePa: [100, 2000] });
+    expect(readAt(curves, 500).binding).toBe('first');
+  });
+
+  it('finds the approach requirement behind requirements of other kinds', () => {
+    // 1.23 x sqrt(2 x 800/(1.225 x 2.1)) with the landing C_Lmax 2.1 (hand derivation).
+    const got = characteristicApproach(aircraft(), 800, [cruise(60), approachSpeed(40, { speedFactor: 1.23 })]);
+    assertRelative(got.speed, 1.23 * Math.sqrt((2 * 800) / (1.225 * 2.1)), 1e-7);
+  });
+
+  it('boundariesOf gives the enabled boundaries in order', () => {
+    const d = design({ requirements: [stall(20, { id: 'a' }), cruise(60, { id: 'off', enabled: false }), cruise(60, { id: 'b' })], rangePa: [100, 2000] });
+    expect(boundariesOf(d).map((b) => [b.id, b.type])).toEqual([
+      ['a', 'limit'],
+      ['b', 'curve'],
+    ]);
+  });
+});
 });

@@ -52,4 +52,9 @@ describe('fallingRoot', () => {
     // 0.3 - x on [0.1, 1]: zero at 0.3 (hand derivation).
     assertRelative(fallingRoot((v) => 0.3 - v, 0.1, 1, 1), 0.3, 1e-9, 'root');
   });
+
+  it('bisects to 1e-10 of the upper end, also when the root is much below 1', () => {
+    // 0.003 - x on [1e-4, 1e-3], widened to 2e-3 then 4e-3: zero at 0.003 (hand derivation).
+    assertRelative(fallingRoot((v) => 0.003 - v, 1e-4, 1e-3, 1), 0.003, 1e-9, 'root');
+  });
 });

@@ -68,4 +68,21 @@ describe('lastWithin', () => {
     // to = 5.0001 < probe 5.0005; the whole interval qualifies.
     expect(lastWithin(() => 0, 5, 5.0001, 0)).toBe(5.0001);
   });
+
+describe('line searches at small scales (relative stopping rules)', () => {
+  it('goldenMinimum stops at 1e-7 of b, also when b is much below 1', () => {
+    // (x - 0.004)^2 on [0, 0.01]: vertex 0.004; width 1e-7 x 0.01 = 1e-9 at the end (hand derivation).
+    assertInDelta(goldenMinimum((v) => (v - 0.004) ** 2, 0, 0.01)[0], 0.004, 1e-8, 'x');
+  });
+
+  it('goldenMinimum counts NaN right of the minimum as +Infinity too', () => {
+    // Finite (x - 4)^2 up to 3, NaN beyond: the least finite value is at the edge x = 3.
+    assertInDelta(goldenMinimum((v) => (v > 3 ? NaN : (v - 4) ** 2), 0, 10)[0], 3, 1e-5, 'x');
+  });
+
+  it('lastWithin bisects to 1e-9 of the upper end, also when it is much below 1', () => {
+    // Within the limit up to 0.004 on [0.001, 0.01]: final width 1e-9 x 0.004 (hand derivation).
+    assertInDelta(lastWithin((v) => (v <= 0.004 ? 1 : 2), 0.001, 0.01, 1), 0.004, 1e-10, 'end');
+  });
+});
 });

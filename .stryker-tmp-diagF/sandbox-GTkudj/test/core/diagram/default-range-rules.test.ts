@@ -69,4 +69,29 @@ describe('defaultWingLoadingRange, by hand', () => {
     expect(defaultWingLoadingRange([], [1000], -5000)).toEqual([130, 1300]);
     expect(defaultWingLoadingRange([], [1000], 0)).toEqual([130, 1300]);
   });
+
+  it('ignores an infinite design point', () => {
+    expect(defaultWingLoadingRange([], [1000], Infinity)).toEqual([130, 1300]);
+  });
+
+  it('a curve whose lowest value is zero leaves the lower end at a tenth of the upper', () => {
+    // y = max(0, 5000 - w): no limit; the log grid's lowest (0) ties to 10 kPa, hi = 20000, lo = 2000.
+    // Lowest y on [2000, 20000] is 0, so there is no "5 x lowest" to climb to: lo stays 2000.
+    expect(defaultWingLoadingRange([(w) => Math.max(0, 5000 - w)], [])).toEqual([2000, 20000]);
+  });
+
+  it('raises the lower end from the true lowest value of the curve, not the last one', () => {
+    // Limit 1000 Pa: hi = 1300, lo = 130, points 14.625 Pa apart. y = (w - 650)^2/1000 + 1 is
+    // least (about 1) near 650 Pa; y <= 5 x 1 where |w - 650| <= 63.2, i.e. from 586.8 Pa: first
+    // at point 32 (598 Pa); one back: 130 + 31 x 14.625 = 583.4 -> 580.
+    expect(defaultWingLoadingRange([(w) => (w - 650) ** 2 / 1000 + 1], [1000])).toEqual([580, 1300]);
+  });
+
+  it('on the log grid, ties (relative 1e-9) go to the largest wing loading, measured from the lowest value', () => {
+    // A flat curve ties everywhere: 10 kPa, hi = 20000, lo = 2000.
+    expect(defaultWingLoadingRange([() => 1], [])).toEqual([2000, 20000]);
+    // y = 1 + 1e-9 ln(w/50) creeps up: it ties with y(50) = 1 while ln(w/50) <= 1, w <= 135.9 Pa.
+    // Last grid point there: 50 x 200^(11/60) = 132.1 Pa; hi = 264.2 -> 270; lo = 26.42 -> 26.
+    expect(defaultWingLoadingRange([(w) => 1 + 1e-9 * Math.log(w / 50)], [])).toEqual([26, 270]);
+  });
 });
