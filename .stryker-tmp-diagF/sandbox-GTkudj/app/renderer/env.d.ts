@@ -1,3 +1,0 @@
-// @ts-nocheck
-/// <reference types="svelte" />
-/// <reference types="vite/client" />
