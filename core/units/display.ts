@@ -127,7 +127,8 @@ const WHOLE: ReadonlySet<DisplayQuantity> = new Set(['speed', 'length', 'altitud
 function workingText(number: number, quantity: DisplayQuantity, unit: string): string {
   if (quantity === 'altitude') {
     const hundreds = number / 100;
-    if (number >= 3000 && Math.abs(hundreds - Math.round(hundreds)) < 1e-6 && Math.round(hundreds) < 1000) {
+    // Compared in whole hundreds: 3,000 ft written in feet comes back as 2999.9999999999995 ft from metres.
+    if (Math.round(hundreds) >= 30 && Math.abs(hundreds - Math.round(hundreds)) < 1e-6 && Math.round(hundreds) < 1000) {
       return `FL${String(Math.round(hundreds)).padStart(3, '0')}`;
     }
   }
@@ -138,8 +139,9 @@ function workingText(number: number, quantity: DisplayQuantity, unit: string): s
 /** 3 significant figures, with thousands separators, never exponent notation. */
 export function threeFigures(number: number): string {
   if (number === 0) return '0';
-  const decimals = Math.max(0, 2 - Math.floor(Math.log10(Math.abs(number))));
+  // Decimals from the rounded value: 9.996 rounds to 10.0, which has one decimal, not two.
   const rounded = Number(number.toPrecision(3));
+  const decimals = Math.max(0, 2 - Math.floor(Math.log10(Math.abs(rounded))));
   return rounded.toLocaleString('en-US', { minimumFractionDigits: Math.min(decimals, 6), maximumFractionDigits: Math.min(decimals, 6) });
 }
 
