@@ -16,8 +16,8 @@ export const businessJet: DemoConcept = {
     format: 'loftpoint-concept/1',
     name: 'LP-60 light business jet',
     aircraft: {
-      // A starting guess: the mission below closes the take-off mass.
       class: 'business-jet',
+      // A starting guess: the mission below closes the take-off mass.
       takeoffMass: '7400 kg',
       aero: {
         aspectRatio: 8.6,

@@ -15,8 +15,8 @@ export const surveyDrone: DemoConcept = {
     format: 'loftpoint-concept/1',
     name: 'LP-S4 survey drone',
     aircraft: {
-      // A starting guess: the mission below closes the take-off mass.
       class: 'small-uav',
+      // A starting guess: the mission below closes the take-off mass.
       takeoffMass: '14 kg',
       aero: {
         aspectRatio: 12,

@@ -16,8 +16,8 @@ export const trainer: DemoConcept = {
     format: 'loftpoint-concept/1',
     name: 'LP-2 two-seat trainer',
     aircraft: {
-      // A starting guess: the mission below closes the take-off mass.
       class: 'light-aircraft',
+      // A starting guess: the mission below closes the take-off mass.
       takeoffMass: '750 kg',
       aero: {
         aspectRatio: 7.4,
