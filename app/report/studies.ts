@@ -9,6 +9,7 @@
  * which assumptions could move the point, but never mistakes handbook
  * spreads for the concept's own.
  */
+import { atClosedMass } from '../../core/mission/mass';
 import {
   boundaryBands,
   DEFAULT_STUDY_SAMPLES,
@@ -123,7 +124,7 @@ export function runStudies(input: StudyInput, monteCarlo?: { map: ProbabilityMap
   const [map, monteCarloMs] = monteCarlo
     ? [monteCarlo.map, monteCarlo.ms]
     : timed(() => (parameters.length > 0 ? probabilityMap(design, parameters, { seed, samples, grid }) : null));
-  const [costs, costsMs] = timed(() => requirementCosts(design, { step }));
+  const [costs, costsMs] = timed(() => requirementCosts(atClosedMass(design, evaluation), { step }));
   const rows = parameters.map((p): RangeRow => {
     const source = ranges === 'typical' ? typicalRange(p.field, design)?.source : undefined;
     return { field: p.field, label: p.label, low: p.low, nominal: p.nominal, high: p.high, distribution: p.distribution, ...(source ? { source } : {}) };
