@@ -109,6 +109,16 @@ describe('mission checks name the field', () => {
     expect(found.message).toMatch(/bare number.*kg\/kWh/);
   });
 
+  it('a misspelt mission field, with a suggestion', () => {
+    const parsed = withMission('trainer', (c) => {
+      c.mission.paylod = c.mission.payload;
+      delete c.mission.payload;
+    });
+    expect(parsed.ok).toBe(false);
+    if (parsed.ok) return;
+    expect(parsed.issues).toContainEqual({ path: 'mission.paylod', message: 'unknown field; did you mean "payload"?' });
+  });
+
   it('nothing to carry', () => {
     expect(issue(withMission('trainer', (c) => { c.mission.payload = '0 kg'; c.mission.crew = '0 kg'; })).path).toBe('mission.payload');
   });
