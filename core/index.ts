@@ -49,3 +49,4 @@ export * from './studies';
 export { AIRCRAFT_CLASSES, AIRCRAFT_CLASS_TITLES, defaultAircraftClass, type AircraftClass } from './mission/aircraft-class';
 export { MISSION_SEGMENT_KINDS, type MissionJson, type MissionSegmentJson, type MissionSegmentKind } from './concept/mission-schema';
 export type { Mission, MissionSegment, MissionEnergy } from './mission/mission';
+export { atClosedMass, missionMass, type MassResult } from './mission/mass';

@@ -9,6 +9,7 @@
  * which assumptions could move the point, but never mistakes handbook
  * spreads for the concept's own.
  */
+import { atClosedMass } from '../../core/mission/mass';
 import {
   boundaryBands,
   DEFAULT_STUDY_SAMPLES,
@@ -125,7 +126,7 @@ export function runStudies(input: StudyInput, monteCarlo?: { map: ProbabilityMap
   const [map, monteCarloMs] = monteCarlo
     ? [monteCarlo.map, monteCarlo.ms]
     : timed(() => (parameters.length > 0 ? probabilityMap(design, parameters, { seed, samples, grid }) : null));
-  const [costs, costsMs] = timed(() => requirementCosts(design, { step }));
+  const [costs, costsMs] = timed(() => requirementCosts(atClosedMass(design, evaluation), { step }));
   const rows = parameters.map((p): RangeRow => {
     const typical = ranges === 'typical' ? typicalRange(p.field, design) : null;
     return {

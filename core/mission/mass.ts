@@ -49,3 +49,8 @@ export function missionMass(mission: Mission, aircraft: Aircraft, takeoffWingLoa
     },
   };
 }
+
+/** The design with its take-off mass closed from the mission where the evaluation has one; else the design itself. */
+export function atClosedMass<D extends { aircraft: Aircraft }>(design: D, evaluation: { mass?: MassJson }): D {
+  return evaluation.mass ? { ...design, aircraft: { ...design.aircraft, takeoffMassKg: evaluation.mass.takeoff } } : design;
+}

@@ -91,14 +91,14 @@ export const trainer: DemoConcept = {
     ],
     diagram: { wingLoading: ['200 N/m^2', '1200 N/m^2'], samples: 201 },
     designPoint: { wingLoading: '650 N/m^2', powerToWeight: '11 W/N' },
-    // An invented club cross-country: two people and bags, 420 km at the cruise requirement's speed and height,
+    // An invented club cross-country: two people and bags, 420 km at the cruise requirement's 110 kt and 6000 ft,
     // half an hour of circuits, 45 minutes in reserve. BSFC of a light piston engine, about 0.28 kg/kWh (common practice).
     mission: {
       payload: '40 kg',
       crew: '170 kg',
       segments: [
         { kind: 'takeoff-climb' },
-        { kind: 'cruise', range: '420 km', requirement: 'cruise' },
+        { kind: 'cruise', range: '420 km', speed: '110 kt', altitude: '6000 ft' },
         { kind: 'loiter', endurance: '30 min', speed: '90 kt', altitude: '3000 ft' },
         { kind: 'descent-landing' },
         { kind: 'reserve', endurance: '45 min', speed: '90 kt', altitude: '3000 ft' },

@@ -56,6 +56,22 @@ const CASES: UnitCase[] = [
   // hp/lb with lb as weight: hp per lbf.
   { dimension: 'powerToWeight', unit: 'hp/lb', si: HP / LBF, library: q('1 hp/lbf', 'W/N') },
   { dimension: 'fraction', unit: '%', si: 0.01, library: () => Qty('1 %').toBase().scalar },
+  // The mission's units: 1 h = 3600 s (SI Brochure, Table 8); kWh = 3.6 MJ; hp as above.
+  { dimension: 'time', unit: 'h', si: 3600, library: q('1 h', 's') },
+  { dimension: 'brakeSpecificFuelConsumption', unit: 'kg/J', si: 1, library: q('1 kg/J', 'kg/J') },
+  { dimension: 'brakeSpecificFuelConsumption', unit: 'kg/kWh', si: 1 / 3.6e6, library: q('1 kg/kWh', 'kg/J') },
+  { dimension: 'brakeSpecificFuelConsumption', unit: 'g/kWh', si: 1e-3 / 3.6e6, library: q('1 g/kWh', 'kg/J') },
+  { dimension: 'brakeSpecificFuelConsumption', unit: 'lb/(hp h)', si: LB / (HP * 3600), library: q('1 lb/hp*h', 'kg/J') },
+  // TSFC as weight flow per thrust [1/s]: a mass flow per force times g0; lb/(lbf h) is exactly 1/h.
+  { dimension: 'thrustSpecificFuelConsumption', unit: '1/s', si: 1, library: q('1 1/s', '1/s') },
+  { dimension: 'thrustSpecificFuelConsumption', unit: '1/h', si: 1 / 3600, library: q('1 1/h', '1/s') },
+  { dimension: 'thrustSpecificFuelConsumption', unit: 'lb/(lbf h)', si: 1 / 3600, library: () => Qty('1 lb/lbf*h').to('s/m').scalar * G0 },
+  { dimension: 'thrustSpecificFuelConsumption', unit: 'mg/(N s)', si: G0 * 1e-6, library: () => Qty('1 mg/N*s').to('s/m').scalar * G0 },
+  { dimension: 'thrustSpecificFuelConsumption', unit: 'kg/(N h)', si: G0 / 3600, library: () => Qty('1 kg/N*h').to('s/m').scalar * G0 },
+  { dimension: 'specificEnergy', unit: 'J/kg', si: 1, library: q('1 J/kg', 'J/kg') },
+  { dimension: 'specificEnergy', unit: 'Wh/kg', si: 3600, library: q('1 Wh/kg', 'J/kg') },
+  { dimension: 'specificEnergy', unit: 'kWh/kg', si: 3.6e6, library: q('1 kWh/kg', 'J/kg') },
+  { dimension: 'specificEnergy', unit: 'MJ/kg', si: 1e6, library: q('1 MJ/kg', 'J/kg') },
 ];
 
 describe('parseQuantity: every unit of the concept file', () => {
@@ -63,8 +79,8 @@ describe('parseQuantity: every unit of the concept file', () => {
     const parsed = parseQuantity(`1 ${unit}`, dimension);
     expect(parsed.ok).toBe(true);
     if (parsed.ok) expect(parsed.value).toBeCloseTo(si, 12);
-    // Scaling is linear and the space between number and unit is optional.
-    const scaled = parseQuantity(`-2.5e2${unit}`, dimension);
+    // Scaling is linear and the space between number and unit is optional (needed only before a unit that starts with a digit, "0.7 1/h").
+    const scaled = parseQuantity(`-2.5e2${/^\d/.test(unit) ? ' ' : ''}${unit}`, dimension);
     expect(scaled.ok && scaled.value / si).toBeCloseTo(-250, 9);
   });
 

@@ -13,6 +13,7 @@ import {
   reportedSpeeds,
   requirementBoundaries,
   sizingAt,
+  atClosedMass,
   type Design,
   type Evaluation,
   type MarginJson,
@@ -47,7 +48,9 @@ export function tightestFirst(margins: readonly MarginJson[]): MarginJson[] {
 }
 
 /** A reporter for one design: the optimum's report when given no point. */
-export function pointReporter(design: Design, evaluation: Evaluation): PointReporter {
+export function pointReporter(written: Design, evaluation: Evaluation): PointReporter {
+  // Sizing at the mass the evaluation closed from the mission, where there is one (held while a point is dragged).
+  const design = atClosedMass(written, evaluation);
   const entries = requirementBoundaries(design);
   const axis = evaluation.axis;
   const problemOf = (warnings: Evaluation['warnings']) => missionProblem([], warnings);
