@@ -10,19 +10,10 @@ import type { UnitSystem } from '../../core/units/display';
 import { upperEnvelope } from './envelope';
 import { optimumPoint } from './points';
 import { boundarySeries } from './series';
-import type { ChartData, MarkedPoint } from './series-types';
-import { ALTERNATIVE_INKS } from './palette';
+import type { AlternativeSeries, ChartData, MarkedPoint } from './series-types';
 
-export interface AlternativeSeries {
-  name: string;
-  colour: string;
-  /** False when the alternative's diagram has the other vertical axis (thrust against power): listed, not drawn. */
-  drawn: boolean;
-  /** The alternative's own boundaries and envelope, not inverted: its region is worked out from them for each view. */
-  source: Pick<ChartData, 'system' | 'axis' | 'curves' | 'limits' | 'envelope' | 'wingLoadingRange' | 'wingLoadingLimit'> | null;
-  /** Its optimum as plotted (inverted with the rest in the power-loading view). */
-  optimum: MarkedPoint | null;
-}
+export type { AlternativeSeries };
+import { ALTERNATIVE_INKS } from './palette';
 
 /** The n-th alternative's ink; after the last, they repeat. */
 export function alternativeColour(index: number): string {

@@ -4,7 +4,6 @@
  */
 import type { LoadingAxis } from '../../core/model';
 import type { UnitSystem } from '../../core/units/display';
-import type { AlternativeSeries } from './alternatives';
 
 export interface SeriesCommon {
   id: string;
@@ -69,4 +68,16 @@ export interface ChartData {
   overlays: OverlaySeries[];
   /** Other concepts' region outlines and optima, each in its own colour. */
   alternatives: AlternativeSeries[];
+}
+
+/** Another concept drawn over the diagram (app/chart/alternatives.ts builds it). */
+export interface AlternativeSeries {
+  name: string;
+  colour: string;
+  /** False when the alternative's diagram has the other vertical axis (thrust against power): listed, not drawn. */
+  drawn: boolean;
+  /** The alternative's own boundaries and envelope, not inverted: its region is worked out from them for each view. */
+  source: Pick<ChartData, 'system' | 'axis' | 'curves' | 'limits' | 'envelope' | 'wingLoadingRange' | 'wingLoadingLimit'> | null;
+  /** Its optimum as plotted (inverted with the rest in the power-loading view). */
+  optimum: MarkedPoint | null;
 }

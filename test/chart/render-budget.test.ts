@@ -14,6 +14,8 @@ import { DEMO_CONCEPTS, evaluateDesign, parseConcept } from '../../core';
 function manyRequirements(count: number, samples?: number) {
   const concept = structuredClone(DEMO_CONCEPTS[0].concept) as any;
   const base = concept.requirements as any[];
+  // The copies are renamed, so the mission (whose cruise names a requirement) is left out.
+  delete concept.mission;
   concept.requirements = Array.from({ length: count }, (_, i) => ({ ...structuredClone(base[i % base.length]), id: `r${i}` }));
   if (samples !== undefined) concept.diagram = { ...(concept.diagram ?? {}), samples };
   const parsed = parseConcept(concept);

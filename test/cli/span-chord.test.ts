@@ -22,7 +22,9 @@ async function run(...args: string[]) {
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'loftpoint-span-'));
   jet = join(dir, 'jet.json');
-  writeFileSync(jet, JSON.stringify(DEMO_CONCEPTS.find((d) => d.slug === 'business-jet')!.concept));
+  // Without its mission, so the written take-off mass is the one sized (the closed mass has its own tests).
+  const { mission: _mission, ...concept } = DEMO_CONCEPTS.find((d) => d.slug === 'business-jet')!.concept as Record<string, unknown>;
+  writeFileSync(jet, JSON.stringify(concept));
 });
 
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
