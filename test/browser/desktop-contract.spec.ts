@@ -125,7 +125,14 @@ function installDriver(browser: Browser, port: number): void {
       return printPages.get(window)!.pdf({ printBackground: options.printBackground, preferCSSPageSize: options.preferCSSPageSize });
     },
     async send(window: StandInWindow, channel: string, args: unknown[]) {
-      await designerPages.get(window)?.evaluate(([c, a]) => (window as unknown as { __standInDeliver: (c: string, a: unknown[]) => void }).__standInDeliver(c as string, a as unknown[]), [channel, args] as const);
+      const page = designerPages.get(window);
+      // A message main sends while the stand-in's page is being torn down at the end is not delivered.
+      if (!page || page.isClosed()) return;
+      try {
+        await page.evaluate(([c, a]) => (window as unknown as { __standInDeliver: (c: string, a: unknown[]) => void }).__standInDeliver(c as string, a as unknown[]), [channel, args] as const);
+      } catch (error) {
+        if (!/has been closed/.test(String(error))) throw error;
+      }
     },
     async close(window: StandInWindow) {
       await printPages.get(window)?.context().close();
