@@ -55,6 +55,24 @@ let serviceModule: ServiceModule | undefined;
 /** The project service's module: loaded by the project verbs only, so the other verbs start without the project store. */
 const projects = (): ServiceModule => serviceModule as ServiceModule;
 
+/**
+ * Runs a save of a concept file's text; a concept that fails its checks becomes one line naming the file,
+ * the first field and how many more problems there are, ending "nothing was <outcome>".
+ */
+function refusingInvalidConcept<T>(conceptFile: string, outcome: 'saved' | 'imported', save: () => T): T {
+  try {
+    return save();
+  } catch (error) {
+    if (error instanceof projects().ServiceFailure && error.error.code === 'invalid-concept') {
+      const issues = error.error.issues ?? [];
+      const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
+      const first = issues[0];
+      throw new InputError(`${first?.message ?? 'is not a valid concept'}${more}; nothing was ${outcome}`, conceptFile, first?.path || undefined);
+    }
+    throw error;
+  }
+}
+
 /** Runs one verb: service errors become one line, input errors exit 2, the rest exit 1. */
 function run(io: CliIO, setExitCode: SetExitCode, verb: (service: ProjectService) => void | Promise<void>) {
   return async () => {
@@ -126,24 +144,15 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
         const conceptText = readText(conceptFile);
         service.openProject({ file });
         const parent = options.parent === undefined ? undefined : versionNumber(service, options.parent, '--parent');
-        let saved;
-        try {
-          saved = service.saveVersion({
+        const saved = refusingInvalidConcept(conceptFile, 'saved', () =>
+          service.saveVersion({
             conceptText,
             note: options.note,
             ...(options.concept !== undefined ? { conceptName: options.concept } : {}),
             ...(parent !== undefined ? { parent } : {}),
             ...(options.author !== undefined ? { author: options.author } : {}),
-          });
-        } catch (error) {
-          if (error instanceof projects().ServiceFailure && error.error.code === 'invalid-concept') {
-            const issues = error.error.issues ?? [];
-            const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
-            const first = issues[0];
-            throw new InputError(`${first?.message ?? 'is not a valid concept'}${more}; nothing was saved`, conceptFile, first?.path || undefined);
-          }
-          throw error;
-        }
+          }),
+        );
         for (const warning of saved.warnings) io.err(`loftpoint: warning: ${conceptFile}: ${warning}\n`);
         io.out(`${saved.version.number}\n`);
       })(),
@@ -211,24 +220,14 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
         if (service.listConcepts({}).some((concept) => concept.name === name)) {
           throw new InputError(`a concept "${name}" already exists in ${file}; choose another with --name (or add a version to it with: loftpoint project save)`, undefined, '--name');
         }
-        let saved;
-        try {
-          saved = service.saveVersion({
+        const saved = refusingInvalidConcept(conceptFile, 'imported', () =>
+          service.importConcept({
             conceptText,
-            conceptName: name,
-            parent: null,
+            name,
             note: options.note ?? `Imported from ${basename(conceptFile)}.`,
             ...(options.author !== undefined ? { author: options.author } : {}),
-          });
-        } catch (error) {
-          if (error instanceof projects().ServiceFailure && error.error.code === 'invalid-concept') {
-            const issues = error.error.issues ?? [];
-            const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
-            const first = issues[0];
-            throw new InputError(`${first?.message ?? 'is not a valid concept'}${more}; nothing was imported`, conceptFile, first?.path || undefined);
-          }
-          throw error;
-        }
+          }),
+        );
         for (const warning of saved.warnings) io.err(`loftpoint: warning: ${conceptFile}: ${warning}\n`);
         io.out(`${saved.version.number}\n`);
       })(),
