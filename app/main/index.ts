@@ -45,7 +45,8 @@ let projectFile: string | null = null;
 let dirty = false;
 
 function send(command: WindowCommand): void {
-  for (const window of windows) window.webContents.send(COMMAND_CHANNEL, command);
+  // A window being torn down stays in the set until 'closed'; sending to it would throw.
+  for (const window of windows) if (!window.isDestroyed()) window.webContents.send(COMMAND_CHANNEL, command);
 }
 
 function showError(title: string, message: string): void {

@@ -126,7 +126,8 @@ function installDriver(browser: Browser, port: number): void {
     },
     async send(window: StandInWindow, channel: string, args: unknown[]) {
       const page = designerPages.get(window);
-      // A message main sends while the stand-in's page is being torn down at the end is not delivered.
+      // The test's own teardown closes the pages while main still holds its windows open: a message
+      // main sends in that moment (a notice of the last action) has no page to reach.
       if (!page || page.isClosed()) return;
       try {
         await page.evaluate(([c, a]) => (window as unknown as { __standInDeliver: (c: string, a: unknown[]) => void }).__standInDeliver(c as string, a as unknown[]), [channel, args] as const);

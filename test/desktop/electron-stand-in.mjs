@@ -126,6 +126,9 @@ export class BrowserWindow {
   getNormalBounds() {
     return this.bounds;
   }
+  isDestroyed() {
+    return this.destroyed;
+  }
   destroy() {
     this.destroyed = true;
     recorder.record('destroy window');
