@@ -40,19 +40,21 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 describe('the built command line', () => {
   it('is built, with a manifest naming its entries and sources', () => {
     const manifest = JSON.parse(readFileSync(join(ROOT, 'out/cli/manifest.json'), 'utf8'));
-    expect(Object.keys(manifest.entries).sort()).toEqual(['loftpoint', 'serve']);
+    expect(Object.keys(manifest.entries).sort()).toEqual(['cli', 'loftpoint', 'serve']);
+    expect(manifest.entries.cli).toMatch(/\.cjs$/);
     for (const entry of Object.values(manifest.entries) as string[]) expect(existsSync(join(ROOT, 'out/cli', entry))).toBe(true);
     expect(manifest.inputs).toContain('app/cli/main.ts');
     expect(manifest.inputs).toContain('core/diagram/evaluate.ts');
   });
 
   it('never loads the page build tools or the Svelte compiler', () => {
-    const files = readdirSync(join(ROOT, 'out/cli')).filter((name) => name.endsWith('.js'));
+    const files = readdirSync(join(ROOT, 'out/cli')).filter((name) => name.endsWith('.js') || name.endsWith('.cjs'));
     expect(files.length).toBeGreaterThan(1); // split into chunks
     for (const name of files) {
       const text = readFileSync(join(ROOT, 'out/cli', name), 'utf8');
       expect(text, name).not.toMatch(/from\s*["'](vite|svelte|@sveltejs\/[^"']*|tsx[^"']*|esbuild)["']/);
       expect(text, name).not.toMatch(/import\(\s*["'](vite|svelte|@sveltejs\/[^"']*|tsx[^"']*|esbuild)["']\)/);
+      expect(text, name).not.toMatch(/require\(\s*["'](vite|svelte|@sveltejs\/[^"']*|tsx[^"']*|esbuild)["']\)/);
     }
   });
 
@@ -137,6 +139,30 @@ describe('a copy of the project', () => {
     expect(edited.status).toBe(0);
     expect(edited.stdout).toContain('Preliminary sizing only (edited copy)');
     expect(JSON.parse(readFileSync(manifest, 'utf8')).builtAt).toBeGreaterThan(builtAt);
+  }, 120_000);
+
+  it('runs from its code cache, prints the same without it, and writes the cache again when it is gone', () => {
+    const bin = join(copy, 'app/cli/loftpoint.js');
+    const args = ['evaluate', join(dir, 'utility-twin.json'), '--json'];
+    expect(run(['demo'], false, bin).status).toBe(0); // built (with its cache) when stale
+    const out = join(copy, 'out/cli');
+    const caches = () => readdirSync(out).filter((name) => name.endsWith('.cache'));
+    const entry = JSON.parse(readFileSync(join(out, 'manifest.json'), 'utf8')).entries.cli;
+    expect(caches().filter((name) => name.startsWith(`${entry}.`))).toHaveLength(1);
+    const cached = run(args, false, bin);
+    expect(cached.status).toBe(0);
+    expect(cached).toEqual(run(args, false, bin, { LOFTPOINT_CODE_CACHE: 'off' }));
+    expect(cached).toEqual(run(args, true));
+    for (const name of caches()) rmSync(join(out, name));
+    expect(run(args, false, bin, { LOFTPOINT_CODE_CACHE: 'off' })).toEqual(cached);
+    expect(caches()).toHaveLength(0);
+    expect(run(args, false, bin)).toEqual(cached);
+    expect(caches()).toHaveLength(1);
+    // A damaged cache is refused by V8: the command still prints the same, and the cache is made again.
+    const [cache] = caches();
+    writeFileSync(join(out, cache), Buffer.alloc(4096, 7));
+    expect(run(args, false, bin)).toEqual(cached);
+    expect(readFileSync(join(out, cache)).equals(Buffer.alloc(4096, 7))).toBe(false);
   }, 120_000);
 
   it('finds its project through a link, as npm links the bin', () => {
