@@ -128,8 +128,9 @@ export async function buildCli(root = defaultRoot) {
 }
 
 /**
- * The code cache of the single-file command line, made by running it here on a demo (`demo
- * trainer`, then `evaluate --json` of it), quietly; answers the cache file, or null when it could
+ * The code cache of the single-file command line, made by running it here, quietly, on what a
+ * cold start does most: `demo trainer`, `evaluate --json` of it, and a new project with the demo
+ * concepts (what browser mode's first start makes). Answers the cache file, or null when it could
  * not be made (the command line then compiles as usual and writes the cache after its first run).
  */
 async function makeCodeCache(bundle) {
@@ -142,6 +143,7 @@ async function makeCodeCache(bundle) {
     const concept = join(folder, 'trainer.json');
     writeFileSync(concept, text);
     if ((await main(['evaluate', concept, '--json'], quiet)) !== 0) return null;
+    if ((await main(['project', 'create', join(folder, 'demo.loftpoint'), '--demo'], quiet)) !== 0) return null;
     return saveCache() ? codeCacheFile(bundle) : null;
   } catch {
     return null;
@@ -164,7 +166,9 @@ export async function builtEntry(root, name) {
       return { ok: false, reason: error instanceof Error ? error.message.split('\n')[0] : String(error) };
     }
   }
-  return { ok: true, url: pathToFileURL(join(root, CLI_OUT, manifest.entries[name])).href };
+  const file = manifest.entries[name];
+  if (!file) return { ok: false, reason: `the build has no entry named ${name}` };
+  return { ok: true, url: pathToFileURL(join(root, CLI_OUT, file)).href };
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {

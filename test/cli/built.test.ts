@@ -106,6 +106,44 @@ describe('the Monte Carlo on several threads', () => {
   }, 180_000);
 });
 
+describe('browser mode from the build (app/cli/browser-mode.js)', () => {
+  const MODE = join(ROOT, 'app/cli/browser-mode.js');
+
+  it('prints its address first, serves the page on 127.0.0.1 with a new demo project, and stops cleanly', async () => {
+    const { spawn } = await import('node:child_process');
+    const project = join(dir, 'browser-mode.loftpoint');
+    const child = spawn(process.execPath, [MODE, '--port', '0', '--project', project], { env: { ...process.env, LOFTPOINT_DATA_DIR: join(dir, 'data') } });
+    let stdout = '';
+    let stderr = '';
+    child.stderr.on('data', (chunk) => (stderr += chunk));
+    const exited = new Promise<number | null>((resolveExit) => child.once('exit', (code) => resolveExit(code)));
+    await new Promise<void>((resolveLines, reject) => {
+      child.stdout.on('data', (chunk) => {
+        stdout += chunk;
+        if (CAUTION.test(stdout)) resolveLines();
+      });
+      child.once('exit', (code) => reject(new Error(`browser mode exited (${code}): ${stderr}`)));
+    });
+    const lines = stdout.split('\n');
+    expect(lines[0]).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/#token=\S+$/);
+    expect(lines[1]).toBe(`Project: ${project} (new, with the demo concepts)`);
+    const page = await fetch(lines[0].replace(/#.*$/, ''));
+    expect(page.status).toBe(200);
+    expect(await page.text()).toContain('<title>Loftpoint</title>');
+    expect(existsSync(project)).toBe(true);
+    child.kill('SIGTERM');
+    expect(await exited).toBe(0);
+    expect(stderr).toBe('');
+  }, 120_000);
+
+  it('refuses a bad port with one line naming --port and exit status 2', () => {
+    const result = spawnSync(process.execPath, [MODE, '--port', 'eighty'], { encoding: 'utf8', env: { ...process.env, LOFTPOINT_DATA_DIR: join(dir, 'data') }, timeout: 120_000 });
+    expect(result.status).toBe(2);
+    expect(result.stdout).toBe('');
+    expect(result.stderr.trimEnd().split('\n')).toEqual([expect.stringMatching(/^loftpoint: .*--port.*whole number/)]);
+  }, 120_000);
+});
+
 describe('a copy of the project', () => {
   let copy: string;
 
