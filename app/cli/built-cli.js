@@ -2,7 +2,7 @@
 // the build newer than its sources, and running its single-file form with
 // V8's code cache. The cache holds the compiled code of a whole run, so a
 // command starts without parsing and compiling the bundle again: about a
-// third of a cold start's CPU. It is only ever a shortcut: a missing, stale
+// fifth of a cold start's CPU. It is only ever a shortcut: a missing, stale
 // or rejected cache (another Node, other V8 flags) just means the bundle is
 // compiled as usual, and the cache is written again after the run.
 //
