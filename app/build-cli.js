@@ -2,31 +2,31 @@
 // Builds the command line and browser mode's server ahead into out/cli with
 // esbuild: plain JavaScript, split into chunks so a verb loads only what it
 // imports (the project store, the report writer and the page build tools stay
-// out of `evaluate`), with every package left in node_modules. `npm install`
-// runs this (prepare), `npm start` and the `loftpoint` launcher run it again
-// when a source is newer than the build.
+// out of `evaluate`), with every package left in node_modules. Beside it, the
+// command line once more as a single CommonJS file, which the launcher runs
+// with V8's code cache (app/cli/built-cli.js): the cache is made here by
+// evaluating a demo, so the first command after a build starts fast too.
+// `npm install` runs this (prepare), `npm start` and the `loftpoint` launcher
+// run it again when a source is newer than the build.
 //
 // Every file is named by its content and written whole (a temporary file, then
 // a rename), and the manifest naming the entries is written last the same way:
 // two builds at once, or a build beside a running command, never leave a
 // half-written file where a command would load it.
-import { mkdirSync, readFileSync, readdirSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readdirSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { basename, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
+import { CLI_OUT, MANIFEST, codeCacheFile, freshManifest, loadBuiltCli, writeWhole } from './cli/built-cli.js';
 
-export const CLI_OUT = join('out', 'cli');
-export const MANIFEST = join(CLI_OUT, 'manifest.json');
+export { CLI_OUT, MANIFEST, freshManifest };
 /** Entry points: the command line (exports main) and browser mode (runs on import). */
 export const ENTRIES = { loftpoint: 'app/cli/main.ts', serve: 'app/cli/serve-start.ts' };
+/** The module that is also the Monte Carlo workers' script. */
+const WORKER_SCRIPT = 'app/cli/monte-carlo-workers.ts';
 
 const here = fileURLToPath(new URL('.', import.meta.url));
 export const defaultRoot = join(here, '..');
-
-function writeWhole(file, contents) {
-  const temporary = `${file}.${process.pid}.tmp`;
-  writeFileSync(temporary, contents);
-  renameSync(temporary, file);
-}
 
 /**
  * zod's namespace object carries every language's messages (`z.locales`, a third of the bundle);
@@ -42,76 +42,120 @@ const englishOnlyValidation = {
   },
 };
 
+/** The worker module with `import.meta.url` naming its own chunk of the split build, where the worker threads start. */
+function workerScriptIn(chunk) {
+  return {
+    name: 'loftpoint-worker-script',
+    setup(build) {
+      build.onLoad({ filter: /[\\/]app[\\/]cli[\\/]monte-carlo-workers\.ts$/ }, async (args) => {
+        const { readFile } = await import('node:fs/promises');
+        const text = await readFile(args.path, 'utf8');
+        return { contents: text.replaceAll('import.meta.url', `new URL(${JSON.stringify(`./${chunk}`)}, __loftpointModuleUrl).href`), loader: 'ts' };
+      });
+    },
+  };
+}
+
 /** Builds out/cli under `root`; answers the manifest. Throws esbuild's error when a source does not build. */
 export async function buildCli(root = defaultRoot) {
   const { build } = await import('esbuild');
   const startedAt = Date.now();
   const outdir = join(root, CLI_OUT);
-  const result = await build({
+  const common = {
     absWorkingDir: root,
-    entryPoints: ENTRIES,
     outdir,
     bundle: true,
-    splitting: true,
-    format: 'esm',
     platform: 'node',
     target: 'node20.19',
     // Pure-JavaScript packages are bundled (one file read instead of hundreds, and only the parts
     // used); the native SQLite module loads from node_modules, and the page build tools are never
     // part of the output.
     external: ['better-sqlite3', 'vite', '@sveltejs/*', 'svelte', 'svelte/*', 'esbuild', 'tsx'],
-    // CommonJS packages inside an ES module bundle ask for Node's modules through require.
-    banner: { js: "import { createRequire as __loftpointRequire } from 'node:module'; const require = __loftpointRequire(import.meta.url);" },
-    plugins: [englishOnlyValidation],
     minify: true,
     entryNames: '[name]-[hash]',
-    chunkNames: 'chunk-[hash]',
     metafile: true,
     write: false,
     logLevel: 'silent',
     legalComments: 'none',
+  };
+  const split = await build({
+    ...common,
+    entryPoints: ENTRIES,
+    splitting: true,
+    format: 'esm',
+    // CommonJS packages inside an ES module bundle ask for Node's modules through require.
+    banner: { js: "import { createRequire as __loftpointRequire } from 'node:module'; const require = __loftpointRequire(import.meta.url);" },
+    plugins: [englishOnlyValidation],
+    chunkNames: 'chunk-[hash]',
+  });
+  const outputOf = (result, source) => {
+    const found = Object.entries(result.metafile.outputs).find(([, info]) => info.entryPoint === source);
+    if (!found) throw new Error(`the build has no output for ${source}`);
+    return basename(found[0]);
+  };
+  // The same command line as one CommonJS file (every verb inside, loaded when used), which V8 can
+  // cache compiled; its worker threads start from the split build's chunk.
+  const single = await build({
+    ...common,
+    entryPoints: { 'loftpoint-cli': ENTRIES.loftpoint },
+    format: 'cjs',
+    outExtension: { '.js': '.cjs' },
+    define: { 'import.meta.url': '__loftpointModuleUrl' },
+    plugins: [englishOnlyValidation, workerScriptIn(outputOf(split, WORKER_SCRIPT))],
   });
   mkdirSync(outdir, { recursive: true });
   const written = new Set([basename(MANIFEST)]);
-  for (const file of result.outputFiles) {
+  for (const file of [...split.outputFiles, ...single.outputFiles]) {
     written.add(basename(file.path));
     writeWhole(file.path, file.contents);
   }
   const entries = {};
-  for (const [output, info] of Object.entries(result.metafile.outputs)) {
-    const name = Object.entries(ENTRIES).find(([, source]) => info.entryPoint === source)?.[0];
-    if (name) entries[name] = basename(output);
-  }
-  // The sources the launcher compares with the build: our own files, this script, and the lock
-  // file for the bundled packages (npm rewrites it whenever a package changes).
-  const own = Object.keys(result.metafile.inputs).filter((input) => !input.startsWith('node_modules/'));
-  const manifest = { builtAt: startedAt, entries, inputs: [...own.sort(), 'app/build-cli.js', 'package-lock.json'] };
+  for (const name of Object.keys(ENTRIES)) entries[name] = outputOf(split, ENTRIES[name]);
+  entries.cli = outputOf(single, ENTRIES.loftpoint);
+  const cache = await makeCodeCache(join(outdir, entries.cli));
+  if (cache) written.add(basename(cache));
+  // The sources the launcher compares with the build: our own files, the build scripts, and the
+  // lock file for the bundled packages (npm rewrites it whenever a package changes).
+  const own = Object.keys(split.metafile.inputs).filter((input) => !input.startsWith('node_modules/'));
+  const manifest = { builtAt: startedAt, entries, inputs: [...own.sort(), 'app/build-cli.js', 'app/cli/built-cli.js', 'package-lock.json'] };
   writeWhole(join(root, MANIFEST), `${JSON.stringify(manifest, null, 1)}\n`);
   // Files of earlier builds, once no command started in the last minute could still be loading them.
   for (const name of readdirSync(outdir)) {
     const file = join(outdir, name);
-    if (!written.has(name) && Date.now() - statSync(file).mtimeMs > 60_000) rmSync(file, { force: true });
+    if (!written.has(name) && Date.now() - statSync(file, { throwIfNoEntry: false })?.mtimeMs > 60_000) rmSync(file, { force: true });
   }
   return manifest;
 }
 
 /**
- * The build's manifest when it is newer than every source it was built from, else null. One stat
- * per source (about 190, a few milliseconds), no walk of the folders: a new file matters only once
- * a listed source imports it, and then that source is newer.
+ * The code cache of the single-file command line, made by running it here, quietly, on what a
+ * cold start does most: `demo trainer`, `evaluate --json` of it, and a new project with the demo
+ * concepts (what browser mode's first start makes). Answers the cache file, or null when it could
+ * not be made (the command line then compiles as usual and writes the cache after its first run).
  */
-export function freshManifest(root = defaultRoot) {
-  let manifest;
+async function makeCodeCache(bundle) {
+  const folder = mkdtempSync(join(tmpdir(), 'loftpoint-cache-'));
   try {
-    manifest = JSON.parse(readFileSync(join(root, MANIFEST), 'utf8'));
+    const { main, saveCache } = loadBuiltCli(bundle, 'write');
+    let text = '';
+    const quiet = { out: (chunk) => void (text += chunk), err: () => {} };
+    const concept = join(folder, 'trainer.json');
+    try {
+      if ((await main(['demo', 'trainer'], quiet)) === 0) {
+        writeFileSync(concept, text);
+        await main(['evaluate', concept, '--json'], quiet);
+      }
+      // Without a working SQLite module this step fails; the cache keeps what ran before it.
+      await main(['project', 'create', join(folder, 'demo.loftpoint'), '--demo'], quiet);
+    } catch {
+      // whatever ran is still worth caching
+    }
+    return saveCache() ? codeCacheFile(bundle) : null;
   } catch {
     return null;
+  } finally {
+    rmSync(folder, { recursive: true, force: true });
   }
-  for (const input of manifest.inputs) {
-    const info = statSync(`${root}/${input}`, { throwIfNoEntry: false });
-    if (!info || info.mtimeMs > manifest.builtAt) return null;
-  }
-  return manifest;
 }
 
 /**
@@ -128,7 +172,9 @@ export async function builtEntry(root, name) {
       return { ok: false, reason: error instanceof Error ? error.message.split('\n')[0] : String(error) };
     }
   }
-  return { ok: true, url: pathToFileURL(join(root, CLI_OUT, manifest.entries[name])).href };
+  const file = manifest.entries[name];
+  if (!file) return { ok: false, reason: `the build has no entry named ${name}` };
+  return { ok: true, url: pathToFileURL(join(root, CLI_OUT, file)).href };
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {

@@ -2,11 +2,14 @@
 // The `loftpoint` command. It runs the JavaScript built ahead into out/cli
 // (app/build-cli.js; `npm install` builds it), rebuilding it first when a
 // source it was built from is newer, so an edited clone still runs what it
-// says. LOFTPOINT_FROM_SOURCE=1 runs the TypeScript sources through tsx
-// instead (development, and the test that compares the two).
+// says: the single-file form with V8's code cache (app/cli/built-cli.js),
+// else the split build. LOFTPOINT_FROM_SOURCE=1 runs the TypeScript sources
+// through tsx instead (development, and the test that compares the two);
+// LOFTPOINT_CODE_CACHE=off runs the single file without the code cache.
 import { existsSync, readFileSync, realpathSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
+import { CLI_OUT, freshManifest, loadBuiltCli } from './built-cli.js';
 
 /** The project folder: the nearest folder above this file (links resolved) whose package.json is loftpoint's. */
 function projectRoot(start) {
@@ -28,15 +31,39 @@ async function fromSource(root) {
   return import(pathToFileURL(join(root, 'app', 'cli', 'main.ts')).href);
 }
 
+/** The build's manifest, rebuilt first when a source is newer; or the reason it could not be built. */
+async function built(root) {
+  const manifest = freshManifest(root);
+  if (manifest) return { ok: true, manifest };
+  // The build tools load only when there is something to build.
+  const { buildCli } = await import(pathToFileURL(join(root, 'app', 'build-cli.js')).href);
+  try {
+    return { ok: true, manifest: await buildCli(root) };
+  } catch (error) {
+    return { ok: false, reason: error instanceof Error ? error.message.split('\n')[0] : String(error) };
+  }
+}
+
 async function cli(root) {
   if (process.env.LOFTPOINT_FROM_SOURCE === '1') return fromSource(root);
-  const { builtEntry } = await import(pathToFileURL(join(root, 'app', 'build-cli.js')).href);
-  const entry = await builtEntry(root, 'loftpoint');
-  if (entry.ok) return import(entry.url);
-  process.stderr.write(`loftpoint: the command line could not be rebuilt (${entry.reason}); running it from its sources\n`);
-  return fromSource(root);
+  const build = await built(root);
+  if (!build.ok) {
+    process.stderr.write(`loftpoint: the command line could not be rebuilt (${build.reason}); running it from its sources\n`);
+    return fromSource(root);
+  }
+  const { entries } = build.manifest;
+  if (entries.cli) {
+    try {
+      return loadBuiltCli(join(root, CLI_OUT, entries.cli), process.env.LOFTPOINT_CODE_CACHE === 'off' ? 'off' : 'use');
+    } catch {
+      // an unreadable single file: the split build below runs the very same command line
+    }
+  }
+  return import(pathToFileURL(join(root, CLI_OUT, entries.loftpoint)).href);
 }
 
 const root = projectRoot(realpathSync(fileURLToPath(import.meta.url)));
-const { main } = await cli(root);
+const { main, saveCache } = await cli(root);
 process.exitCode = await main(process.argv.slice(2));
+// After the run, so a cache written now holds everything the run compiled.
+saveCache?.();

@@ -40,19 +40,21 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 describe('the built command line', () => {
   it('is built, with a manifest naming its entries and sources', () => {
     const manifest = JSON.parse(readFileSync(join(ROOT, 'out/cli/manifest.json'), 'utf8'));
-    expect(Object.keys(manifest.entries).sort()).toEqual(['loftpoint', 'serve']);
+    expect(Object.keys(manifest.entries).sort()).toEqual(['cli', 'loftpoint', 'serve']);
+    expect(manifest.entries.cli).toMatch(/\.cjs$/);
     for (const entry of Object.values(manifest.entries) as string[]) expect(existsSync(join(ROOT, 'out/cli', entry))).toBe(true);
     expect(manifest.inputs).toContain('app/cli/main.ts');
     expect(manifest.inputs).toContain('core/diagram/evaluate.ts');
   });
 
   it('never loads the page build tools or the Svelte compiler', () => {
-    const files = readdirSync(join(ROOT, 'out/cli')).filter((name) => name.endsWith('.js'));
+    const files = readdirSync(join(ROOT, 'out/cli')).filter((name) => name.endsWith('.js') || name.endsWith('.cjs'));
     expect(files.length).toBeGreaterThan(1); // split into chunks
     for (const name of files) {
       const text = readFileSync(join(ROOT, 'out/cli', name), 'utf8');
       expect(text, name).not.toMatch(/from\s*["'](vite|svelte|@sveltejs\/[^"']*|tsx[^"']*|esbuild)["']/);
       expect(text, name).not.toMatch(/import\(\s*["'](vite|svelte|@sveltejs\/[^"']*|tsx[^"']*|esbuild)["']\)/);
+      expect(text, name).not.toMatch(/require\(\s*["'](vite|svelte|@sveltejs\/[^"']*|tsx[^"']*|esbuild)["']\)/);
     }
   });
 
@@ -104,6 +106,44 @@ describe('the Monte Carlo on several threads', () => {
   }, 180_000);
 });
 
+describe('browser mode from the build (app/cli/browser-mode.js)', () => {
+  const MODE = join(ROOT, 'app/cli/browser-mode.js');
+
+  it('prints its address first, serves the page on 127.0.0.1 with a new demo project, and stops cleanly', async () => {
+    const { spawn } = await import('node:child_process');
+    const project = join(dir, 'browser-mode.loftpoint');
+    const child = spawn(process.execPath, [MODE, '--port', '0', '--project', project], { env: { ...process.env, LOFTPOINT_DATA_DIR: join(dir, 'data') } });
+    let stdout = '';
+    let stderr = '';
+    child.stderr.on('data', (chunk) => (stderr += chunk));
+    const exited = new Promise<number | null>((resolveExit) => child.once('exit', (code) => resolveExit(code)));
+    await new Promise<void>((resolveLines, reject) => {
+      child.stdout.on('data', (chunk) => {
+        stdout += chunk;
+        if (CAUTION.test(stdout)) resolveLines();
+      });
+      child.once('exit', (code) => reject(new Error(`browser mode exited (${code}): ${stderr}`)));
+    });
+    const lines = stdout.split('\n');
+    expect(lines[0]).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/#token=\S+$/);
+    expect(lines[1]).toBe(`Project: ${project} (new, with the demo concepts)`);
+    const page = await fetch(lines[0].replace(/#.*$/, ''));
+    expect(page.status).toBe(200);
+    expect(await page.text()).toContain('<title>Loftpoint</title>');
+    expect(existsSync(project)).toBe(true);
+    child.kill('SIGTERM');
+    expect(await exited).toBe(0);
+    expect(stderr).toBe('');
+  }, 120_000);
+
+  it('refuses a bad port with one line naming --port and exit status 2', () => {
+    const result = spawnSync(process.execPath, [MODE, '--port', 'eighty'], { encoding: 'utf8', env: { ...process.env, LOFTPOINT_DATA_DIR: join(dir, 'data') }, timeout: 120_000 });
+    expect(result.status).toBe(2);
+    expect(result.stdout).toBe('');
+    expect(result.stderr.trimEnd().split('\n')).toEqual([expect.stringMatching(/^loftpoint: .*--port.*whole number/)]);
+  }, 120_000);
+});
+
 describe('a copy of the project', () => {
   let copy: string;
 
@@ -137,6 +177,30 @@ describe('a copy of the project', () => {
     expect(edited.status).toBe(0);
     expect(edited.stdout).toContain('Preliminary sizing only (edited copy)');
     expect(JSON.parse(readFileSync(manifest, 'utf8')).builtAt).toBeGreaterThan(builtAt);
+  }, 120_000);
+
+  it('runs from its code cache, prints the same without it, and writes the cache again when it is gone', () => {
+    const bin = join(copy, 'app/cli/loftpoint.js');
+    const args = ['evaluate', join(dir, 'utility-twin.json'), '--json'];
+    expect(run(['demo'], false, bin).status).toBe(0); // built (with its cache) when stale
+    const out = join(copy, 'out/cli');
+    const caches = () => readdirSync(out).filter((name) => name.endsWith('.cache'));
+    const entry = JSON.parse(readFileSync(join(out, 'manifest.json'), 'utf8')).entries.cli;
+    expect(caches().filter((name) => name.startsWith(`${entry}.`))).toHaveLength(1);
+    const cached = run(args, false, bin);
+    expect(cached.status).toBe(0);
+    expect(cached).toEqual(run(args, false, bin, { LOFTPOINT_CODE_CACHE: 'off' }));
+    expect(cached).toEqual(run(args, true));
+    for (const name of caches()) rmSync(join(out, name));
+    expect(run(args, false, bin, { LOFTPOINT_CODE_CACHE: 'off' })).toEqual(cached);
+    expect(caches()).toHaveLength(0);
+    expect(run(args, false, bin)).toEqual(cached);
+    expect(caches()).toHaveLength(1);
+    // A damaged cache is refused by V8: the command still prints the same, and the cache is made again.
+    const [cache] = caches();
+    writeFileSync(join(out, cache), Buffer.alloc(4096, 7));
+    expect(run(args, false, bin)).toEqual(cached);
+    expect(readFileSync(join(out, cache)).equals(Buffer.alloc(4096, 7))).toBe(false);
   }, 120_000);
 
   it('finds its project through a link, as npm links the bin', () => {
