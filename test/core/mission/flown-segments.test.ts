@@ -74,6 +74,27 @@ describe('a battery aircraft, segment by segment', () => {
   });
 });
 
+describe('a battery aircraft that lands and flies on', () => {
+  it('climbs again from the ground after a landing, to the next leg\'s altitude', () => {
+    const f = flown(
+      mission({
+        emptyMassFraction: 0.5,
+        energy: battery,
+        segments: [level(300), { kind: 'descent-landing', fraction: 0.995 }, { kind: 'takeoff-climb', fraction: 0.955 }, level(700)],
+      }),
+    );
+    // Landing draws nothing and ends at the ground; the next climb is 700 m / 0.8 = 875 J/N (hand).
+    expect(f.segments[1].energyPerWeight).toBe(0);
+    expect(f.segments[2].energyPerWeight).toBeCloseTo(875, 9);
+  });
+
+  it('a descent and landing draws nothing, also from a leg below sea level', () => {
+    // Altitudes from -1000 m are accepted (a field below sea level; an invented case).
+    const f = flown(mission({ emptyMassFraction: 0.5, energy: battery, segments: [level(-300), { kind: 'descent-landing', fraction: 0.995 }] }));
+    expect(f.segments[1].energyPerWeight).toBe(0);
+  });
+});
+
 describe('a fuel mission, segment by segment', () => {
   it('fraction segments burn their share of the mass they start with; a fraction reserve keeps its share of what was burnt', () => {
     const twin = aircraft({ kind: 'piston', engines: 2, aspectRatio: 8, clean: { cd0: 0.028, oswaldEfficiency: 0.8, clMax: 1.5 } });
