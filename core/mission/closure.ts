@@ -50,7 +50,7 @@ function noClosure(mission: Mission, flown: FlownMission): { ok: false; field: s
       field: 'mission.payload',
       message:
         `payload and crew of ${formatQuantity(carried, 'mass', 'si')} are ${two(carried / top)} of even ${formatQuantity(top, 'mass', 'si')}; ` +
-        `with the empty-mass fraction ${two(emptyTop)}${there} and the ${energyName} ${two(energy)} they add to 1.00 or more, ` +
+        `with the empty-mass fraction ${two(emptyTop)}${there} and the ${energyName} ${two(energy)} they add to ${two(carried / top + emptyTop + energy)}, ` +
         `so no take-off mass up to ${formatQuantity(top, 'mass', 'si')} closes; carry less`,
     };
   }
