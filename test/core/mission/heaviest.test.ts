@@ -18,8 +18,8 @@ describe('the heaviest take-off mass the closure looks at', () => {
 
   it('a payload of 600 t does not close below 1,000 t, and the message names the payload and crew', () => {
     // At 1,000 t: (600,000 + 90) / 1e6 = 0.60 carried, the twin regression 1.51 x (1e6 / 0.45359237 lb)^-0.10 = 0.35
-    // (Raymer, section 3.4; from memory), and the fuel of an 800 km leg about 0.05: 1.0019 by hand, above 1, so no mass up to
-    // 1,000 t closes.
+    // (Raymer, section 3.4; from memory), and the fuel of an 800 km leg about 0.05: just above 1 (1.00 to two places),
+    // so no mass up to 1,000 t closes.
     const empty = regressionEmptyFraction(1e6, 'twin-engine-general-aviation', 1);
     expect(empty).toBeCloseTo(1.51 * (1e6 / 0.45359237) ** -0.1, 12);
     const result = closeMass(mission({ payloadKg: 600_000, segments: [cruise(800, 110, 0)] }), twin, 1500);
