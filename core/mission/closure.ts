@@ -37,12 +37,24 @@ function noClosure(mission: Mission, flown: FlownMission): { ok: false; field: s
     return { ok: false, field: 'mission.segments', message: `the ${energyName} ${two(energy)} alone is the whole take-off mass or more; ${advice}` };
   }
   const given = mission.emptyMassFraction !== undefined;
-  const atStart = emptyFractionAt(mission, mission.startingMassKg);
-  const at = atStart + energy >= 1 ? mission.startingMassKg : HEAVIEST_TAKEOFF_MASS_KG;
+  const at = mission.startingMassKg;
   const empty = emptyFractionAt(mission, at);
-  const whence = given
-    ? ''
-    : ` (${AIRCRAFT_CLASS_TITLES[mission.aircraftClass]} regression at ${at === HEAVIEST_TAKEOFF_MASS_KG ? 'even ' : ''}${formatQuantity(at, 'mass', 'si')})`;
+  if (empty + energy < 1) {
+    // The fractions alone leave room: payload and crew are too large a share of even the heaviest mass.
+    const top = HEAVIEST_TAKEOFF_MASS_KG;
+    const carried = mission.payloadKg + mission.crewKg;
+    const emptyTop = emptyFractionAt(mission, top);
+    const there = given ? '' : ` (${AIRCRAFT_CLASS_TITLES[mission.aircraftClass]} regression there)`;
+    return {
+      ok: false,
+      field: 'mission.payload',
+      message:
+        `payload and crew of ${formatQuantity(carried, 'mass', 'si')} are ${two(carried / top)} of even ${formatQuantity(top, 'mass', 'si')}; ` +
+        `with the empty-mass fraction ${two(emptyTop)}${there} and the ${energyName} ${two(energy)} they add to ${two(carried / top + emptyTop + energy)}, ` +
+        `so no take-off mass up to ${formatQuantity(top, 'mass', 'si')} closes; carry less`,
+    };
+  }
+  const whence = given ? '' : ` (${AIRCRAFT_CLASS_TITLES[mission.aircraftClass]} regression at ${formatQuantity(at, 'mass', 'si')})`;
   return {
     ok: false,
     field: given ? 'mission.emptyMassFraction' : 'mission',
@@ -66,7 +78,8 @@ export function solveTakeoffMass(
     iterations++;
     return carriedKg / m + emptyFraction(m) + energyFraction - 1;
   };
-  const takeoffKg = fallingRoot(leftOver, carriedKg, 2 * carriedKg, HEAVIEST_TAKEOFF_MASS_KG);
+  // The first upper end is held to the top too, so no mass above it is ever returned.
+  const takeoffKg = fallingRoot(leftOver, carriedKg, Math.min(2 * carriedKg, HEAVIEST_TAKEOFF_MASS_KG), HEAVIEST_TAKEOFF_MASS_KG);
   return { takeoffKg, iterations };
 }
 

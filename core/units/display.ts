@@ -149,8 +149,10 @@ export function threeFigures(number: number): string {
 export function formatMargin(margin: number | null | undefined): string {
   if (margin === null || margin === undefined || !Number.isFinite(margin)) return '—';
   const pct = margin * 100;
-  const sign = pct > 0.05 ? '+' : pct < -0.05 ? '−' : '';
-  return `${sign}${Math.abs(pct).toFixed(1)} %`;
+  // The sign follows the rounded text: whatever reads as non-zero is signed ("+0.1 %" at 0.05 %), "0.0 %" is not.
+  const shown = Math.abs(pct).toFixed(1);
+  const sign = shown === '0.0' ? '' : pct > 0 ? '+' : '−';
+  return `${sign}${shown} %`;
 }
 
 export { G0 };
