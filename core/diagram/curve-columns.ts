@@ -56,6 +56,13 @@ export function columnPoints(wingLoadingsPa: Float64Array, column: Float64Array)
 }
 
 const columnsByEvaluation = new WeakMap<Evaluation, CurveColumns>();
+/** Curve boundaries whose points were replaced after the evaluation: their columns no longer say what they hold. */
+const replacedPoints = new WeakSet<object>();
+
+/** Notes that a curve boundary's points were replaced. */
+export function markPointsReplaced(boundary: object): void {
+  replacedPoints.add(boundary);
+}
 
 /** Remembers the columns an evaluation was made from. */
 export function keepColumns(evaluation: Evaluation, columns: CurveColumns): void {
@@ -64,9 +71,12 @@ export function keepColumns(evaluation: Evaluation, columns: CurveColumns): void
 
 /**
  * The columns an evaluation was made from, when it came from evaluateDesign
- * in this process; undefined for one read back from JSON or passed between
- * processes (use its `points` then).
+ * in this process and its points were not replaced since; undefined for one
+ * read back from JSON or passed between processes (use its `points` then).
  */
 export function columnsOf(evaluation: Evaluation): CurveColumns | undefined {
-  return columnsByEvaluation.get(evaluation);
+  const columns = columnsByEvaluation.get(evaluation);
+  if (!columns) return undefined;
+  for (const boundary of evaluation.boundaries) if (replacedPoints.has(boundary)) return undefined;
+  return columns;
 }

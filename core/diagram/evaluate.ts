@@ -28,7 +28,7 @@ import { findOptimum } from './optimum';
 import { flightMachAt } from './flight-mach';
 import { compressibilityWarnings } from './compressibility-warnings';
 import { sampleWingLoadings } from './sampling';
-import { anyDefined, columnPoints, keepColumns, sampleCurves } from './curve-columns';
+import { anyDefined, columnPoints, keepColumns, markPointsReplaced, sampleCurves } from './curve-columns';
 import { sizingAt } from './sizing';
 import { reportedSpeeds } from './speeds';
 import { missionMass } from '../mission/mass';
@@ -145,6 +145,7 @@ function curveJson(
     },
     set points(value: CurveBoundaryJson['points']) {
       points = value;
+      markPointsReplaced(this);
     },
     ...(stallLimit === undefined ? {} : { stallLimit }),
   };
