@@ -10,6 +10,7 @@ import type { UnitSystem } from '../../core/units/display';
 import { upperEnvelope } from './envelope';
 import { optimumPoint } from './points';
 import { boundarySeries } from './series';
+import { columnsOf } from '../../core/diagram/curve-columns';
 import type { AlternativeSeries, ChartData, MarkedPoint } from './series-types';
 
 export type { AlternativeSeries };
@@ -23,7 +24,7 @@ export function alternativeColour(index: number): string {
 export function alternativeSeries(name: string, index: number, evaluation: Evaluation, axis: LoadingAxis, system: UnitSystem): AlternativeSeries {
   const colour = alternativeColour(index);
   if (evaluation.axis !== axis) return { name, colour, drawn: false, source: null, optimum: null };
-  const { curves, limits } = boundarySeries(evaluation.boundaries, axis, system, new Set());
+  const { curves, limits } = boundarySeries(evaluation.boundaries, axis, system, new Set(), columnsOf(evaluation));
   let lo = Infinity;
   let hi = -Infinity;
   for (const curve of curves) {

@@ -10,6 +10,7 @@
 import { stringify } from 'csv-stringify/browser/esm/sync';
 import { displayUnit, toDisplay, type Evaluation, type UnitSystem } from '../../core';
 import type { CurveBoundaryJson, LimitBoundaryJson } from '../../core';
+import { columnsOf } from '../../core/diagram/curve-columns';
 import { SIZING_CAUTION } from './caution';
 import { kindTitle } from './palette';
 
@@ -66,14 +67,19 @@ export function evaluationCsv({ name, evaluation, system }: CsvInput): string {
 
   if (curves.length === 0) lines.push(comment('No requirement gives a curve, so no wing loadings were sampled; only the limits above apply.'));
   const header = [`wing loading [${wUnit}]`, ...curves.map((curve) => `${curve.id} [${yUnit}]`)];
-  const grid = curves[0]?.points.map(([x]) => x) ?? [];
-  const rows = grid.map((x, i) => [
-    w(x),
-    ...curves.map((curve) => {
-      const own = curve.points[i]?.[0] === x ? curve.points[i] : curve.points.find(([at]) => at === x);
-      const value = own ? own[1] : null;
-      return value === null || !Number.isFinite(value) ? '' : y(value);
-    }),
-  ]);
+  // The engine's columns when this process evaluated it (one shared grid, NaN in the gaps); else the points.
+  const known = columnsOf(evaluation);
+  const columns = known && known.curves.length === curves.length ? known : undefined;
+  const grid = columns ? Array.from(columns.wingLoadingsPa) : (curves[0]?.points.map(([x]) => x) ?? []);
+  const rows = columns
+    ? grid.map((x, i) => [w(x), ...columns.curves.map((column) => (column[i] === column[i] ? y(column[i]) : ''))])
+    : grid.map((x, i) => [
+        w(x),
+        ...curves.map((curve) => {
+          const own = curve.points[i]?.[0] === x ? curve.points[i] : curve.points.find(([at]) => at === x);
+          const value = own ? own[1] : null;
+          return value === null || !Number.isFinite(value) ? '' : y(value);
+        }),
+      ]);
   return `${lines.join('\n')}\n${stringify([header, ...rows])}`;
 }

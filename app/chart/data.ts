@@ -9,6 +9,7 @@ import { displayUnit, toDisplay, type UnitSystem } from '../../core/units/displa
 import { upperEnvelope } from './envelope';
 import { designPointOf, optimumPoint } from './points';
 import { boundarySeries, overlaySeries } from './series';
+import { columnsOf } from '../../core/diagram/curve-columns';
 import { alternativeSeries } from './alternatives';
 import type { ChartData, CurveSeries, LimitSeries } from './series-types';
 
@@ -31,7 +32,7 @@ export function chartData(evaluation: Evaluation, options: ChartDataOptions = {}
   const system = options.system ?? 'si';
   const axis = evaluation.axis;
   const active = new Set(evaluation.optimum?.active ?? []);
-  const { curves, limits, boundaries } = boundarySeries(evaluation.boundaries, axis, system, active);
+  const { curves, limits, boundaries } = boundarySeries(evaluation.boundaries, axis, system, active, columnsOf(evaluation));
   const wingLoadingRange = evaluatedRange(curves, limits, evaluation, system);
   const tightest = Math.min(...limits.map((limit) => limit.wingLoading), wingLoadingRange[1]);
   return {

@@ -10,6 +10,7 @@
  * spreads for the concept's own.
  */
 import { atClosedMass } from '../../core/mission/mass';
+import { columnsOf } from '../../core/diagram/curve-columns';
 import {
   boundaryBands,
   DEFAULT_STUDY_SAMPLES,
@@ -88,6 +89,8 @@ export function rangedParameters(design: Design, concept: unknown, uncertainty: 
 
 /** The wing loadings the bands are drawn at: the evaluation's own samples, else the grid's. */
 function bandWingLoadings(evaluation: Evaluation, grid: ProbabilityGrid): number[] {
+  const columns = columnsOf(evaluation);
+  if (columns && columns.curves.length > 0 && columns.wingLoadingsPa.length > 1) return Array.from(columns.wingLoadingsPa);
   const curve = evaluation.boundaries.find((boundary) => 'points' in boundary);
   if (curve && 'points' in curve && curve.points.length > 1) return curve.points.map(([w]) => w);
   return Array.from(sampleWingLoadings(grid.wingLoading, 201));

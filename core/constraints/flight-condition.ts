@@ -7,7 +7,7 @@ import { polarOf, type Polar } from '../aero/drag-polar';
 import { waveDragIncrement } from '../aero/compressibility';
 import type { Aircraft } from '../aircraft';
 import type { RequirementCommon } from '../requirements/common';
-import { availableFraction } from '../propulsion/available-fraction';
+import { availableFraction, lapseAt } from '../propulsion/available-fraction';
 import { isPropellerDriven } from '../propulsion/propeller';
 
 export interface FlightCondition {
@@ -34,18 +34,19 @@ export function flightCondition(requirement: RequirementCommon, aircraft: Aircra
   const air = atmosphere(requirement.altitudeM, requirement.temperatureOffsetK);
   const wing = aircraft.compressibility;
   const polar = polarOf(aircraft, requirement.configuration) ?? (polarOf(aircraft, 'clean') as Polar);
+  const { propulsion } = aircraft;
+  const { powerSetting } = requirement;
+  const alpha = availableFraction(propulsion, requirement.altitudeM, requirement.temperatureOffsetK, powerSetting);
+  // The air is the requirement's own at every speed: only the Mach number changes, and only a Mach-aware lapse reads it.
+  const machAware = (propulsion.lapseModel ?? 'density') !== 'density';
   return {
     densityKgM3: air.densityKgM3,
     beta: requirement.massFraction,
-    alpha: availableFraction(aircraft.propulsion, requirement.altitudeM, requirement.temperatureOffsetK, requirement.powerSetting),
-    alphaAt: (speedMps: number): number =>
-      availableFraction(
-        aircraft.propulsion,
-        requirement.altitudeM,
-        requirement.temperatureOffsetK,
-        requirement.powerSetting,
-        speedMps / air.speedOfSoundMps,
-      ),
+    alpha,
+    alphaAt: machAware
+      ? (speedMps: number): number =>
+          lapseAt(propulsion, air.sigma, { temperatureK: air.temperatureK, pressurePa: air.pressurePa, mach: speedMps / air.speedOfSoundMps }) * powerSetting
+      : (): number => alpha,
     polar,
     waveDragAt: (cl: number, speedMps: number): number =>
       wing ? waveDragIncrement(wing, cl, speedMps / air.speedOfSoundMps) : 0,

@@ -6,6 +6,7 @@
 import {
   EVALUATION_FORMAT,
   type BoundaryJson,
+  type CurveBoundaryJson,
   type DesignPointJson,
   type Evaluation,
   type MarginJson,
@@ -27,6 +28,7 @@ import { findOptimum } from './optimum';
 import { flightMachAt } from './flight-mach';
 import { compressibilityWarnings } from './compressibility-warnings';
 import { sampleWingLoadings } from './sampling';
+import { anyDefined, columnPoints, keepColumns, markPointsReplaced, sampleCurves } from './curve-columns';
 import { sizingAt } from './sizing';
 import { reportedSpeeds } from './speeds';
 import { missionMass } from '../mission/mass';
@@ -124,6 +126,31 @@ function closedSizing(
   return { mass, sizing: sized ? sizingAt({ ...aircraft, takeoffMassKg: mass.takeoff }, axis, sized.w, sized.y) : null };
 }
 
+/**
+ * A curve's JSON: its `points` are read from the column the first time they
+ * are asked for (JSON.stringify, a chart), not built for every evaluation.
+ */
+function curveJson(
+  head: Pick<CurveBoundaryJson, 'id' | 'kind' | 'label'>,
+  ws: Float64Array,
+  column: Float64Array,
+  stallLimit: number | undefined,
+): CurveBoundaryJson {
+  let points: CurveBoundaryJson['points'] | undefined;
+  return {
+    ...head,
+    get points(): CurveBoundaryJson['points'] {
+      points ??= columnPoints(ws, column);
+      return points;
+    },
+    set points(value: CurveBoundaryJson['points']) {
+      points = value;
+      markPointsReplaced(this);
+    },
+    ...(stallLimit === undefined ? {} : { stallLimit }),
+  };
+}
+
 /** The evaluation of a design (DESIGN.md, "The evaluation"). */
 export function evaluateDesign(design: Design): Evaluation {
   const { aircraft } = design;
@@ -139,41 +166,33 @@ export function evaluateDesign(design: Design): Evaluation {
 
   const curves: CurveBoundary[] = [];
   const limits: LimitBoundary[] = [];
+  for (const { boundary } of entries) {
+    if (boundary.type === 'limit') limits.push(boundary);
+    else curves.push(boundary);
+  }
+  const columns = sampleCurves(curves, ws);
   const curveMet = new Map<string, boolean>();
-  const envelope = new Float64Array(ws.length).fill(-Infinity);
+  let curveIndex = 0;
   const boundaries: BoundaryJson[] = entries.map(({ requirement, boundary }) => {
     const head = { id: boundary.id, kind: boundary.kind, ...(requirement.label === undefined ? {} : { label: requirement.label }) };
-    if (boundary.type === 'limit') {
-      limits.push(boundary);
-      return { ...head, wingLoadingMax: boundary.wingLoadingMaxPa };
-    }
-    curves.push(boundary);
-    const points: Array<[number, number | null]> = new Array(ws.length);
-    let met = false;
-    for (let i = 0; i < ws.length; i++) {
-      const y = boundary.required(ws[i]);
-      const finite = Number.isFinite(y);
-      met ||= finite;
-      points[i] = [ws[i], finite ? y : null];
-      if (!finite) envelope[i] = NaN;
-      else if (y > envelope[i]) envelope[i] = y; // NaN stays NaN
-    }
-    curveMet.set(boundary.id, met);
+    if (boundary.type === 'limit') return { ...head, wingLoadingMax: boundary.wingLoadingMaxPa };
+    const column = columns.curves[curveIndex++];
+    curveMet.set(boundary.id, anyDefined(column));
     const stall = boundary.stallLimitPa;
-    if (stall !== undefined && Number.isFinite(stall) && stall < range[1]) {
+    const stalls = stall !== undefined && Number.isFinite(stall) && stall < range[1];
+    if (stalls) {
       warnings.push({
         code: 'turn-stalls',
         field: `requirements[${entries.find((e) => e.boundary === boundary)?.index ?? 0}]`,
         message: `Requirement "${boundary.id}" cannot be flown above a wing loading of ${Math.round(stall)} N/m^2: the lift coefficient it needs there is above C_Lmax. Its stall line is drawn as a limit.`,
       });
-      return { ...head, points, stallLimit: stall };
     }
-    return { ...head, points };
+    return curveJson(head, ws, column, stalls ? stall : undefined);
   });
   warnings.push(...unattainableWarnings(entries, aircraft, curveMet, range[0]));
 
   const found =
-    entries.length > 0 ? findOptimum(curves.map((c) => c.required), wingLoadingCap(limits), range, { wingLoadingsPa: ws, envelope }) : null;
+    entries.length > 0 ? findOptimum(curves.map((c) => c.required), wingLoadingCap(limits), range, { wingLoadingsPa: ws, envelope: columns.envelope }) : null;
   let optimum: OptimumJson | null = null;
   if (found) {
     const { wingLoadingPa: w, loading: y } = found;
@@ -196,7 +215,7 @@ export function evaluateDesign(design: Design): Evaluation {
   const { mass, sizing } = design.mission
     ? closedSizing(design, axis, sized, sizedAt.w, warnings)
     : { mass: undefined, sizing: sized ? sizingAt(aircraft, axis, sized.w, sized.y) : null };
-  return {
+  const evaluation: Evaluation = {
     format: EVALUATION_FORMAT,
     axis,
     boundaries,
@@ -208,4 +227,6 @@ export function evaluateDesign(design: Design): Evaluation {
     ...(mass ? { mass } : {}),
     warnings,
   };
+  keepColumns(evaluation, columns);
+  return evaluation;
 }

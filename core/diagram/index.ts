@@ -7,6 +7,8 @@ export { boundariesOf, requirementBoundaries, type RequirementBoundary } from '.
 export { readAt, type ReadOut, type ReadOutEntry } from './read-out';
 export { marginsAt, marginOf, allMet, FEASIBLE_TOLERANCE } from './margins';
 export { sampleWingLoadings } from './sampling';
+export { sampleCurves, columnsOf, columnPoints, type CurveColumns } from './curve-columns';
+export { evaluationJsonText } from './evaluation-text';
 export { defaultWingLoadingRange } from './default-range';
 export { envelopeAt, wingLoadingCap, type CurveBoundary, type LimitBoundary, type RequiredLoading } from './envelope';
 export { findOptimum, SEARCH_GRID_POINTS, COARSE_GRID_POINTS, TIE_TOLERANCE, type Optimum, type EnvelopeSamples } from './optimum';

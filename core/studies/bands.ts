@@ -6,6 +6,8 @@
  * case, the corners hold its extremes.
  */
 import { boundaryOf } from '../constraints';
+import { sampleCurves } from '../diagram/curve-columns';
+import type { CurveBoundary } from '../diagram/envelope';
 import type { Design, Requirement, RequirementKind } from '../model';
 import { applyValues, cornerValues, parametersAffecting, type CornerMethod } from './corners';
 import type { UncertainParameter } from './uncertainty-schema';
@@ -68,23 +70,24 @@ function bandOf(design: Design, requirement: Requirement, all: readonly Uncertai
     const limits = boundaries.map((b) => (b.type === 'limit' ? b.wingLoadingMaxPa : NaN));
     return { ...common, type: 'limit', nominal: first.wingLoadingMaxPa, limits: [Math.min(...limits), Math.max(...limits)] };
   }
+  // Every corner's curve sampled into a column (NaN where it cannot be met), as the diagram samples its own.
+  const curves = boundaries.filter((b): b is CurveBoundary => b.type === 'curve');
+  const { curves: columns } = sampleCurves(curves, Float64Array.from(ws));
   const n = ws.length;
-  const nominal = new Array<number>(n);
+  const nominal = Array.from(columns[0]);
   const lower = new Array<number>(n).fill(NaN);
   const upper = new Array<number>(n).fill(NaN);
   const open = new Array<boolean>(n).fill(false);
-  boundaries.forEach((boundary, b) => {
-    if (boundary.type !== 'curve') return;
+  for (const column of columns) {
     for (let i = 0; i < n; i++) {
-      const y = boundary.required(ws[i]);
-      if (b === 0) nominal[i] = y;
-      if (!Number.isFinite(y)) open[i] = true;
+      const y = column[i];
+      if (y !== y) open[i] = true;
       else {
         if (!(y >= lower[i])) lower[i] = y;
         if (!(y <= upper[i])) upper[i] = y;
       }
     }
-  });
+  }
   for (let i = 0; i < n; i++) if (open[i]) upper[i] = NaN;
   return { ...common, type: 'curve', wingLoadings: ws, nominal, lower, upper };
 }

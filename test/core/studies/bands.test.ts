@@ -53,6 +53,22 @@ describe('boundaryBands', () => {
     });
   });
 
+  it('leaves NaN where a corner cannot fly the curve: open above, and NaN nominal where the nominal stalls', () => {
+    // A 50 m/s sea-level cruise needs C_L = w/q, q = 1/2 rho0 50^2 = 1531.25 Pa (lift equation): with clean
+    // C_Lmax from 1.3 to 1.7 (nominal 1.5) it stalls above 1990.6, 2296.9 and 2603.1 N/m^2 respectively.
+    const d = design({ requirements: [cruise(50, { id: 'cruise' })] });
+    const params = ranged({ parameters: [{ field: 'aircraft.aero.configurations.clean.clMax', low: 1.3, high: 1.7 }] }, d);
+    const [band] = boundaryBands(d, params, [1500, 2100, 2400, 2700]) as CurveBand[];
+    expect(band.type).toBe('curve');
+    // 1500: every corner flies it. 2100: the low corner stalls (open above). 2400: the nominal stalls too. 2700: none flies it.
+    expect(Number.isFinite(band.upper[0]) && Number.isFinite(band.nominal[0])).toBe(true);
+    expect(band.upper[1]).toBeNaN();
+    expect(Number.isFinite(band.nominal[1]) && Number.isFinite(band.lower[1])).toBe(true);
+    expect(band.nominal[2]).toBeNaN();
+    expect(Number.isFinite(band.lower[2])).toBe(true);
+    expect([band.lower[3], band.upper[3], band.nominal[3]].every(Number.isNaN)).toBe(true);
+  });
+
   it('switches to the ends one at a time plus all-low and all-high above 8 assumptions', () => {
     // The utility twin's take-off distance carries more assumptions than the jet's balanced field (which has no friction or ground-run C_L).
     const twin = demo('utility-twin');

@@ -9,12 +9,16 @@
  */
 import { boundaryBands, type BoundaryBand, type Design, type Evaluation, type UnitSystem } from '../../../../core';
 import { diagramGrid } from '../../../chart/study-grid';
+import { columnsOf } from '../../../../core/diagram/curve-columns';
 import type { Workspace } from '../state/workspace.svelte';
 import { ProbabilityStudy, type StudyWorker } from './probability.svelte';
 import { pointKey, studyKey, studyParameters, type StudyParameters } from './study-parameters';
 
 /** The wing loadings a band is drawn at: the evaluation's own samples, so bands and lines match. */
 export function bandWingLoadings(evaluation: Evaluation): number[] {
+  // The engine's column when this evaluation was made here (not one passed through reactive state or a worker).
+  const columns = columnsOf(evaluation);
+  if (columns && columns.curves.length > 0 && columns.wingLoadingsPa.length > 1) return Array.from(columns.wingLoadingsPa);
   for (const boundary of evaluation.boundaries) {
     if ('points' in boundary && boundary.points.length > 1) return boundary.points.map(([w]) => w);
   }
