@@ -34,6 +34,9 @@ export interface LandingDistanceRequirement extends RequirementCommon {
   liftDumping: boolean;
 }
 
+/** Approach and touchdown speeds over the landing stall speed when the file gives none (Raymer ch. 17, from memory). */
+const APPROACH_SPEED_FACTOR = 1.3;
+const TOUCHDOWN_SPEED_FACTOR = 1.15;
 /** Load factor of the flare (Raymer ch. 17, from memory). */
 const FLARE_LOAD_FACTOR = 1.2;
 
@@ -106,8 +109,8 @@ export const landingDistance = defineRequirement<'landing-distance', LandingDist
     distanceM: si(r.distance, 'length', NaN),
     obstacleHeightM: si(r.obstacleHeight, 'length', 50 * FOOT_M),
     fieldLengthFactor: r.fieldLengthFactor ?? 1,
-    approachSpeedFactor: r.approachSpeedFactor ?? 1.3,
-    touchdownSpeedFactor: r.touchdownSpeedFactor ?? 1.15,
+    approachSpeedFactor: r.approachSpeedFactor ?? APPROACH_SPEED_FACTOR,
+    touchdownSpeedFactor: r.touchdownSpeedFactor ?? TOUCHDOWN_SPEED_FACTOR,
     approachAngleRad: si(r.approachAngle, 'angle', (3 * Math.PI) / 180),
     brakingFriction: r.brakingFriction ?? 0.3,
     freeRollTimeS: si(r.freeRollTime, 'time', 2),
@@ -143,10 +146,17 @@ export const landingDistance = defineRequirement<'landing-distance', LandingDist
   ],
   costStep: { field: 'distanceM', conceptField: 'distance', relaxed: 'up' },
   typicalRanges: [{ field: 'brakingFriction', key: 'brakingFriction', title: 'Braking friction', label: 'Braking friction', range: BRAKING_FRICTION, bounds: { min: 0, max: 1, openMin: true, openMax: false } }],
-  issues: (r) =>
-    r.approachSpeedFactor !== undefined && r.touchdownSpeedFactor !== undefined && r.touchdownSpeedFactor > r.approachSpeedFactor
-      ? [{ field: 'touchdownSpeedFactor', message: `must not exceed approachSpeedFactor (${r.approachSpeedFactor}); got ${r.touchdownSpeedFactor}` }]
-      : [],
+  // The flare slows the aircraft: a written factor is held against the other's default too.
+  issues: (r) => {
+    const approach = r.approachSpeedFactor ?? APPROACH_SPEED_FACTOR;
+    const touchdown = r.touchdownSpeedFactor ?? TOUCHDOWN_SPEED_FACTOR;
+    if (!(touchdown > approach)) return [];
+    if (r.touchdownSpeedFactor === undefined) {
+      return [{ field: 'approachSpeedFactor', message: `must not be below touchdownSpeedFactor (${touchdown} by default); got ${approach}` }];
+    }
+    const given = r.approachSpeedFactor === undefined ? `${approach} by default` : `${approach}`;
+    return [{ field: 'touchdownSpeedFactor', message: `must not exceed approachSpeedFactor (${given}); got ${touchdown}` }];
+  },
   templates: [],
   methods: `### Landing distance (\`landing-distance\`)
 

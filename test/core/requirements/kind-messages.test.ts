@@ -86,6 +86,19 @@ describe('landing distance', () => {
     ]);
     expect(messages({ kind: 'landing-distance', distance: '600 m', approachSpeedFactor: 1.2, touchdownSpeedFactor: 1.2 })).toEqual([]);
   });
+
+  it('holds a written factor against the default of the other', () => {
+    // The defaults are 1.3 V_s approach and 1.15 V_s touchdown (Raymer ch. 17, from memory).
+    expect(messages({ kind: 'landing-distance', distance: '600 m', touchdownSpeedFactor: 1.35 })).toEqual([
+      'requirements[0].touchdownSpeedFactor: must not exceed approachSpeedFactor (1.3 by default); got 1.35 (requirement "r")',
+    ]);
+    expect(messages({ kind: 'landing-distance', distance: '600 m', approachSpeedFactor: 1.1 })).toEqual([
+      'requirements[0].approachSpeedFactor: must not be below touchdownSpeedFactor (1.15 by default); got 1.1 (requirement "r")',
+    ]);
+    expect(messages({ kind: 'landing-distance', distance: '600 m', touchdownSpeedFactor: 1.3 })).toEqual([]);
+    expect(messages({ kind: 'landing-distance', distance: '600 m', approachSpeedFactor: 1.15 })).toEqual([]);
+    expect(messages({ kind: 'landing-distance', distance: '600 m' })).toEqual([]);
+  });
 });
 
 describe('what the studies and the read-out ask of a kind', () => {
