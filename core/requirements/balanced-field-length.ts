@@ -66,8 +66,9 @@ export function balancedFieldTerms(r: BalancedFieldLengthRequirement, c: FlightC
   const u = 0.01 * polar.clMax + 0.02;
   const dG = climbGradient - minimumSecondSegmentGradient(engines);
   const excess = averageThrustToWeight - u;
+  // With a climb (gamma_2 > 0) and gamma_min at most 0.03, 1 + 2.3 dG stays above 0.93: the factor never changes sign.
   const lengthM =
-    climbGradient > 0 && excess > 0 && 1 + 2.3 * dG > 0
+    climbGradient > 0 && excess > 0
       ? (0.863 / (1 + 2.3 * dG)) * (weightLoading / (rho * G0 * cl2) + r.obstacleHeightM) * (1 / excess + 2.7) + CONSTANT_TERM_M / Math.sqrt(rho / RHO0)
       : Infinity;
   return { climbGradient, averageThrustToWeight, u, lengthM };

@@ -118,6 +118,14 @@ describe('requirement defaults, as core/methods.md states them', () => {
     });
   });
 
+  it('stall speed: the calibrated speed as written, in the landing configuration', () => {
+    const r = resolved({ kind: 'stall', speed: '61 kt' });
+    expect(r).toMatchObject({ kind: 'stall', configuration: 'landing' });
+    if (r.kind !== 'stall') throw new Error('kind');
+    // 61 kt CAS: 14 CFR 23.49(c) before Amendment 23-64.
+    assertRelative(r.speedMps, 61 * KNOT, 1e-12);
+  });
+
   it('approach speed: 1.3 times the landing stall speed unless written', () => {
     // 14 CFR 23.73 before Amendment 23-64: V_REF at least 1.3 V_S0 (from memory).
     const r = resolved({ kind: 'approach-speed', speed: '120 kt' });
