@@ -156,8 +156,8 @@ describe('landing distance segments, by hand (jet, sea level)', () => {
     const r = landingDistance(1000);
     const boundary = landingDistanceBoundary(r, jet());
     if (boundary.type !== 'limit') throw new Error('a limit');
-    assertRelative(boundary.speedAt(w), 1.3 * vs, 1e-6, 'approach speed');
-    expect(boundary.speedAt(0)).toBeNaN();
+    assertRelative(boundary.speedAt!(w), 1.3 * vs, 1e-6, 'approach speed');
+    expect(boundary.speedAt!(0)).toBeNaN();
     const s = requirementKind('landing-distance').segments!(r, jet(), w, 0);
     expect(Object.keys(s)).toEqual(['approach', 'flare', 'freeRoll', 'braking']);
     assertRelative(s.freeRoll!, 2 * vTd, 1e-6);
@@ -168,9 +168,9 @@ describe('approach speed limit, by hand', () => {
   it('flies k_app times the landing stall speed at landing mass', () => {
     // V = k sqrt(2 beta w / (rho0 C_Lmax)) with beta 0.85, k 1.23 (14 CFR 25.125(b), from memory).
     const boundary = approachSpeedBoundary(approachSpeed(65, { speedFactor: 1.23, massFraction: 0.85 }), jet());
-    assertRelative(boundary.speedAt(3000), 1.23 * Math.sqrt((2 * 0.85 * 3000) / (RHO * 2.25)), 1e-6);
-    expect(boundary.speedAt(0)).toBeNaN();
-    expect(boundary.speedAt(-1)).toBeNaN();
+    assertRelative(boundary.speedAt!(3000), 1.23 * Math.sqrt((2 * 0.85 * 3000) / (RHO * 2.25)), 1e-6);
+    expect(boundary.speedAt!(0)).toBeNaN();
+    expect(boundary.speedAt!(-1)).toBeNaN();
   });
 });
 
