@@ -169,7 +169,7 @@ A limit: the largest wing loading whose landing from the obstacle height h_obs, 
     S_B = ln[K_T / (K_T + K_A V_TD^2)] / (2 g0 K_A),   K_T = -mu_B,   K_A = rho (mu_B C_L,g - C_D,g) / (2 beta w)
     V_app = k_app V_s,L,   V_TD = k_TD V_s,L
 
-- k_app 1.3 and k_TD 1.15 by default, the flare at their mean (Raymer ch. 17: 1.3, 1.23, 1.15 V_s; from memory); gamma_a 3 degrees by default; h_obs 50 ft by default.
+- k_app 1.3 and k_TD 1.15 by default, the flare at their mean (Raymer ch. 17: 1.3, 1.23, 1.15 V_s; from memory); gamma_a 3 degrees by default; h_obs 50 ft by default. A k_TD above k_app, written or by default, is refused: the flare slows the aircraft.
 - mu_B: braking friction, 0.3 by default (Raymer Table 17.1, from memory); t_fr: free roll, 2 s by default (Raymer: 1-3 s, from memory).
 - C_L,g: lift coefficient in the braking roll, 0.5 by default; \`liftDumping\` makes it 0 (spoilers) while the configuration's drag stays. Idle thrust is taken as zero and reverse thrust is never credited.
 - Every segment grows with wing loading, so the limit is found by a bracketing root search. Where even a vanishing wing loading does not fit (the air distance alone exceeds f S), the limit is 0.
