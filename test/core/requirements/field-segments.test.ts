@@ -234,6 +234,22 @@ describe('balanced field length terms, by hand (Torenbeek as given by Raymer)', 
     assertRelative(balancedFieldAt(r, ac, w, needed).lengthM, 600, 1e-6);
   });
 
+  it('on a long field, asks the least loading that climbs after the failure, whose field length is shorter', () => {
+    // core/methods.md: the climb, not the distance, sets the curve there. Piston twin at 1500 Pa, 1200 m:
+    // the length is finite only from gamma_2 > 0, and there it is already under 1200 m.
+    const r = balancedField(1200);
+    const ac = piston();
+    const w = 1500;
+    const needed = curveOf(balancedFieldLengthBoundary(r, ac)).required(w);
+    const vs = Math.sqrt((2 * w) / (RHO * 1.9));
+    const cl2 = 1.9 / 1.44;
+    // gamma_2 = 0: half the thrust at V2 equals the drag over lift there.
+    const zeroClimb = (2 * (cdTakeoff(cl2) / cl2) * 1.2 * vs) / 0.55;
+    assertRelative(needed, zeroClimb, 1e-6, 'power for a level flight path one engine out');
+    expect(balancedFieldAt(r, ac, w, needed * 1.001).lengthM).toBeLessThan(1200);
+    expect(balancedFieldAt(r, ac, w, needed * 0.999).lengthM).toBe(Infinity);
+  });
+
   it('draws nothing for a single engine, a vanishing wing loading or no thrust', () => {
     expect(curveOf(balancedFieldLengthBoundary(balancedField(1500), jet(1))).required(4000)).toBeNaN();
     expect(curveOf(balancedFieldLengthBoundary(balancedField(1500), jet())).required(0)).toBeNaN();
