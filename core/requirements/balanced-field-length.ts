@@ -66,8 +66,9 @@ export function balancedFieldTerms(r: BalancedFieldLengthRequirement, c: FlightC
   const u = 0.01 * polar.clMax + 0.02;
   const dG = climbGradient - minimumSecondSegmentGradient(engines);
   const excess = averageThrustToWeight - u;
+  // With a climb (gamma_2 > 0) and gamma_min at most 0.03, 1 + 2.3 dG stays above 0.93: the factor never changes sign.
   const lengthM =
-    climbGradient > 0 && excess > 0 && 1 + 2.3 * dG > 0
+    climbGradient > 0 && excess > 0
       ? (0.863 / (1 + 2.3 * dG)) * (weightLoading / (rho * G0 * cl2) + r.obstacleHeightM) * (1 / excess + 2.7) + CONSTANT_TERM_M / Math.sqrt(rho / RHO0)
       : Infinity;
   return { climbGradient, averageThrustToWeight, u, lengthM };
@@ -154,7 +155,7 @@ A curve for multi-engine aircraft: the sea-level rated thrust (or power) per tak
 
 - gamma_2: the one-engine-out climb gradient at V2 = k_2 V_s,TO (k_2 1.2 by default), from the configuration's polar, the lapse at the field and the engine count N; gamma_min 0.024, 0.027 and 0.030 for two, three and four or more engines (14 CFR 25.121(b)).
 - h_obs: 35 ft by default (14 CFR 25.113). T_av/T: 0.833 by default (BPR 5 in Raymer's formula, from memory); propeller aircraft take T_av = eta_p P / (0.7 V_LOF), V_LOF = 1.1 V_s,TO, eta_p 0.55 by default, and the same efficiency at V2.
-- The climb uses the take-off configuration's polar (gear down errs on the long side). Where the aircraft cannot climb after the failure (gamma_2 <= 0) no loading gives a field length and the curve is undefined there.
+- The climb uses the take-off configuration's polar (gear down errs on the long side). Where the aircraft cannot climb after the failure (gamma_2 <= 0) no loading gives a field length and the curve is undefined there. Where the least loading that climbs after the failure already gives a shorter field length (a long field), the curve is that loading: the climb, not the distance, sets it.
 - A single-engine aircraft has no balanced field length: the concept is refused, naming the field.
 - Source: Torenbeek, *Synthesis of Subsonic Airplane Design*, as given by Raymer, *Aircraft Design: A Conceptual Approach*, ch. 17 (eq. 17.111, from memory).`,
 });

@@ -34,6 +34,9 @@ export interface LandingDistanceRequirement extends RequirementCommon {
   liftDumping: boolean;
 }
 
+/** Approach and touchdown speeds over the landing stall speed when the file gives none (Raymer ch. 17, from memory). */
+const APPROACH_SPEED_FACTOR = 1.3;
+const TOUCHDOWN_SPEED_FACTOR = 1.15;
 /** Load factor of the flare (Raymer ch. 17, from memory). */
 const FLARE_LOAD_FACTOR = 1.2;
 
@@ -106,8 +109,8 @@ export const landingDistance = defineRequirement<'landing-distance', LandingDist
     distanceM: si(r.distance, 'length', NaN),
     obstacleHeightM: si(r.obstacleHeight, 'length', 50 * FOOT_M),
     fieldLengthFactor: r.fieldLengthFactor ?? 1,
-    approachSpeedFactor: r.approachSpeedFactor ?? 1.3,
-    touchdownSpeedFactor: r.touchdownSpeedFactor ?? 1.15,
+    approachSpeedFactor: r.approachSpeedFactor ?? APPROACH_SPEED_FACTOR,
+    touchdownSpeedFactor: r.touchdownSpeedFactor ?? TOUCHDOWN_SPEED_FACTOR,
     approachAngleRad: si(r.approachAngle, 'angle', (3 * Math.PI) / 180),
     brakingFriction: r.brakingFriction ?? 0.3,
     freeRollTimeS: si(r.freeRollTime, 'time', 2),
@@ -143,10 +146,17 @@ export const landingDistance = defineRequirement<'landing-distance', LandingDist
   ],
   costStep: { field: 'distanceM', conceptField: 'distance', relaxed: 'up' },
   typicalRanges: [{ field: 'brakingFriction', key: 'brakingFriction', title: 'Braking friction', label: 'Braking friction', range: BRAKING_FRICTION, bounds: { min: 0, max: 1, openMin: true, openMax: false } }],
-  issues: (r) =>
-    r.approachSpeedFactor !== undefined && r.touchdownSpeedFactor !== undefined && r.touchdownSpeedFactor > r.approachSpeedFactor
-      ? [{ field: 'touchdownSpeedFactor', message: `must not exceed approachSpeedFactor (${r.approachSpeedFactor}); got ${r.touchdownSpeedFactor}` }]
-      : [],
+  // The flare slows the aircraft: a written factor is held against the other's default too.
+  issues: (r) => {
+    const approach = r.approachSpeedFactor ?? APPROACH_SPEED_FACTOR;
+    const touchdown = r.touchdownSpeedFactor ?? TOUCHDOWN_SPEED_FACTOR;
+    if (!(touchdown > approach)) return [];
+    if (r.touchdownSpeedFactor === undefined) {
+      return [{ field: 'approachSpeedFactor', message: `must not be below touchdownSpeedFactor (${touchdown} by default); got ${approach}` }];
+    }
+    const given = r.approachSpeedFactor === undefined ? `${approach} by default` : `${approach}`;
+    return [{ field: 'touchdownSpeedFactor', message: `must not exceed approachSpeedFactor (${given}); got ${touchdown}` }];
+  },
   templates: [],
   methods: `### Landing distance (\`landing-distance\`)
 
@@ -159,7 +169,7 @@ A limit: the largest wing loading whose landing from the obstacle height h_obs, 
     S_B = ln[K_T / (K_T + K_A V_TD^2)] / (2 g0 K_A),   K_T = -mu_B,   K_A = rho (mu_B C_L,g - C_D,g) / (2 beta w)
     V_app = k_app V_s,L,   V_TD = k_TD V_s,L
 
-- k_app 1.3 and k_TD 1.15 by default, the flare at their mean (Raymer ch. 17: 1.3, 1.23, 1.15 V_s; from memory); gamma_a 3 degrees by default; h_obs 50 ft by default.
+- k_app 1.3 and k_TD 1.15 by default, the flare at their mean (Raymer ch. 17: 1.3, 1.23, 1.15 V_s; from memory); gamma_a 3 degrees by default; h_obs 50 ft by default. A k_TD above k_app, written or by default, is refused: the flare slows the aircraft.
 - mu_B: braking friction, 0.3 by default (Raymer Table 17.1, from memory); t_fr: free roll, 2 s by default (Raymer: 1-3 s, from memory).
 - C_L,g: lift coefficient in the braking roll, 0.5 by default; \`liftDumping\` makes it 0 (spoilers) while the configuration's drag stays. Idle thrust is taken as zero and reverse thrust is never credited.
 - Every segment grows with wing loading, so the limit is found by a bracketing root search. Where even a vanishing wing loading does not fit (the air distance alone exceeds f S), the limit is 0.
