@@ -13,7 +13,8 @@ import { shortened } from '../shortened';
 
 type ZodIssue = z.core.$ZodIssue;
 
-const show = (value: unknown): string => shortened(typeof value === 'string' ? JSON.stringify(value) : String(value));
+/** A written value as it stands in the file: an object or list as JSON, never "[object Object]". */
+const show = (value: unknown): string => shortened(JSON.stringify(value) ?? String(value));
 
 function kindOf(value: unknown): string {
   if (value === null) return 'null';
