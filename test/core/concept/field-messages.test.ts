@@ -148,3 +148,54 @@ describe('an unknown field', () => {
     ]);
   });
 });
+
+describe('messages that depend on where the field stands', () => {
+  it.each<[string, (c: Editable) => void, Array<{ path: string; message: string }>]>([
+    [
+      'cd0 under aero, not in a configuration',
+      (c) => (c.aircraft.aero.cd0 = 0.03),
+      [{ path: 'aircraft.aero.cd0', message: 'unknown field; fields here: aspectRatio, cdLinear, thicknessRatio, quarterChordSweep, kornFactor, configurations' }],
+    ],
+    [
+      'a requirement field under aero',
+      (c) => (c.aircraft.aero.distance = '300 m'),
+      [{ path: 'aircraft.aero.distance', message: 'unknown field; fields here: aspectRatio, cdLinear, thicknessRatio, quarterChordSweep, kornFactor, configurations' }],
+    ],
+    ['a number in quotes where an object belongs', (c) => (c.diagram = '5'), [{ path: 'diagram', message: 'must be an object { ... } (got a string ("5"))' }]],
+    ['an unknown field in the uncertainty block', (c) => (c.uncertainty = { zzzzz: 1 }), [{ path: 'uncertainty.zzzzz', message: 'unknown field' }]],
+    ['half an engine below the least count: one issue, the first', (c) => (c.aircraft.propulsion.engines = 0.5), [{ path: 'aircraft.propulsion.engines', message: 'must be a whole number (got 0.5)' }]],
+    [
+      'a requirement whose id is a number names no requirement in its other messages',
+      (c) => Object.assign(c.requirements[0], { id: 5, label: 5 }),
+      [
+        { path: 'requirements[0].id', message: 'must be text in double quotes (got a number (5))' },
+        { path: 'requirements[0].label', message: 'must be text in double quotes (got a number (5))' },
+      ],
+    ],
+    [
+      'a requirement whose id is empty names no requirement in its other messages',
+      (c) => Object.assign(c.requirements[0], { id: '', label: 5 }),
+      [
+        { path: 'requirements[0].id', message: 'must not be empty' },
+        { path: 'requirements[0].label', message: 'must be text in double quotes (got a number (5))' },
+      ],
+    ],
+    [
+      'an object for the propulsion kind is shown as written',
+      (c) => (c.aircraft.propulsion.kind = { name: 'piston' }),
+      [{ path: 'aircraft.propulsion.kind', message: `unknown propulsion kind {"name":"piston"}; expected one of ${PROPULSION}` }],
+    ],
+    [
+      'a list for a requirement kind is shown as written',
+      (c) => (c.requirements[0].kind = ['stall']),
+      [{ path: 'requirements[0].kind', message: `unknown requirement kind ["stall"]; expected one of ${REQUIREMENTS} (requirement "stall")` }],
+    ],
+    [
+      'an object for an aircraft class is shown as written',
+      (c) => (c.aircraft.class = {}),
+      [{ path: 'aircraft.class', message: 'must be one of light-aircraft, business-jet, transport, small-uav, sailplane (got {})' }],
+    ],
+  ])('%s', (_what, change, expected) => {
+    expect(issuesAfter(change)).toEqual(expected);
+  });
+});
