@@ -48,7 +48,7 @@ describe('adding a configuration', () => {
     const before = concept();
     const result = addConfiguration(before, 'ferry');
     if (!result.ok) throw new Error(result.message);
-    expect(result.concept.aircraft.aero.configurations.ferry).toEqual({ cd0Increment: 0 });
+    expect((result.concept as Doc).aircraft.aero.configurations.ferry).toEqual({ cd0Increment: 0 });
     expect(names(result.concept)).toEqual(['clean', 'landing', 'ferry']);
     expect(before).toEqual(concept());
     // Everything else is the same document.
@@ -66,10 +66,10 @@ describe('adding a configuration', () => {
   it('writes only the values it is given', () => {
     const result = addConfiguration(concept(), 'engine out', { cd0Increment: 0.02, oswaldEfficiency: 0.75, clMax: 1.6 });
     if (!result.ok) throw new Error(result.message);
-    expect(result.concept.aircraft.aero.configurations['engine out']).toEqual({ cd0Increment: 0.02, oswaldEfficiency: 0.75, clMax: 1.6 });
+    expect((result.concept as Doc).aircraft.aero.configurations['engine out']).toEqual({ cd0Increment: 0.02, oswaldEfficiency: 0.75, clMax: 1.6 });
     const onlyE = addConfiguration(concept(), 'e-only', { oswaldEfficiency: 0.7 });
     if (!onlyE.ok) throw new Error(onlyE.message);
-    expect(onlyE.concept.aircraft.aero.configurations['e-only']).toEqual({ cd0Increment: 0, oswaldEfficiency: 0.7 });
+    expect((onlyE.concept as Doc).aircraft.aero.configurations['e-only']).toEqual({ cd0Increment: 0, oswaldEfficiency: 0.7 });
   });
 
   it('refuses a taken name, a malformed name and a document without configurations, naming the field', () => {
@@ -159,7 +159,7 @@ describe('removing a configuration', () => {
     document.aircraft.aero.configurations.last = { cd0Increment: 0.02 };
     const result = removeConfiguration(document, 'spare');
     if (!result.ok) throw new Error(result.message);
-    expect(result.concept.aircraft.aero.configurations).toEqual({
+    expect((result.concept as Doc).aircraft.aero.configurations).toEqual({
       clean: { cd0: 0.025, oswaldEfficiency: 0.8, clMax: 1.4 },
       landing: { cd0Increment: 0.05, clMax: 2 },
       last: { cd0Increment: 0.02 },

@@ -91,3 +91,31 @@ describe('rules of the mission', () => {
     expect(issuesAfter((c) => { jet(c); c.mission = fuel({ energy: { kind: 'fuel', tsfc: '0.7 1/h' } }); })).toEqual([]);
   });
 });
+
+describe('joined rules: what each rule leaves alone', () => {
+  it('an engine out is allowed on a twin (one of two engines), refused on a single', () => {
+    const climb = { id: 'oei', kind: 'climb-gradient', gradient: '2.4 %', enginesInoperative: 1, configuration: 'takeoff' };
+    expect(issuesAfter((c) => { c.aircraft.propulsion.engines = 2; c.requirements.push(climb); })).toEqual([]);
+    expect(issuesAfter((c) => c.requirements.push(climb))[0].path).toBe('requirements[2].enginesInoperative');
+  });
+
+  it('lists every cruise requirement when a segment names another', () => {
+    expect(
+      issuesAfter((c) => {
+        c.requirements.push({ id: 'cruise-high', kind: 'cruise', speed: '120 kt', altitude: '9000 ft' });
+        flying({ kind: 'cruise', range: '100 km', requirement: 'x' })(c);
+      }),
+    ).toEqual([{ path: 'mission.segments[1].requirement', message: 'no cruise requirement "x" (cruise requirements: "cruise", "cruise-high")' }]);
+  });
+
+  it('accepts an electric aircraft on a battery, a reserve given as a fraction alone, and a concept with no diagram block', () => {
+    expect(issuesAfter((c) => {
+      c.aircraft.propulsion = { kind: 'electric' };
+      for (const r of c.requirements) delete r.propellerEfficiency;
+      c.mission = fuel({ energy: battery });
+    })).toEqual([]);
+    expect(issuesAfter(flying({ kind: 'reserve', fraction: 0.05 }))).toEqual([]);
+    expect(issuesAfter((c) => delete c.diagram)).toEqual([]);
+    expect(issuesAfter((c) => delete c.diagram.wingLoading)).toEqual([]);
+  });
+});
