@@ -150,6 +150,11 @@ describe('probabilityFrontier', () => {
     expect(probabilityFrontier(map, 0.6)[0]).toBeCloseTo(10, 12);
   });
 
+  it('reads the row below in its own column', () => {
+    // Column 1, level 0.96: between 0.95 at 0 and 0.97 at 10: (0.96 - 0.95)/(0.97 - 0.95) x 10 = 5.
+    expect(probabilityFrontier(map, 0.96)[1]).toBeCloseTo(5, 9);
+  });
+
   it('is NaN where the level is never reached', () => {
     const out = probabilityFrontier(map, 0.995);
     // Column 0: 10 + (0.995 - 0.6)/(1.0 - 0.6) x 10 = 19.875; column 1 tops out at 0.99.
