@@ -150,6 +150,12 @@ describe('probabilityFrontier', () => {
     expect(probabilityFrontier(map, 0.6)[0]).toBeCloseTo(10, 12);
   });
 
+  it('takes the first row that reaches the level exactly, even when the next row is equal', () => {
+    // One column: 0.2, 0.5, 0.5, 1.0 at loadings 0, 10, 20, 30; level 0.5 is reached at row 1: 0 + (0.3/0.3) x 10 = 10.
+    const flat = { wingLoadings: [100], loadings: [0, 10, 20, 30], probability: [0.2, 0.5, 0.5, 1.0] };
+    expect(probabilityFrontier(flat, 0.5)[0]).toBeCloseTo(10, 12);
+  });
+
   it('reads the row below in its own column', () => {
     // Column 1, level 0.96: between 0.95 at 0 and 0.97 at 10: (0.96 - 0.95)/(0.97 - 0.95) x 10 = 5.
     expect(probabilityFrontier(map, 0.96)[1]).toBeCloseTo(5, 9);
