@@ -54,6 +54,12 @@ describe('malformed text: exact messages and places', () => {
     ['{"a": -}', 'not valid JSON at line 1, column 7: not a valid JSON number (no leading +, leading zeros, or bare dots)'],
     ['{"a": 12a}', 'not valid JSON at line 1, column 7: not a valid JSON number (no leading +, leading zeros, or bare dots)'],
     ['{"a": @}', 'not valid JSON at line 1, column 7: expected a value, but found "@"'],
+    // A slash after another character is not a comment.
+    ['{"a": 1 x/}', 'not valid JSON at line 1, column 9: expected "," or "}" after the value of "a", but found "x"'],
+    // A minus must be followed by a digit, not by something else and then a number.
+    ['{"a": -@1}', 'not valid JSON at line 1, column 7: not a valid JSON number (no leading +, leading zeros, or bare dots)'],
+    // \q is no escape even when four hexadecimal digits follow it.
+    ['{"a": "\\q0123"}', 'not valid JSON at line 1, column 8: a backslash in a string must start an escape such as \\" or \\\\'],
     // The tab inside the string is the 8th character.
     ['{"a": "x\ty"}', 'not valid JSON at line 1, column 9: a line break or control character inside a string; write it as \\n'],
     ['{"a": "x\u001fy"}', 'not valid JSON at line 1, column 9: a line break or control character inside a string; write it as \\n'],
@@ -80,6 +86,9 @@ describe('well-formed text that is not a concept reaches the concept checks', ()
   it.each([
     ['1'],
     ['-0.5e+3'],
+    ['1e5'],
+    ['2E10'],
+    ['1e-10'],
     ['true'],
     ['null'],
     ['"text"'],
