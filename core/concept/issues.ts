@@ -13,7 +13,8 @@ import { shortened } from '../shortened';
 
 type ZodIssue = z.core.$ZodIssue;
 
-const show = (value: unknown): string => shortened(typeof value === 'string' ? JSON.stringify(value) : String(value));
+/** A written value as it stands in the file: an object or list as JSON, never "[object Object]". */
+const show = (value: unknown): string => shortened(JSON.stringify(value) ?? String(value));
 
 function kindOf(value: unknown): string {
   if (value === null) return 'null';
@@ -70,7 +71,7 @@ function limitMessage(issue: Extract<ZodIssue, { code: 'too_small' | 'too_big' }
   if (issue.origin === 'array') {
     if (path.length === 1 && path[0] === 'requirements') return 'must list at least one requirement';
     if (path.join('/') === 'diagram/wingLoading') return 'must be two values [low, high], e.g. ["200 N/m^2", "1500 N/m^2"]';
-    return `must have ${small ? 'at least' : 'at most'} ${bound} entries`;
+    return `must have ${small ? 'at least' : 'at most'} ${bound} ${bound === 1 ? 'entry' : 'entries'}`;
   }
   if (issue.origin === 'string') return 'must not be empty';
   const words = small ? (issue.inclusive ? 'at least' : 'greater than') : issue.inclusive ? 'at most' : 'less than';

@@ -51,7 +51,7 @@ function scan(text: string): void {
         const e = text[i + 1];
         if (e === 'u' && /^[0-9a-fA-F]{4}$/.test(text.slice(i + 2, i + 6))) i += 6;
         else if (e !== undefined && '"\\/bfnrt'.includes(e)) i += 2;
-        else fail(i, 'a backslash in a string must start an escape such as \\" or \\\\ ');
+        else fail(i, 'a backslash in a string must start an escape such as \\" or \\\\');
       } else i++;
     }
     if (i >= text.length) fail(start, 'this string is never closed with "');

@@ -6,6 +6,7 @@
 import { propulsionKind } from '../propulsion/kinds';
 import { parseQuantity } from '../units/quantity';
 import type { ConceptIssue } from './format';
+import type { MissionJson } from './mission-schema';
 import type { ConceptJson } from './schema';
 
 type Flown = { speed?: string; altitude?: string; requirement?: string };
@@ -31,9 +32,8 @@ function flightIssues(s: Flown, at: string, concept: ConceptJson): ConceptIssue[
   return [];
 }
 
-function segmentIssues(concept: ConceptJson): ConceptIssue[] {
-  const segments = concept.mission?.segments ?? [];
-  return segments.flatMap((s, i): ConceptIssue[] => {
+function segmentIssues(m: MissionJson, concept: ConceptJson): ConceptIssue[] {
+  return m.segments.flatMap((s, i): ConceptIssue[] => {
     const at = `mission.segments[${i}]`;
     if (s.kind === 'cruise' || s.kind === 'loiter') return flightIssues(s, at, concept);
     if (s.kind !== 'reserve') return [];
@@ -49,9 +49,7 @@ function segmentIssues(concept: ConceptJson): ConceptIssue[] {
   });
 }
 
-function energyIssues(concept: ConceptJson): ConceptIssue[] {
-  const energy = concept.mission?.energy;
-  if (!energy) return [];
+function energyIssues(energy: MissionJson['energy'], concept: ConceptJson): ConceptIssue[] {
   const kind = concept.aircraft.propulsion.kind;
   const electric = kind === 'electric';
   if (energy.kind === 'battery' && !electric) {
@@ -69,9 +67,7 @@ function energyIssues(concept: ConceptJson): ConceptIssue[] {
   return [];
 }
 
-function loadIssues(concept: ConceptJson): ConceptIssue[] {
-  const m = concept.mission;
-  if (!m) return [];
+function loadIssues(m: MissionJson): ConceptIssue[] {
   const payload = parseQuantity(m.payload, 'mass');
   const crew = m.crew === undefined ? { ok: true as const, value: 0 } : parseQuantity(m.crew, 'mass');
   if (payload.ok && crew.ok && !(payload.value + crew.value > 0)) {
@@ -82,10 +78,11 @@ function loadIssues(concept: ConceptJson): ConceptIssue[] {
 
 /** Problems of the mission block read together with the rest; empty when there are none. */
 export function missionIssues(concept: ConceptJson): ConceptIssue[] {
-  if (concept.mission === undefined) {
+  const m = concept.mission;
+  if (m === undefined) {
     return concept.aircraft.takeoffMass === undefined
       ? [{ path: 'aircraft.takeoffMass', message: 'is required, e.g. "750 kg" (or give a mission, from which the take-off mass is closed)' }]
       : [];
   }
-  return [...loadIssues(concept), ...energyIssues(concept), ...segmentIssues(concept)];
+  return [...loadIssues(m), ...energyIssues(m.energy, concept), ...segmentIssues(m, concept)];
 }
