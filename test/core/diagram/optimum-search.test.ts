@@ -146,6 +146,24 @@ describe('findOptimum: the tie rule (largest wing loading among equal least load
     assertRelative(findOptimum([twin(400, right)], Infinity, [100, 1100])!.wingLoadingPa, right, 1e-6);
   });
 
+  it('keeps the right one of two equal valleys, refined first, when neither sits on a coarse point', () => {
+    // R 0.3 Pa right of coarse point 175 reads 1 + (0.3/50)^2 = 1.000036, L = 400 reads 1 + (1.2/50)^2 = 1.00058:
+    // R is refined first, L then ties with it from the left, and no coarse point ties for the sweep to find.
+    const right = coarsePoint(100, 1100, 175) + 0.3;
+    assertRelative(findOptimum([twin(400, right)], Infinity, [100, 1100])!.wingLoadingPa, right, 1e-6);
+  });
+
+  it('takes the last of more equal flat bottoms than it refines (eight): the sweep over the whole span', () => {
+    // 1 + 0.01 max(0, sin(2 pi w/100)) is exactly 1 on [150, 200], [250, 300], ..., [1050, 1100]: ten flat
+    // bottoms of equal depth on [100, 1130], which ends on a bump. The largest wing loading among the least
+    // loadings is 1100, where the sine turns positive (within 1.6e-6 Pa, the 1e-9 tie band over its slope).
+    const comb: RequiredLoading = (w) => 1 + 0.01 * Math.max(0, Math.sin((2 * Math.PI * w) / 100));
+    const found = findOptimum([comb], Infinity, [100, 1130])!;
+    assertRelative(found.wingLoadingPa, 1100, 1e-8);
+    expect(found.loading).toBeLessThanOrEqual(1 + 1e-9);
+    expect(found.unbounded).toBe(false);
+  });
+
   it('takes the far end of a flat jet boundary whose rounding wobbles, up to where a rising curve crosses it', () => {
     // A jet flown at its best lift-to-drag speed, q = w sqrt(K/C_D0), needs T/W = q C_D0/w + K w/q = 2 sqrt(K C_D0)
     // at every wing loading (Anderson, Introduction to Flight, from memory): flat, but computed through q it
