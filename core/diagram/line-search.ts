@@ -39,15 +39,25 @@ export function goldenMinimum(f: (w: number) => number, a: number, b: number): [
 
 /**
  * The largest w in [from, to] with f(w) <= limit, by bisection, assuming one
- * crossing; `from` must qualify. A first probe just right of `from` settles
- * the common case, a strict minimum, without bisecting.
+ * crossing; `from` must qualify. A first probe 1e-4 x from right of `from`
+ * settles the common case, a strict minimum, without bisecting; but when f is
+ * level 1e-4 x from left of `from` too (a plateau), the crossing is bisected
+ * for even when it lies between `from` and that probe.
  */
 export function lastWithin(f: (w: number) => number, from: number, to: number, limit: number): number {
   const probe = Math.min(to, from * (1 + 1e-4));
-  if (!(f(probe) <= limit)) return from;
-  let ok = probe;
-  let bad = to;
-  if (f(bad) <= limit) return bad;
+  let ok = from;
+  let bad = probe;
+  if (f(probe) <= limit) {
+    if (f(to) <= limit) return to;
+    ok = probe;
+    bad = to;
+  } else {
+    // A plateau only if f 1e-4 left of `from` equals f(from) to within the band.
+    const here = f(from);
+    const left = f(from * (1 - 1e-4));
+    if (!(left <= limit && left >= here - (limit - here))) return from;
+  }
   while (bad - ok > 1e-9 * bad) {
     const mid = 0.5 * (ok + bad);
     if (f(mid) <= limit) ok = mid;
