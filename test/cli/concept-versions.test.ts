@@ -8,18 +8,13 @@ import { mkdtempSync, rmSync, writeFileSync, readdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { bufferIO } from '../../app/cli/io';
-import { main } from '../../app/cli/main';
+import { runInProcess } from './run-in-process';
 import { DEMO_CONCEPTS } from '../../core';
 
 let dir: string;
 let project: string;
 
-async function run(...args: string[]) {
-  const io = bufferIO();
-  const code = await main(args, io);
-  return { code, stdout: io.stdout(), stderr: io.stderr() };
-}
+const run = runInProcess;
 
 beforeAll(async () => {
   dir = mkdtempSync(join(tmpdir(), 'loftpoint-concept-versions-'));
