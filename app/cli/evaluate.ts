@@ -6,7 +6,7 @@
  * so bad input never leaves partial output behind.
  */
 import type { Command } from 'commander';
-import { evaluateDesign, type Evaluation, type UnitSystem } from '../../core';
+import { evaluateDesign, evaluationJsonText, type Evaluation, type UnitSystem } from '../../core';
 import type { SetExitCode } from './io';
 import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
@@ -63,7 +63,8 @@ async function runEvaluate(file: string, options: EvaluateOptions): Promise<stri
   const unclosed = evaluation.warnings.find((warning) => warning.code === 'mission-not-closed');
   if (unclosed) throw new InputError(unclosed.message, file, unclosed.field);
   const name = input.design.name;
-  if (options.json) return `${JSON.stringify(evaluation, null, 2)}\n`;
+  // Written from the engine's columns: the same text as JSON.stringify, without a [w, y] pair per sample.
+  if (options.json) return `${evaluationJsonText(evaluation)}\n`;
   // Each output's writer loads when asked for, so `--json` starts without the chart and CSV code.
   if (options.csv) return (await import('./evaluate-csv')).evaluationCsv({ name, evaluation, system });
   if (options.svg !== undefined) {
