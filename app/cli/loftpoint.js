@@ -6,10 +6,12 @@
 // else the split build. LOFTPOINT_FROM_SOURCE=1 runs the TypeScript sources
 // through tsx instead (development, and the test that compares the two);
 // LOFTPOINT_CODE_CACHE=off runs the single file without the code cache.
-import { existsSync, readFileSync, realpathSync } from 'node:fs';
-import { dirname, join } from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
 import { CLI_OUT, freshManifest, loadBuiltCli } from './built-cli.js';
+
+// Node's own modules without an ES module import, which would load every export (built-cli.js says why).
+const { existsSync, readFileSync, realpathSync } = process.getBuiltinModule('node:fs');
+const { dirname, join } = process.getBuiltinModule('node:path');
+const { fileURLToPath, pathToFileURL } = process.getBuiltinModule('node:url');
 
 /** The project folder: the nearest folder above this file (links resolved) whose package.json is loftpoint's. */
 function projectRoot(start) {
