@@ -4,7 +4,7 @@
 // imports (the project store, the report writer and the page build tools stay
 // out of `evaluate`), with every package left in node_modules. Beside it, the
 // command line once more as a single CommonJS file, which the launcher runs
-// with V8's code cache (app/cli/built-cli.js): the cache is made here by
+// with V8's code cache (app/cli/built-cli.cjs): the cache is made here by
 // evaluating a demo, so the first command after a build starts fast too.
 // `npm install` runs this (prepare), `npm start` and the `loftpoint` launcher
 // run it again when a source is newer than the build.
@@ -137,7 +137,7 @@ export async function buildCli(root = defaultRoot) {
   // The sources the launcher compares with the build: our own files, the build scripts, and the
   // lock file for the bundled packages (npm rewrites it whenever a package changes).
   const own = Object.keys(split.metafile.inputs).filter((input) => !input.startsWith('node_modules/'));
-  const manifest = { builtAt: startedAt, entries, inputs: [...own.sort(), 'app/build-cli.js', 'app/cli/built-cli.js', 'package-lock.json'] };
+  const manifest = { builtAt: startedAt, entries, inputs: [...own.sort(), 'app/build-cli.js', 'app/cli/built-cli.cjs', 'app/cli/built-cli.js', 'package-lock.json'] };
   writeWhole(join(root, MANIFEST), `${JSON.stringify(manifest, null, 1)}\n`);
   // Files of earlier builds, once no command started in the last minute could still be loading them.
   for (const name of readdirSync(outdir)) {
