@@ -64,9 +64,15 @@ function fingerprint(text) {
   return hash.toString(36);
 }
 
-/** The code cache file of a bundle for this V8 and processor (Nodes sharing a folder keep one each). */
+/**
+ * The code cache file of a bundle for this V8 and processor (Nodes sharing a folder keep one each),
+ * and for this process's Node options: V8 refuses a cache made under other flags (a profiler, a
+ * stack size), and a command that then wrote its own over the shared one would leave a cache of
+ * that command only, which every other command compiles around until the next build.
+ */
 function codeCacheFile(bundle) {
-  return `${bundle}.${process.versions.v8}-${process.arch}-${fingerprint(HEAD + TAIL)}.cache`;
+  const options = `${process.execArgv.join(' ')}|${process.env.NODE_OPTIONS ?? ''}`;
+  return `${bundle}.${process.versions.v8}-${process.arch}-${fingerprint(HEAD + TAIL + options)}.cache`;
 }
 
 /**
