@@ -4,7 +4,7 @@
 // imports (the project store, the report writer and the page build tools stay
 // out of `evaluate`), with every package left in node_modules. Beside it, the
 // command line once more as a single CommonJS file, which the launcher runs
-// with V8's code cache (app/cli/built-cli.js): the cache is made here by
+// with V8's code cache (app/cli/built-cli.cjs): the cache is made here by
 // evaluating a demo, so the first command after a build starts fast too.
 // `npm install` runs this (prepare), `npm start` and the `loftpoint` launcher
 // run it again when a source is newer than the build.
@@ -39,6 +39,26 @@ const englishOnlyValidation = {
       contents: 'export { default as en } from "./en.js";\n',
       loader: 'js',
     }));
+  },
+};
+
+/**
+ * commander loads child_process at start (7 ms of a cold start, with net and dgram) for the
+ * subcommands it runs as separate programs, which the product has none of: the build gives it
+ * child_process when it spawns one, and never otherwise. When commander's text changes, the
+ * package is bundled as it is.
+ */
+const COMMANDER_CHILD_PROCESS = "const childProcess = require('node:child_process');";
+const commanderSpawnsLazily = {
+  name: 'loftpoint-commander-spawns-lazily',
+  setup(build) {
+    build.onLoad({ filter: /[\\/]commander[\\/]lib[\\/]command\.js$/ }, async (args) => {
+      const { readFile } = await import('node:fs/promises');
+      const text = await readFile(args.path, 'utf8');
+      if (!text.includes(COMMANDER_CHILD_PROCESS)) return undefined;
+      const lazy = "const childProcess = { spawn: (...args) => require('node:child_process').spawn(...args) };";
+      return { contents: text.replace(COMMANDER_CHILD_PROCESS, lazy), loader: 'js' };
+    });
   },
 };
 
@@ -85,7 +105,7 @@ export async function buildCli(root = defaultRoot) {
     format: 'esm',
     // CommonJS packages inside an ES module bundle ask for Node's modules through require.
     banner: { js: "import { createRequire as __loftpointRequire } from 'node:module'; const require = __loftpointRequire(import.meta.url);" },
-    plugins: [englishOnlyValidation],
+    plugins: [englishOnlyValidation, commanderSpawnsLazily],
     chunkNames: 'chunk-[hash]',
   });
   const outputOf = (result, source) => {
@@ -101,7 +121,7 @@ export async function buildCli(root = defaultRoot) {
     format: 'cjs',
     outExtension: { '.js': '.cjs' },
     define: { 'import.meta.url': '__loftpointModuleUrl' },
-    plugins: [englishOnlyValidation, workerScriptIn(outputOf(split, WORKER_SCRIPT))],
+    plugins: [englishOnlyValidation, commanderSpawnsLazily, workerScriptIn(outputOf(split, WORKER_SCRIPT))],
   });
   mkdirSync(outdir, { recursive: true });
   const written = new Set([basename(MANIFEST)]);
@@ -117,7 +137,7 @@ export async function buildCli(root = defaultRoot) {
   // The sources the launcher compares with the build: our own files, the build scripts, and the
   // lock file for the bundled packages (npm rewrites it whenever a package changes).
   const own = Object.keys(split.metafile.inputs).filter((input) => !input.startsWith('node_modules/'));
-  const manifest = { builtAt: startedAt, entries, inputs: [...own.sort(), 'app/build-cli.js', 'app/cli/built-cli.js', 'package-lock.json'] };
+  const manifest = { builtAt: startedAt, entries, inputs: [...own.sort(), 'app/build-cli.js', 'app/cli/built-cli.cjs', 'app/cli/built-cli.js', 'package-lock.json'] };
   writeWhole(join(root, MANIFEST), `${JSON.stringify(manifest, null, 1)}\n`);
   // Files of earlier builds, once no command started in the last minute could still be loading them.
   for (const name of readdirSync(outdir)) {

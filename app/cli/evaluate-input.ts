@@ -4,7 +4,8 @@
  * InputError that names the file, the field and what to change.
  */
 import { closeSync, openSync, readFileSync, readSync, statSync } from 'node:fs';
-import { parseConceptText, type ConceptIssue, type ConceptJson, type Design, type WarningJson } from '../../core';
+import { parseConceptText } from '../../core/concept/parse';
+import type { ConceptIssue, ConceptJson, Design, WarningJson } from '../../core';
 import { InputError } from './errors';
 import { oneLine } from './output-file';
 import { parseVersionRef, type VersionName } from '../service/version-ref';

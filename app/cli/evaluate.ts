@@ -6,7 +6,11 @@
  * so bad input never leaves partial output behind.
  */
 import type { Command } from 'commander';
-import { evaluateDesign, evaluationJsonText, type Evaluation, type UnitSystem } from '../../core';
+// The engine's own modules, not core's index: `evaluate` starts without the studies, demos and starters.
+import { evaluateDesign } from '../../core/diagram/evaluate';
+import { evaluationJsonText } from '../../core/diagram/evaluation-text';
+import type { Evaluation } from '../../core/evaluation';
+import type { UnitSystem } from '../../core/units/display';
 import type { SetExitCode } from './io';
 import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';

@@ -28,10 +28,15 @@ export async function main(argv: string[], io: CliIO = processIO): Promise<numbe
     })
     .showHelpAfterError(false);
   let exitCode = EXIT_OK;
-  registerCommands(program, io, (code) => {
-    exitCode = code;
-  });
   try {
+    await registerCommands(
+      program,
+      io,
+      (code) => {
+        exitCode = code;
+      },
+      argv,
+    );
     await program.parseAsync(argv, { from: 'user' });
     return exitCode;
   } catch (error) {

@@ -10,7 +10,6 @@
  *   PDF  a comment line after the last %%EOF (ISO 32000-1, 7.2.3 "Comments"; readers look for the
  *        last %%EOF near the end of the file)
  */
-import { crc32 } from 'node:zlib';
 
 export const MARK_TEXT = 'Written by Loftpoint';
 const SVG_MARK = `<!-- ${MARK_TEXT}: preliminary sizing output -->`;
@@ -44,6 +43,8 @@ export function markPng(png: Buffer): Buffer {
   const chunk = Buffer.alloc(12 + data.length);
   chunk.writeUInt32BE(data.length, 0);
   typeAndData.copy(chunk, 4);
+  // zlib loads only here: every command that writes no PNG starts without it.
+  const { crc32 } = process.getBuiltinModule('node:zlib');
   chunk.writeUInt32BE(crc32(typeAndData) >>> 0, 8 + data.length);
   return Buffer.concat([png.subarray(0, afterHeader), chunk, png.subarray(afterHeader)]);
 }

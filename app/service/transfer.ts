@@ -3,7 +3,7 @@
  * `loftpoint-version-export/1`: checked from `unknown` before an import
  * touches any file, with messages that name the field.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import type { EvaluationSummary, ExportedVersion, ProjectExport, VersionExport } from './contract';
 import { ServiceFailure } from './failure';
 

@@ -3,7 +3,7 @@
  * service: one strict schema per method, typed against the contract so a
  * change there that is not made here fails the type check.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import type { ServiceMethod, ServiceRequest } from './contract';
 
 const units = z.enum(['si', 'us', 'kt-ft']);

@@ -2,7 +2,7 @@
  * The `aircraft` block of a concept: take-off mass, drag polar by
  * configuration, and propulsion (DESIGN.md, "The concept file").
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { PROPULSION_KINDS, type PropulsionKind } from '../model';
 import { AIRCRAFT_CLASSES } from '../assumptions/study-case';
 import { LAPSE_MODELS } from '../propulsion/turbine-lapse';

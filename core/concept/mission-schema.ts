@@ -7,7 +7,7 @@
  * requirement, one way of giving a reserve, the energy that suits the
  * propulsion) are in checks.ts.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { AIRCRAFT_CLASSES } from '../mission/aircraft-class';
 import { altitude, trueAirspeed } from '../requirements/fields';
 import { quantityField } from './quantity-field';

@@ -2,7 +2,7 @@
  * Zod fields for values written with a unit ("45 kt"). The check and its
  * message come from parseQuantity, so the file and the UI say the same thing.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { EXAMPLE, SI_UNIT, parseQuantity, type Dimension, type QuantityOptions } from '../units/quantity';
 
 /** Limits in SI; `above`/`below` exclude the value, `from`/`to` include it. */

@@ -3,7 +3,7 @@
  * (DESIGN.md, "The concept file"). The kinds' own fields come from their
  * descriptors (core/requirements); the common ones are here.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { REQUIREMENT_DESCRIPTORS, requirementKind, type RequirementKind } from '../requirements';
 import { altitude, percentFraction } from '../requirements/fields';
 import { quantityField } from './quantity-field';

@@ -4,7 +4,7 @@
  * field on its own; rules that join fields live in checks.ts, defaults in
  * defaults.ts, and nothing here changes a value.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { aircraftSchema } from './aircraft-schema';
 import { missionSchema } from './mission-schema';
 import { CONCEPT_FORMAT } from './format';

@@ -3,7 +3,7 @@
  * method as given by Raymer (Aircraft Design: A Conceptual Approach, ch. 17),
  * with the one-engine-out climb gradient at V2 worked out from the concept.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { PROPELLER_TAKEOFF } from '../assumptions/typical-ranges';
 import { stallSpeed } from '../aero/speeds';
 import { dragCoefficient } from '../aero/drag-polar';

@@ -3,7 +3,7 @@
  * speed, possibly with engines inoperative (e.g. the 2.4 % second segment of
  * 14 CFR 25.121(b) for twins).
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { PROPELLER_CLIMB } from '../assumptions/typical-ranges';
 import { climbGradientBoundary, type ClimbGradientRequirement } from '../constraints/climb-gradient';
 import { quantityProblem } from '../concept/quantity-field';

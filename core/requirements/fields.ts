@@ -2,7 +2,7 @@
  * Pieces the requirement descriptors share: zod fields with units, the
  * editor's value kinds, and number text for summaries.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { quantityField, ratioField } from '../concept/quantity-field';
 import type { EditorValue } from './descriptor';
 

@@ -4,7 +4,7 @@
  * Design: A Conceptual Approach, ch. 17). A field length factor turns it into
  * a factored landing field length.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { BRAKING_FRICTION } from '../assumptions/typical-ranges';
 import { stallSpeed } from '../aero/speeds';
 import type { Aircraft } from '../aircraft';

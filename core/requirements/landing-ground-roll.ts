@@ -6,7 +6,7 @@ import { BRAKING_FRICTION } from '../assumptions/typical-ranges';
 import { landingGroundRollBoundary, type LandingGroundRollRequirement } from '../constraints/landing-ground-roll';
 import { quantityField } from '../concept/quantity-field';
 import { formatQuantity } from '../units/display';
-import { z } from 'zod';
+import * as z from 'zod';
 import { defineRequirement } from './descriptor';
 import { lengthValue, mark, numberValue, plain, speedFactor } from './fields';
 

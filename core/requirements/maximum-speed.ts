@@ -2,7 +2,7 @@
  * Maximum speed: level flight at a top speed with full power or thrust
  * (or the power setting given), written as TAS, EAS or a Mach number.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { PROPELLER_CRUISE } from '../assumptions/typical-ranges';
 import { atmosphere } from '../atmosphere';
 import type { Aircraft } from '../aircraft';

@@ -1,7 +1,7 @@
 /**
  * Sustained turn: a level coordinated turn at a true airspeed and load factor.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { PROPELLER_CRUISE } from '../assumptions/typical-ranges';
 import { sustainedTurnBoundary, type SustainedTurnRequirement } from '../constraints/sustained-turn';
 import { quantityField } from '../concept/quantity-field';

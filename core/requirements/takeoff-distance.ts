@@ -3,7 +3,7 @@
  * rotation, transition and climb to the obstacle height (Raymer, Aircraft
  * Design: A Conceptual Approach, ch. 17).
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { RUNWAY_SURFACES } from '../assumptions/study-case';
 import { CL_GROUND_RUN, PROPELLER_CLIMB, PROPELLER_TAKEOFF, ROLLING_FRICTION } from '../assumptions/typical-ranges';
 import { stallSpeed } from '../aero/speeds';

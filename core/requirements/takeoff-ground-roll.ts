@@ -2,7 +2,7 @@
  * Take-off ground roll: the thrust or power that accelerates the aircraft to
  * lift-off within the distance.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import { RUNWAY_SURFACES } from '../assumptions/study-case';
 import { CL_GROUND_RUN, PROPELLER_TAKEOFF, ROLLING_FRICTION } from '../assumptions/typical-ranges';
 import { takeoffGroundRollBoundary, type TakeoffGroundRollRequirement } from '../constraints/takeoff-ground-roll';

@@ -17,7 +17,7 @@
  * concept's own; low <= nominal <= high with low < high. A triangular
  * distribution peaks at the nominal value; uniform is the default.
  */
-import { z } from 'zod';
+import * as z from 'zod';
 import type { Design } from '../model';
 import type { Distribution } from './random';
 import { boundsOf, fieldRef, labelOf, nominalOf, type PhysicalBounds } from './uncertain-fields';

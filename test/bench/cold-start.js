@@ -18,7 +18,7 @@ import { join } from 'node:path';
 const root = new URL('../..', import.meta.url).pathname;
 const RUNS = Number(process.env.RUNS ?? 15);
 const SOURCE_EVERY = 3; // the tsx run joins every third round
-const bin = join(root, 'app/cli/loftpoint.js');
+const bin = join(root, 'app/cli/loftpoint.cjs'); // what the `loftpoint` bin runs
 const dir = mkdtempSync(join(tmpdir(), 'loftpoint-cold-'));
 const concept = join(dir, 'trainer.json');
 

@@ -14,7 +14,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_CONCEPTS } from '../../core';
 
 const ROOT = resolve(__dirname, '../..');
-const BIN = join(ROOT, 'app/cli/loftpoint.js');
+const BIN = join(ROOT, 'app/cli/loftpoint.cjs');
 const CAUTION = /certification requirements come from the applicable authority.*licensed engineering review/s;
 
 let dir: string;
@@ -81,6 +81,16 @@ describe('the built command line', () => {
     expect(bad.status).toBe(2);
     expect(bad.stderr).toContain('aircraft.aero.configurations.clean.oswaldEfficiency');
     expect(bad.stderr.trimEnd().split('\n')).toHaveLength(1);
+  }, 120_000);
+});
+
+describe('the launcher', () => {
+  it('runs the same command line when started as app/cli/loftpoint.js, the ES module that loads the bin', () => {
+    const older = join(ROOT, 'app/cli/loftpoint.js');
+    for (const args of [['evaluate', join(dir, 'trainer.json'), '--json'], ['evaluate', join(dir, 'bad.json')], ['--version']]) {
+      expect(run(args, false, older)).toEqual(run(args, false));
+    }
+    expect(run(['evaluate', join(dir, 'bad.json')], false, older).status).toBe(2);
   }, 120_000);
 });
 
@@ -156,7 +166,7 @@ describe('a copy of the project', () => {
   afterAll(() => rmSync(copy, { recursive: true, force: true }));
 
   it('builds on first use, then rebuilds when a source is edited', () => {
-    const bin = join(copy, 'app/cli/loftpoint.js');
+    const bin = join(copy, 'app/cli/loftpoint.cjs');
     const first = run(['evaluate', join(dir, 'trainer.json')], false, bin);
     expect(first.status).toBe(0);
     expect(first.stdout).toMatch(CAUTION);
@@ -188,7 +198,7 @@ describe('a copy of the project', () => {
   }, 120_000);
 
   it('runs from its code cache, prints the same without it, and writes the cache again when it is gone', () => {
-    const bin = join(copy, 'app/cli/loftpoint.js');
+    const bin = join(copy, 'app/cli/loftpoint.cjs');
     const args = ['evaluate', join(dir, 'utility-twin.json'), '--json'];
     expect(run(['demo'], false, bin).status).toBe(0); // built (with its cache) when stale
     const out = join(copy, 'out/cli');
@@ -214,7 +224,7 @@ describe('a copy of the project', () => {
   it('finds its project through a link, as npm links the bin', () => {
     const links = mkdtempSync(join(tmpdir(), 'loftpoint-bin-'));
     try {
-      symlinkSync(join(copy, 'app/cli/loftpoint.js'), join(links, 'loftpoint'));
+      symlinkSync(join(copy, 'app/cli/loftpoint.cjs'), join(links, 'loftpoint'));
       const result = run(['evaluate', join(dir, 'survey-drone.json'), '--json'], false, join(links, 'loftpoint'));
       expect(result.status).toBe(0);
       expect(result).toEqual(run(['evaluate', join(dir, 'survey-drone.json'), '--json'], true));
