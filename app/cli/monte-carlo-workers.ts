@@ -174,26 +174,40 @@ export async function probabilityMapOnCores(
 ): Promise<ProbabilityMap> {
   const threads = Math.max(1, Math.min(Math.floor(workers), Math.ceil(job.samples / LEAST_CLAIM)));
   const askedAt = now();
-  // The workers start first, to load while this thread sets up and runs its own claims.
-  const shared = new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT * threads);
-  const words = new Int32Array(shared);
-  const running = Array.from({ length: threads - 1 }, (_, k) => startWorker(job, shared, k + 1, threads));
+  // Checks the settings (and throws on bad ones) before any worker starts; setting up takes well under a millisecond.
   const whole = probabilityMapRun(design, parameters, { seed: job.seed, samples: job.samples, grid: job.grid });
   if (threads === 1) {
     whole.step(whole.total);
     return whole.result();
   }
+  // The workers start now, to load while this thread runs its own claims.
+  const shared = new SharedArrayBuffer(Int32Array.BYTES_PER_ELEMENT * threads);
+  const words = new Int32Array(shared);
+  const running = Array.from({ length: threads - 1 }, (_, k) => startWorker(job, shared, k + 1, threads));
+  const stopAll = () => {
+    for (const { worker, answer } of running) {
+      answer.catch(() => {});
+      void worker.terminate();
+    }
+  };
   const timing: ThreadTiming = { thread: 'main', askedAt, loadedAt: askedAt, readyAt: 0, doneAt: 0, samples: 0, claims: 0, cpuAtReady: NaN, cpuAtDone: NaN };
-  for (const part of runClaims(design, parameters, job, words, threads, timing)) whole.absorb(part);
+  let answers: Array<{ parts: ProbabilityPart[]; timing: ThreadTiming }>;
+  try {
+    for (const part of runClaims(design, parameters, job, words, threads, timing)) whole.absorb(part);
+    // Every sample is claimed now: a worker that has not begun claiming never will, so it is not waited for.
+    const claiming = running.filter(({ worker, answer }, k) => {
+      if (Atomics.load(words, k + 1) !== 0) return true;
+      answer.catch(() => {});
+      void worker.terminate();
+      return false;
+    });
+    answers = await Promise.all(claiming.map((r) => r.answer));
+  } catch (error) {
+    // One thread failed: the others stop too, and the failure is reported once.
+    stopAll();
+    throw error;
+  }
   timings?.push(timing);
-  // Every sample is claimed now: a worker that has not begun claiming never will, so it is not waited for.
-  const claiming = running.filter(({ worker, answer }, k) => {
-    if (Atomics.load(words, k + 1) !== 0) return true;
-    answer.catch(() => {});
-    void worker.terminate();
-    return false;
-  });
-  const answers = await Promise.all(claiming.map((r) => r.answer));
   for (const answer of answers) {
     for (const part of answer.parts) whole.absorb(part);
     timings?.push(answer.timing);
