@@ -11,6 +11,7 @@ import type { StudyInput } from '../../app/report/studies';
 
 const RUNS = Number(process.env.RUNS ?? 7);
 const { reportProbabilityMap, monteCarloWorkers } = await import('../../app/cli/monte-carlo-workers');
+type ThreadTiming = import('../../app/cli/monte-carlo-workers').ThreadTiming;
 
 const demo = DEMO_CONCEPTS.find((d) => d.slug === 'business-jet')!;
 const parsed = parseConcept(demo.concept);
@@ -28,12 +29,33 @@ const reference = (await reportProbabilityMap(input, 1)).map!; // warm-up, and t
 const times: Record<number, number[]> = { 1: [], 2: [] };
 const cpu: Record<number, number[]> = { 1: [], 2: [] };
 let identical = true;
+// Where the two-thread runs spend their time, per run: the worker's start (asked to code loaded), its
+// design and ranges worked out, its CPU before its first claim, each thread's samples and CPU per
+// 1,000 samples once claiming, and how long this thread waits for the worker after its own last claim.
+const breakdown: Record<string, number[]> = {};
+const note = (key: string, value: number) => Number.isFinite(value) && (breakdown[key] ??= []).push(value);
 for (let r = 0; r < RUNS; r++) {
   for (const workers of r % 2 === 0 ? [1, 2] : [2, 1]) {
     const start = performance.now();
     const used = process.cpuUsage(); // every thread of the process
-    const { map } = await reportProbabilityMap(input, workers);
+    const timings: ThreadTiming[] = [];
+    const { map } = await reportProbabilityMap(input, workers, timings);
+    const end = performance.timeOrigin + performance.now();
     times[workers].push(performance.now() - start);
+    const main = timings.find((t) => t.thread === 'main');
+    for (const t of timings.filter((t) => t.thread !== 'main')) {
+      note('worker: asked to loaded, wall ms', t.loadedAt - t.askedAt);
+      note('worker: design and ranges, wall ms', t.readyAt - t.loadedAt);
+      note('worker: CPU before its first claim, ms', t.cpuAtReady);
+      note('worker: samples run', t.samples);
+      note('worker: claims', t.claims);
+      note('worker: CPU per 1,000 samples, ms', (1000 * (t.cpuAtDone - t.cpuAtReady)) / t.samples);
+      if (main) note('main: waiting for the worker after its last claim, wall ms', end - main.doneAt);
+    }
+    if (main) {
+      note('main: samples run', main.samples);
+      note('main: CPU per 1,000 samples, ms', (1000 * (main.cpuAtDone - main.cpuAtReady)) / main.samples);
+    }
     const spent = process.cpuUsage(used);
     cpu[workers].push((spent.user + spent.system) / 1000);
     identical &&= Buffer.from(map!.probability.buffer).equals(Buffer.from(reference.probability.buffer)) && JSON.stringify(map!.designPoint) === JSON.stringify(reference.designPoint);
@@ -45,5 +67,7 @@ console.log(`Monte Carlo, 10,000 samples, business-jet demo, typical ranges; wal
 console.log(`  cores ${availableParallelism()}; load average ${loadavg().map((x) => x.toFixed(2)).join(' ')}; threads chosen for this load: ${monteCarloWorkers()}`);
 console.log(`  1 thread    wall ${fmt(one)}   CPU ${fmt(stats(cpu[1]))}`);
 console.log(`  2 threads   wall ${fmt(two)}   CPU ${fmt(stats(cpu[2]))}   speed-up ${(one.median / two.median).toFixed(2)}x`);
+console.log('  two threads, median (10th-90th percentile):');
+for (const [key, values] of Object.entries(breakdown)) console.log(`    ${key.padEnd(62)} ${fmt(stats(values)).replace(' ms', '')}`);
 console.log(`  maps bit-identical for the seed on 1 and 2 threads: ${identical ? 'yes' : 'NO'}`);
 console.log(`Target: at least 1.6x with two free cores (${(one.median / two.median) >= 1.6 ? 'met' : 'not met'} at this load) and identical maps (${identical ? 'met' : 'NOT met'})`);
