@@ -63,3 +63,27 @@ describe('a concept that cannot be read at all', () => {
     expect(parseConcept(bare)).toEqual({ ok: false, issues: [{ path: '', message: 'the concept could not be read: no access' }] });
   });
 });
+
+describe('values the number check leaves to the field check', () => {
+  it('a number not finite, as a program may hand over (JSON has none), is named by the field check', () => {
+    const concept = exampleConcept();
+    concept.aircraft.aero.aspectRatio = Infinity;
+    concept.aircraft.aero.configurations.clean.cd0 = NaN;
+    expect(parseConcept(concept)).toEqual({
+      ok: false,
+      issues: [
+        { path: 'aircraft.aero.aspectRatio', message: 'must be a plain number (got a number (Infinity))' },
+        { path: 'aircraft.aero.configurations.clean.cd0', message: 'must be a plain number (got a number (NaN))' },
+      ],
+    });
+  });
+
+  it('a huge number written in quotes is text, named as such', () => {
+    const concept = exampleConcept();
+    concept.aircraft.aero.aspectRatio = '1e70';
+    expect(parseConcept(concept)).toEqual({
+      ok: false,
+      issues: [{ path: 'aircraft.aero.aspectRatio', message: 'must be a plain number, not text; write 1e70 without quotes' }],
+    });
+  });
+});
