@@ -6,7 +6,7 @@
  * in closed form.
  */
 import { describe, expect, it } from 'vitest';
-import { findOptimum, type RequiredLoading } from '../../../core/diagram';
+import { envelopeAt, findOptimum, sampleWingLoadings, type RequiredLoading } from '../../../core/diagram';
 import { assertRelative } from '../helpers/asserts';
 
 const LO = 100;
@@ -57,5 +57,19 @@ describe('findOptimum: a narrow dip next to a coarse minimum', () => {
     assertRelative(found.wingLoadingPa, 800.5, 1e-7);
     assertRelative(found.loading, 0.9, 3.6e-5);
     expect(found.unbounded).toBe(false);
+  });
+});
+
+describe('findOptimum: the fine grid ends on the end of its span', () => {
+  it('stops exactly on the cap when the refined span runs from the first plotted sample to the cap', () => {
+    // 81.739 + (358.388 - 81.739) is 358.38800000000003 in double precision (IEEE 754 rounding; found by
+    // trying values): a fine grid whose last point is computed rather than set would end 5.7e-14 past the cap.
+    expect(81.739 + (358.388 - 81.739)).toBeGreaterThan(358.388);
+    // Plotted at 81.739, 2040.87 and 4000 Pa; 1000/w falls all the way, so the optimum is the cap.
+    const curves: RequiredLoading[] = [(w) => 1000 / w];
+    const ws = sampleWingLoadings([81.739, 4000], 3);
+    const samples = { wingLoadingsPa: ws, envelope: Float64Array.from(ws, (w) => envelopeAt(curves, w)) };
+    const found = findOptimum(curves, 358.388, [81.739, 4000], samples)!;
+    expect(found.wingLoadingPa).toBe(358.388);
   });
 });
