@@ -15,12 +15,12 @@ const RHO = 1.225;
 const A0 = 340.294;
 const liftoffMach = (w: number): number => (1.1 * Math.sqrt((2 * w) / (RHO * 1.8))) / A0;
 
-function evaluated(designPointPa?: number) {
+function evaluated(designPointPa?: number, rangePa: [number, number] = [1000, 50000]) {
   return evaluateDesign(
     design({
       aircraft: aircraft({ kind: 'turbofan', engines: 2, takeoffMassKg: 20000 }),
       requirements: [takeoffDistance(100)],
-      rangePa: [1000, 50000],
+      rangePa,
       ...(designPointPa === undefined ? {} : { designPoint: { wingLoadingPa: designPointPa, loading: 0.3 } }),
     }),
   );
@@ -49,5 +49,15 @@ describe('compressibility judged without an optimum', () => {
     const e = evaluated();
     expect(e.optimum).toBeNull();
     expect(machCodes(e)).toEqual([]);
+  });
+
+  it('mid-range without a design point: Mach 0.69 at 50 kPa in a range of 40 to 60 kPa, with a warning', () => {
+    // V_LOF at 50000 Pa = 1.1 sqrt(100000 / 2.205) = 234.3 m/s, Mach 0.688.
+    expect(liftoffMach(50000)).toBeCloseTo(0.688, 3);
+    const e = evaluated(undefined, [40000, 60000]);
+    expect(e.optimum).toBeNull();
+    expect(machCodes(e).map((w) => w.message)).toEqual([
+      'Requirement "takeoff-distance" flies at Mach 0.69: compressibility (wave drag) is not modelled; give aircraft.aero thicknessRatio, quarterChordSweep and kornFactor to include it.',
+    ]);
   });
 });
