@@ -42,7 +42,8 @@ export function lazyWorker(load: () => Promise<StartWorker>): StudyWorker {
     (error: unknown) => {
       if (terminated) return;
       const reason = error instanceof Error ? error.message : String(error);
-      worker.onerror?.(new ErrorEvent('error', { message: `the study's worker could not be loaded (${reason})` }));
+      // Only the message is read (as from a worker that failed to start).
+      worker.onerror?.({ message: `the study's worker could not be loaded (${reason})` } as ErrorEvent);
     },
   );
   return worker;
