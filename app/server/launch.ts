@@ -59,9 +59,11 @@ function projectProblem(error: ServiceError): LaunchError {
 }
 
 /** At the latest this long after the address is printed, the project is opened whether or not a browser came... */
-export const OPEN_PROJECT_AFTER_MS = 1000;
-/** ...or this long after the page was sent, when its script has not been asked for by then. */
+export const OPEN_PROJECT_AFTER_MS = 2000;
+/** ...or this long after the page was sent, when none of its files has been asked for by then... */
 export const OPEN_PROJECT_AFTER_PAGE_MS = 1500;
+/** ...or once the browser has asked for no further file of the page for this long (it has them all and reads them). */
+export const OPEN_PROJECT_QUIET_MS = 40;
 
 /**
  * Starts browser mode. The server listens first and `onListening` receives its
@@ -82,7 +84,7 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
     (method, request) => invokeService(service, method, request),
     pagePolicy('start `loftpoint serve --project FILE` to work on another project'),
   );
-  // A new project is made once the browser has the page's script to read, or asks the API, or no browser came
+  // A new project is made once the browser has the page's files to read, or asks the API, or no browser came
   // within a moment: making it evaluates the demo concepts, and serving the page should not wait behind that.
   let begun = false;
   let moment: ReturnType<typeof setTimeout> | undefined;
@@ -95,9 +97,9 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
   };
   const onPageActivity = (step: PageStep) => {
     if (begun) return;
-    if (step !== 'page') return begin();
+    if (step === 'api') return begin();
     clearTimeout(moment);
-    moment = setTimeout(begin, OPEN_PROJECT_AFTER_PAGE_MS);
+    moment = setTimeout(begin, step === 'page' ? OPEN_PROJECT_AFTER_PAGE_MS : OPEN_PROJECT_QUIET_MS);
   };
   let server: BrowserServer;
   try {

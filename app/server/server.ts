@@ -37,14 +37,13 @@ export interface BrowserServerOptions {
    */
   ready?: Promise<ServiceError | null>;
   /**
-   * Told when the page itself has been sent ('page'), then its script ('script':
-   * the browser is busy reading it, so work done now does not hold up serving
-   * the page), and when an API call arrives ('api').
+   * Told when the page itself has been sent ('page'), each of its other files
+   * (scripts, styles: 'asset'), and when an API call arrives ('api').
    */
   onPageActivity?: (step: PageStep) => void;
 }
 
-export type PageStep = 'page' | 'script' | 'api';
+export type PageStep = 'page' | 'asset' | 'api';
 
 export interface BrowserServer {
   port: number;
@@ -188,8 +187,7 @@ async function handlePage(req: IncomingMessage, res: ServerResponse, path: strin
     'Content-Type': file.contentType,
     'Cache-Control': file.immutable ? 'public, max-age=31536000, immutable' : 'no-store',
   });
-  if (file.contentType.startsWith('text/html')) options.onPageActivity?.('page');
-  if (file.contentType.startsWith('text/javascript')) options.onPageActivity?.('script');
+  options.onPageActivity?.(file.contentType.startsWith('text/html') ? 'page' : 'asset');
 }
 
 function listen(server: Server, port: number): Promise<number> {
