@@ -9,6 +9,7 @@ import type { ChartScales, PlotArea } from './scales';
 import { clipToBand, type XY } from './clip';
 import { boxesOverlap, boxInside, segmentHitsBox, type Box } from './boxes';
 import { curveCandidates, limitCandidates, markerBox, noteCandidates, offPlot, type Candidate } from './label-candidates';
+import { segmentGrid } from './segment-grid';
 import { shorten } from './text';
 
 export { boxesOverlap, boxInside, segmentHitsBox, textWidth, type Box } from './boxes';
@@ -47,12 +48,13 @@ export function placeLabels(data: ChartData, scales: ChartScales, options: Label
       }),
     ),
   );
+  // Only the segments near a box are looked at (the same ones a scan of all of them would find).
+  const grid = segmentGrid(segments);
   const crossings = (box: Box, ownId: string | null): number => {
     let count = 0;
-    for (const s of segments) {
-      if (s.x1 < box.x0 || s.x0 > box.x1 || s.y1 < box.y0 || s.y0 > box.y1) continue;
+    grid.near(box, (s) => {
       if (segmentHitsBox(s.a, s.b, box)) count += s.id === ownId ? 2 : 3;
-    }
+    });
     for (const [id, px] of limitXs) if (id !== ownId && px > box.x0 && px < box.x1) count += 6;
     return count;
   };

@@ -35,12 +35,12 @@ export async function runServe(options: ServeOptions, io: CliIO, until: Promise<
   const { LaunchError, launchBrowserMode } = await import('../server/launch');
   let mode: BrowserMode;
   try {
-    mode = await launchBrowserMode({ port, project: options.project, rendererDir: options.rendererDir });
+    // The address comes first, as soon as the server listens: the browser loads the page while the project opens.
+    mode = await launchBrowserMode({ port, project: options.project, rendererDir: options.rendererDir }, (url) => io.out(`${url}\n`));
   } catch (error) {
     if (error instanceof LaunchError) throw new InputError(error.message, undefined, error.field);
     throw error;
   }
-  io.out(`${mode.server.url}\n`);
   io.out(`Project: ${mode.project.file}${mode.created ? ' (new, with the demo concepts)' : ''}${mode.project.readonly ? ' (read-only)' : ''}\n`);
   io.out('Open the address above in a browser on this computer; it includes a one-time access token. Press Ctrl+C to stop.\n');
   io.out(`${PRELIMINARY_CAUTION}\n`);

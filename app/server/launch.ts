@@ -10,9 +10,9 @@ import type { ProjectInfo, ServiceError } from '../shared/contract';
 import { createDispatch } from '../shared/dispatch';
 import { fileDraftStore } from './drafts';
 import { pagePolicy } from '../shared/page-policy';
-import { openOrCreateProject, userDataFolder } from '../service/first-start';
+import { openOrCreateProject, projectTarget, userDataFolder } from '../service/first-start';
 import { chromiumPrinter } from './print';
-import { startBrowserServer, type BrowserServer } from './server';
+import { startBrowserServer, type BrowserServer, type PageStep } from './server';
 import { rendererFolders } from './static-files';
 import { createLaunchToken } from './token';
 
@@ -58,28 +58,76 @@ function projectProblem(error: ServiceError): LaunchError {
   return new LaunchError(error.message, '--project');
 }
 
-export async function launchBrowserMode(options: LaunchOptions): Promise<BrowserMode> {
+/** At the latest this long after the address is printed, the project is opened whether or not a browser came... */
+export const OPEN_PROJECT_AFTER_MS = 2000;
+/** ...or this long after the page was sent, when none of its files has been asked for by then... */
+export const OPEN_PROJECT_AFTER_PAGE_MS = 1500;
+/** ...or once the browser has asked for no further file of the page for this long (it has them all and reads them). */
+export const OPEN_PROJECT_QUIET_MS = 40;
+
+/**
+ * Starts browser mode. The server listens first and `onListening` receives its
+ * address before the project is opened or created, so the browser can load the
+ * page meanwhile; every API call waits until the project is open (none ever
+ * sees it half made). Resolves once the project is open; a project that cannot
+ * be opened closes the server and rejects with a LaunchError naming --project.
+ */
+export async function launchBrowserMode(options: LaunchOptions, onListening: (url: string) => void = () => {}): Promise<BrowserMode> {
   const service: ProjectService = createService();
-  const opened = await openOrCreateProject(service, options.project, userDataFolder());
-  if (!opened.ok) throw projectProblem(opened.error);
+  const rendererDir = findPage(options.rendererDir);
+  const dataFolder = userDataFolder();
+  let settle!: (problem: ServiceError | null) => void;
+  const ready = new Promise<ServiceError | null>((resolveReady) => (settle = resolveReady));
+  // Drafts are kept per project file in the data folder, so a restart on another port still offers them.
+  const drafts = fileDraftStore(dataFolder, projectTarget(options.project, dataFolder));
+  const dispatch = createDispatch(
+    (method, request) => invokeService(service, method, request),
+    pagePolicy('start `loftpoint serve --project FILE` to work on another project'),
+  );
+  // A new project is made once the browser has the page's files to read, or asks the API, or no browser came
+  // within a moment: making it evaluates the demo concepts, and serving the page should not wait behind that.
+  let begun = false;
+  let moment: ReturnType<typeof setTimeout> | undefined;
+  let resolveBegin!: () => void;
+  const pageLoading = new Promise<void>((resolvePage) => (resolveBegin = resolvePage));
+  const begin = () => {
+    begun = true;
+    clearTimeout(moment);
+    resolveBegin();
+  };
+  const onPageActivity = (step: PageStep) => {
+    if (begun) return;
+    if (step === 'api') return begin();
+    clearTimeout(moment);
+    moment = setTimeout(begin, step === 'page' ? OPEN_PROJECT_AFTER_PAGE_MS : OPEN_PROJECT_QUIET_MS);
+  };
   let server: BrowserServer;
   try {
-    const rendererDir = findPage(options.rendererDir);
-    const dispatch = createDispatch(
-      (method, request) => invokeService(service, method, request),
-      pagePolicy('start `loftpoint serve --project FILE` to work on another project'),
-    );
-    // Drafts are kept per project file in the data folder, so a restart on another port still offers them.
-    const drafts = fileDraftStore(userDataFolder(), opened.value.info.file);
-    server = await startBrowserServer({ port: options.port, token: createLaunchToken(), rendererDir, dispatch, printPdf: chromiumPrinter(), drafts });
+    server = await startBrowserServer({ port: options.port, token: createLaunchToken(), rendererDir, dispatch, printPdf: chromiumPrinter(), drafts, ready, onPageActivity });
   } catch (error) {
-    await invokeService(service, 'closeProject', {});
-    if (error instanceof LaunchError) throw error;
+    settle({ code: 'io', message: 'browser mode did not start' });
     const code = (error as NodeJS.ErrnoException).code;
     if (code === 'EADDRINUSE') throw new LaunchError(`port ${options.port} is in use; choose another with --port, or 0 for any free port`, '--port');
     if (code === 'EACCES') throw new LaunchError(`port ${options.port} may not be used by this user; choose one above 1023`, '--port');
     throw error;
   }
+  onListening(server.url);
+  if (!begun) moment ??= setTimeout(begin, OPEN_PROJECT_AFTER_MS);
+  let opened: Awaited<ReturnType<typeof openOrCreateProject>>;
+  try {
+    // An existing project opens at once (a file that is not one is reported without delay); a new one waits for its moment.
+    opened = await openOrCreateProject(service, options.project, dataFolder, { beforeCreating: () => pageLoading });
+  } catch (error) {
+    opened = { ok: false, error: { code: 'internal', message: error instanceof Error ? error.message.split('\n')[0] : String(error) } };
+  }
+  begin();
+  if (!opened.ok) {
+    settle(opened.error);
+    await server.close();
+    await invokeService(service, 'closeProject', {});
+    throw projectProblem(opened.error);
+  }
+  settle(null);
   return {
     server,
     project: opened.value.info,

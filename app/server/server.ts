@@ -9,6 +9,7 @@ import { createServer, type IncomingMessage, type Server, type ServerResponse } 
 import type { AddressInfo } from 'node:net';
 import { CONTENT_SECURITY_POLICY, HEADER_ONLY_POLICY } from '../shared/csp';
 import { checkPrintRequest, MAX_REPORT_HTML_BYTES, PRINT_PDF_PATH } from '../shared/print-request';
+import type { ServiceError } from '../shared/contract';
 import type { Dispatch } from '../shared/transport';
 import { isAllowedHost, refuseApiRequest, type ApiRequestHeaders } from './guard';
 import type { PrintPdf } from './print';
@@ -29,7 +30,20 @@ export interface BrowserServerOptions {
   printPdf?: PrintPdf;
   /** Unsaved drafts of the open project, kept across restarts (POST /api/keptDrafts, /api/keepDrafts). */
   drafts?: DraftStore;
+  /**
+   * Settles once the project is open (null) or cannot be (its error): API calls
+   * that arrive before wait for it, and are answered with the error after a
+   * failure. The page itself is served meanwhile. Default: open already.
+   */
+  ready?: Promise<ServiceError | null>;
+  /**
+   * Told when the page itself has been sent ('page'), each of its other files
+   * (scripts, styles: 'asset'), and when an API call arrives ('api').
+   */
+  onPageActivity?: (step: PageStep) => void;
 }
+
+export type PageStep = 'page' | 'asset' | 'api';
 
 export interface BrowserServer {
   port: number;
@@ -126,6 +140,9 @@ async function guardedJson(req: IncomingMessage, res: ServerResponse, options: B
 async function handleApi(req: IncomingMessage, res: ServerResponse, method: string, options: BrowserServerOptions, port: number): Promise<void> {
   const body = await guardedJson(req, res, options, port, MAX_BODY_BYTES);
   if (!body) return;
+  options.onPageActivity?.('api');
+  const problem = options.ready ? await options.ready : null;
+  if (problem) return sendJson(res, 200, { ok: false, error: problem });
   if (options.drafts && (method === 'keptDrafts' || method === 'keepDrafts')) return sendJson(res, 200, draftCall(options.drafts, method, body.payload));
   sendJson(res, 200, await options.dispatch(method, body.payload));
 }
@@ -159,7 +176,8 @@ async function handlePrint(req: IncomingMessage, res: ServerResponse, options: B
   send(res, 200, Buffer.from(printed.value.buffer, printed.value.byteOffset, printed.value.byteLength), { 'Content-Type': 'application/pdf', 'Cache-Control': 'no-store' });
 }
 
-async function handlePage(req: IncomingMessage, res: ServerResponse, path: string, rendererDir: string): Promise<void> {
+async function handlePage(req: IncomingMessage, res: ServerResponse, path: string, options: BrowserServerOptions): Promise<void> {
+  const rendererDir = options.rendererDir;
   if (req.method !== 'GET' && req.method !== 'HEAD') {
     return send(res, 405, 'Method not allowed', { 'Content-Type': 'text/plain; charset=utf-8', Allow: 'GET, HEAD' });
   }
@@ -169,6 +187,7 @@ async function handlePage(req: IncomingMessage, res: ServerResponse, path: strin
     'Content-Type': file.contentType,
     'Cache-Control': file.immutable ? 'public, max-age=31536000, immutable' : 'no-store',
   });
+  options.onPageActivity?.(file.contentType.startsWith('text/html') ? 'page' : 'asset');
 }
 
 function listen(server: Server, port: number): Promise<number> {
@@ -197,7 +216,7 @@ export async function startBrowserServer(options: BrowserServerOptions): Promise
       ? api
         ? handleApi(req, res, api[1], options, port)
         : Promise.resolve(refuse(res, 404, 'unknown-method', `no API method at ${url.pathname}`))
-      : handlePage(req, res, url.pathname, options.rendererDir);
+      : handlePage(req, res, url.pathname, options);
     work.catch((error: unknown) => {
       if (res.headersSent) return void res.destroy();
       refuse(res, 500, 'internal', error instanceof Error ? error.message.split('\n')[0] : 'internal error');

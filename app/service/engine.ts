@@ -71,3 +71,16 @@ export interface DemoConcept {
 export function demoConcepts(): DemoConcept[] {
   return DEMO_CONCEPTS.map((demo: DemoConcept) => ({ title: demo.title, summary: demo.summary, concept: demo.concept }));
 }
+
+/** Each demo concept's check and evaluation, by its concept object: the demos are constants and the engine is pure. */
+const checkedDemos = new WeakMap<object, CheckedConcept>();
+
+/** A demo concept checked and evaluated, once per process (a demo the engine refuses throws every time). */
+export function checkedDemo(demo: DemoConcept): CheckedConcept {
+  const key = demo.concept && typeof demo.concept === 'object' ? demo.concept : null;
+  const known = key ? checkedDemos.get(key) : undefined;
+  if (known) return known;
+  const checked = checkAndEvaluate(demo.concept, `demo concept "${demo.title}"`);
+  if (key) checkedDemos.set(key, checked);
+  return checked;
+}

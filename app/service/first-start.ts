@@ -9,6 +9,7 @@ import { basename, extname, join, resolve } from 'node:path';
 import type { ProjectInfo, ServiceResult } from '../shared/contract';
 import type { ServiceHandlers } from './service';
 import { invokeService } from './invoke';
+import { checkedDemo, demoConcepts } from './engine';
 
 export const PROJECT_EXTENSION = '.loftpoint';
 const FIRST_PROJECT_NAME = 'Demo project';
@@ -31,22 +32,50 @@ export interface OpenedProject {
   created: boolean;
 }
 
+/** The project file a front end opens: `file` resolved, or the first-start project in the data folder. */
+export function projectTarget(file: string | undefined, dataFolder: string): string {
+  return file ? resolve(file) : firstProjectFile(dataFolder);
+}
+
 /**
- * Opens `file`, or creates it with the demo concepts when it does not exist.
- * With no file, the first-start project in the data folder.
+ * Evaluates the demo concepts one at a time, letting other work run between
+ * them (a server answering the page while a new project is made), so that
+ * creating the project then finds them evaluated. A demo that fails here is
+ * reported by the creation itself.
+ */
+async function evaluateDemosAhead(): Promise<void> {
+  for (const demo of demoConcepts()) {
+    await new Promise((resolveTurn) => setImmediate(resolveTurn));
+    try {
+      checkedDemo(demo);
+    } catch {
+      return;
+    }
+  }
+  await new Promise((resolveTurn) => setImmediate(resolveTurn));
+}
+
+/**
+ * Opens `file`, or creates it with the demo concepts when it does not exist
+ * (after `beforeCreating`, when given). With no file, the first-start project
+ * in the data folder.
  */
 export async function openOrCreateProject(
   service: ServiceHandlers,
   file: string | undefined,
   dataFolder: string,
+  options: { beforeCreating?: () => Promise<unknown> } = {},
 ): Promise<ServiceResult<OpenedProject>> {
-  const target = file ? resolve(file) : firstProjectFile(dataFolder);
+  const target = projectTarget(file, dataFolder);
   if (existsSync(target)) {
     const opened = await invokeService(service, 'openProject', { file: target });
     return opened.ok ? { ok: true, value: { info: opened.value, created: false } } : opened;
   }
   if (!file) mkdirSync(dataFolder, { recursive: true });
   const name = file ? basename(target, extname(target)) || FIRST_PROJECT_NAME : FIRST_PROJECT_NAME;
+  // A new project waits for its moment (browser mode: once the page is on its way), then evaluates the demos.
+  await options.beforeCreating?.();
+  await evaluateDemosAhead();
   const created = await invokeService(service, 'createProject', { file: target, name, demo: true });
   return created.ok ? { ok: true, value: { info: created.value, created: true } } : created;
 }

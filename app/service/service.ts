@@ -38,7 +38,7 @@ import type {
   VersionSummary,
 } from './contract';
 import { compareVersions } from './compare';
-import { checkAndEvaluate, checkAndEvaluateText, demoConcepts, type CheckedConcept } from './engine';
+import { checkAndEvaluateText, checkedDemo, demoConcepts, type CheckedConcept } from './engine';
 import { AIRCRAFT_KINDS, conceptStarter } from '../../core';
 import { checkVersionNumber, cleanName, cleanTag, conceptInput, defaultAuthor } from './request-checks';
 import { ServiceFailure, badRequest } from './failure';
@@ -167,7 +167,7 @@ export class ProjectService implements ServiceHandlers {
       ? demoConcepts().map((demo) => ({
           ...demo,
           text: `${JSON.stringify(demo.concept, null, 2)}\n`,
-          checked: checkAndEvaluate(demo.concept, `demo concept "${demo.title}"`),
+          checked: checkedDemo(demo),
         }))
       : [];
     const file = createProjectFile(request.file, (db) => {

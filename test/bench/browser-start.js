@@ -25,8 +25,45 @@ server.listen(0, '127.0.0.1', () => console.log('http://127.0.0.1:' + server.add
 process.on('SIGTERM', () => server.close(() => process.exit(0)));
 `;
 
-/** Starts a server, waits for its address line, opens it, waits for a curve; answers ms from launch. */
-async function launchToDiagram(browser, args, env) {
+// Put in the page before its own script: when the window is first mounted and when the first curve appears.
+const PAGE_MARKS = `
+window.__startMarks = { mounted: null, curve: null };
+new MutationObserver((changes, observer) => {
+  const marks = window.__startMarks;
+  if (marks.mounted === null && document.getElementById('app')?.firstElementChild) marks.mounted = performance.now();
+  if (document.querySelector('[data-testid^="curve-"]')) {
+    marks.curve = performance.now();
+    observer.disconnect();
+  }
+}).observe(document, { childList: true, subtree: true });
+`;
+
+/** Where the time went in one launch, in ms from launch: read from the page's own clock and resource timings. */
+async function pageBreakdown(page, launchedAt, addressAt) {
+  const seen = await page.evaluate(() => ({
+    origin: performance.timeOrigin,
+    navigation: performance.getEntriesByType('navigation')[0]?.responseEnd ?? null,
+    script: performance.getEntriesByType('resource').filter((e) => e.initiatorType === 'script' || /\.js$/.test(e.name)).map((e) => e.responseEnd)[0] ?? null,
+    api: performance.getEntriesByType('resource').filter((e) => e.name.includes('/api/')).map((e) => ({ method: e.name.split('/api/')[1], start: e.startTime, end: e.responseEnd })),
+    ...window.__startMarks,
+  }));
+  const at = (t) => (t === null ? null : seen.origin + t - launchedAt);
+  const apiBefore = seen.api.filter((call) => seen.curve === null || call.end <= seen.curve);
+  return {
+    address: addressAt - launchedAt,
+    html: at(seen.navigation),
+    script: at(seen.script),
+    mounted: at(seen.mounted),
+    firstApi: apiBefore.length ? at(apiBefore[0].start) : null,
+    lastApi: apiBefore.length ? at(apiBefore[apiBefore.length - 1].end) : null,
+    curve: at(seen.curve),
+    calls: apiBefore.map((call) => `${call.method} ${Math.round(call.end - call.start)}`),
+  };
+}
+
+/** Starts a server, waits for its address line, opens it, waits for a curve; answers ms from launch (and, with `breakdown`, where they went). */
+async function launchToDiagram(browser, args, env, breakdown) {
+  const launchedAt = performance.timeOrigin + performance.now();
   const start = performance.now();
   const child = spawn(process.execPath, args, { cwd: root, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
   try {
@@ -39,10 +76,13 @@ async function launchToDiagram(browser, args, env) {
       });
       child.on('exit', (code) => reject(new Error(`the server exited (${code}) before printing its address`)));
     });
+    const addressAt = performance.timeOrigin + performance.now();
     const page = await browser.newPage();
+    if (breakdown) await page.addInitScript(PAGE_MARKS);
     await page.goto(url);
     await page.locator('[data-testid^="curve-"]').first().waitFor({ state: 'visible', timeout: 30_000 });
     const ms = performance.now() - start;
+    if (breakdown) breakdown.push(await pageBreakdown(page, launchedAt, addressAt));
     await page.close();
     return ms;
   } finally {
@@ -71,7 +111,8 @@ const folder = mkdtempSync(join(tmpdir(), 'loftpoint-start-'));
 try {
   const mode = [];
   const floor = [];
-  const serve = (r) => launchToDiagram(browser, [join(root, 'app/cli/browser-mode.js'), '--port', '0', '--project', join(folder, `start-${r}.loftpoint`)], { LOFTPOINT_DATA_DIR: join(folder, 'data') });
+  const breakdown = [];
+  const serve = (r) => launchToDiagram(browser, [join(root, 'app/cli/browser-mode.js'), '--port', '0', '--project', join(folder, `start-${r}.loftpoint`)], { LOFTPOINT_DATA_DIR: join(folder, 'data') }, r === 'warm' ? undefined : breakdown);
   const bare = () => launchToDiagram(browser, ['-e', FLOOR_SERVER], {});
   await serve('warm'); // a stale build is rebuilt here, outside the timing
   for (let r = 0; r < RUNS; r++) {
@@ -88,6 +129,14 @@ try {
   console.log(`Browser mode, launch to first diagram, median (10th-90th percentile) of ${RUNS} interleaved runs; load average ${loadavg().map((x) => x.toFixed(2)).join(' ')}`);
   console.log(`  loftpoint browser mode (new project)   ${fmt(m)}`);
   console.log(`  floor: bare server and one-path page   ${fmt(f)}   ratio ${(m.median / f.median).toFixed(1)}x`);
+  const median = (key) => {
+    const values = breakdown.map((b) => b[key]).filter((v) => v !== null);
+    return values.length ? `${Math.round(stats(values).median)}`.padStart(5) : '    -';
+  };
+  console.log('  where the time went (median ms from launch, each step on its own):');
+  console.log(`    address printed ${median('address')}   page received ${median('html')}   page script received ${median('script')}   window mounted ${median('mounted')}`);
+  console.log(`    first API call sent ${median('firstApi')}   last API answer before the curve ${median('lastApi')}   first curve in the page ${median('curve')}`);
+  console.log(`    API calls before the curve (ms each, last run): ${breakdown.at(-1)?.calls.join(', ') || 'none'}`);
   console.log(`Target under 1 s: ${m.median < 1000 ? 'met' : 'NOT met'}`);
 } finally {
   await browser.close();

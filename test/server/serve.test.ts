@@ -8,6 +8,7 @@ import { parsePort, runServe } from '../../app/cli/serve';
 import { firstProjectFile, userDataFolder } from '../../app/service/first-start';
 import { BUILD_PAGE_COMMAND, findPage, LaunchError } from '../../app/server/launch';
 import { DEMO_CONCEPTS } from '../../core';
+import { PRELIMINARY_CAUTION } from '../../app/service/contract';
 
 const folder = mkdtempSync(join(tmpdir(), 'loftpoint-serve-'));
 const page = join(folder, 'page');
@@ -20,7 +21,8 @@ async function withServe(project: string, body: (address: string, io: ReturnType
   let stop!: () => void;
   const until = new Promise<void>((resolve) => (stop = resolve));
   const running = runServe({ port: '0', project, rendererDir: page }, io, until);
-  for (let i = 0; i < 200 && !io.stdout().includes('\n'); i += 1) await new Promise((resolve) => setTimeout(resolve, 25));
+  // The address comes first; the project line and the caution once the project is open.
+  for (let i = 0; i < 400 && !io.stdout().includes(PRELIMINARY_CAUTION); i += 1) await new Promise((resolve) => setTimeout(resolve, 25));
   try {
     await body(io.stdout().split('\n')[0], io);
   } finally {
@@ -63,6 +65,31 @@ describe('loftpoint serve', () => {
     });
   });
 
+  it('prints the address before the project is made, and API calls sent at once wait for the whole project', async () => {
+    const project = join(folder, 'Early.loftpoint');
+    const io = bufferIO();
+    let stop!: () => void;
+    const until = new Promise<void>((resolve) => (stop = resolve));
+    const running = runServe({ port: '0', project, rendererDir: page }, io, until);
+    for (let i = 0; i < 400 && !io.stdout().includes('\n'); i += 1) await new Promise((resolve) => setImmediate(resolve));
+    try {
+      const address = io.stdout().split('\n')[0];
+      expect(address).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/#token=/);
+      // The page is there whether or not the project is open yet.
+      expect((await fetch(new URL(address).origin + '/')).status).toBe(200);
+      // Never a half-made project: the first answer already holds every demo concept and version.
+      const [info, concepts] = await Promise.all([api(address, 'getProject'), api(address, 'listConcepts')]);
+      expect(info.ok).toBe(true);
+      expect(info.value.conceptCount).toBe(DEMO_CONCEPTS.length);
+      expect(info.value.versionCount).toBe(DEMO_CONCEPTS.length);
+      expect(concepts.value.map((concept: { name: string }) => concept.name)).toEqual(DEMO_CONCEPTS.map((demo) => demo.title));
+      expect(io.stdout().split('\n')[1]).toBe(`Project: ${project} (new, with the demo concepts)`);
+    } finally {
+      stop();
+      await running;
+    }
+  });
+
   it('serves the page built ahead, and names the command that builds it when there is none', () => {
     const empty = join(folder, 'no-page');
     mkdirSync(empty, { recursive: true });
@@ -96,6 +123,25 @@ describe('loftpoint serve', () => {
     const notProject = join(folder, 'notes.loftpoint');
     writeFileSync(notProject, 'just some text, not SQLite');
     await expect(runServe({ project: notProject, rendererDir: page }, bufferIO(), Promise.resolve())).rejects.toThrow(InputError);
+  });
+
+  it('after printing its address, still refuses a project it cannot open: one error naming --project, the server closed, the file untouched', async () => {
+    const notProject = join(folder, 'letter.loftpoint');
+    const text = 'a letter, not a project file';
+    writeFileSync(notProject, text);
+    const io = bufferIO();
+    const running = runServe({ project: notProject, rendererDir: page }, io, new Promise(() => {}));
+    const refusal = await running.then(
+      () => null,
+      (error: unknown) => error,
+    );
+    expect(refusal).toBeInstanceOf(InputError);
+    expect((refusal as InputError).line()).toMatch(/^--project: /);
+    const address = io.stdout().split('\n')[0];
+    expect(io.stdout().trimEnd().split('\n')).toEqual([address]);
+    // Nothing listens there any more.
+    await expect(fetch(new URL(address).origin + '/')).rejects.toThrow();
+    expect(readFileSync(notProject, 'utf8')).toBe(text);
   });
 });
 

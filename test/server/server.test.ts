@@ -98,3 +98,52 @@ describe('startBrowserServer', () => {
     expect((await call('/', { headers: { host: 'evil.example' } })).status).toBe(403);
   });
 });
+
+describe('a server whose project is still opening', () => {
+  async function opening(settleWith: () => { ok: true } | { ok: false; message: string }) {
+    let settle!: (problem: { code: 'corrupt'; message: string } | null) => void;
+    const ready = new Promise<{ code: 'corrupt'; message: string } | null>((resolveReady) => (settle = resolveReady));
+    const steps: string[] = [];
+    const reached: string[] = [];
+    const waiting = await startBrowserServer({
+      port: 0,
+      token: TOKEN,
+      rendererDir: root,
+      dispatch: async (method) => {
+        reached.push(method);
+        return { ok: true, value: { echoed: method } };
+      },
+      ready,
+      onPageActivity: (step) => steps.push(step),
+    });
+    const previous = server;
+    server = waiting;
+    try {
+      const page = await call('/');
+      const early = call('/api/getProject', { method: 'POST', headers: api(), body: '{}' });
+      await new Promise((resolveLater) => setTimeout(resolveLater, 50));
+      // The page is served at once; the API call waits and has not reached the service.
+      expect(page.status).toBe(200);
+      expect(reached).toEqual([]);
+      expect(steps).toEqual(['page', 'api']);
+      const outcome = settleWith();
+      settle(outcome.ok ? null : { code: 'corrupt', message: outcome.message });
+      return { answer: JSON.parse((await early).body), reached };
+    } finally {
+      server = previous;
+      await waiting.close();
+    }
+  }
+
+  it('serves the page meanwhile and answers API calls once the project is open', async () => {
+    const { answer, reached } = await opening(() => ({ ok: true }));
+    expect(answer).toEqual({ ok: true, value: { echoed: 'getProject' } });
+    expect(reached).toEqual(['getProject']);
+  });
+
+  it('answers API calls with the reason when the project cannot be opened, never reaching the service', async () => {
+    const { answer, reached } = await opening(() => ({ ok: false, message: 'plans.loftpoint: the project file is damaged' }));
+    expect(answer).toEqual({ ok: false, error: { code: 'corrupt', message: 'plans.loftpoint: the project file is damaged' } });
+    expect(reached).toEqual([]);
+  });
+});

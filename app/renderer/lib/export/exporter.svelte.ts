@@ -2,11 +2,11 @@
  * Export from the window: the design-review report (HTML, or PDF printed by
  * the shell), the diagram (SVG, or PNG drawn in the page), the boundaries
  * CSV and the concept JSON. One export at a time; while a report is being
- * prepared the status line says so and the window keeps answering.
+ * prepared the status line says so and the window keeps answering. The
+ * writers (SVG, CSV, the report) are chunks of their own, fetched on the first
+ * export, so the window's first page does not carry them.
  */
 import { STALE_CONTOUR_INK } from '../../../chart/study-style';
-import { studyDiagramSvg } from '../../../chart/study-svg';
-import { evaluationCsv } from '../../../chart/boundaries-csv';
 import type { ExportFileRequest, WindowCommand } from '../../../shared/desktop-api';
 import type { Connection } from '../api/client';
 import type { DiagramView } from '../diagram/view.svelte';
@@ -19,7 +19,6 @@ import { exportFileName, type ExportWhat } from './file-names';
 import { svgToPngBytes } from './png';
 import { reportOrigin } from './report-origin';
 import type { WindowReportRequest } from './report-request';
-import { buildReportOffThread } from './run-report';
 
 export type { ExportWhat } from './file-names';
 
@@ -108,9 +107,10 @@ export class Exporter {
     return !project.dirty && project.parent !== null && project.online ? project.parent : undefined;
   }
 
-  #diagramSvg(): string {
+  async #diagramSvg(): Promise<string> {
     const { workspace, project, preferences } = this.#parts;
     const { evaluation } = this.#resolved();
+    const { studyDiagramSvg } = await import('../../../chart/study-svg');
     const older = project.comparison;
     const overlays = older?.olderEvaluation ? [{ name: `Version ${older.older.number}`, evaluation: older.olderEvaluation }] : [];
     // The window's view of the diagram: units, the loading axis (P/W or W/P), zoom and pan, the older version drawn behind and the study layers shown.
@@ -137,11 +137,12 @@ export class Exporter {
       case 'concept-json':
         return { kind: 'json', suggestedName, content: `${JSON.stringify(workspace.document, null, 2)}\n` };
       case 'diagram-svg':
-        return { kind: 'svg', suggestedName, content: this.#diagramSvg() };
+        return { kind: 'svg', suggestedName, content: await this.#diagramSvg() };
       case 'diagram-png':
-        return { kind: 'png', suggestedName, encoding: 'base64', content: bytesToBase64(await svgToPngBytes(this.#diagramSvg())) };
+        return { kind: 'png', suggestedName, encoding: 'base64', content: bytesToBase64(await svgToPngBytes(await this.#diagramSvg())) };
       case 'boundaries-csv': {
         const { design, evaluation } = this.#resolved();
+        const { evaluationCsv } = await import('../../../chart/boundaries-csv');
         return { kind: 'csv', suggestedName, content: evaluationCsv({ name: design.name, evaluation, system: preferences.units }) };
       }
       case 'report-html':
@@ -165,6 +166,7 @@ export class Exporter {
     project.status = { kind: 'info', text: 'Preparing the report… (running the studies)' };
     const alternatives = project.alternatives.map(({ name, concept: other }) => ({ name, concept: JSON.parse(JSON.stringify(other)) as unknown }));
     const request: WindowReportRequest = { concept, system, ...(await origin), generatedAt: new Date().toISOString(), ...(alternatives.length > 0 ? { alternatives } : {}) };
+    const { buildReportOffThread } = await import('./run-report');
     return buildReportOffThread(request);
   }
 }

@@ -139,14 +139,17 @@ export class ProjectState {
       this.#loadOffline(this.connection.problem ?? 'No project is open.');
       return;
     }
-    const project = await service.getProject({});
+    // The three first calls go out together: none needs another's answer.
+    const [project, kept, concepts] = await Promise.all([service.getProject({}), this.connection.drafts?.load() ?? null, service.listConcepts({})]);
     if (!project.ok) {
       this.#loadOffline(errorText(project.error));
       return;
     }
     this.project = project.value;
-    await this.#restoreKeptDrafts();
-    await this.refreshConcepts();
+    if (kept) this.#restoreKeptDrafts(kept);
+    if (concepts.ok) this.concepts = concepts.value;
+    else this.#fail(concepts.error);
+    await this.#refreshAlternatives();
     const remembered = this.#rememberedConcept();
     const first = this.concepts.find((concept) => concept.name === remembered) ?? this.concepts.find((concept) => concept.latestVersion !== null);
     if (first) await this.selectConcept(first.name);
@@ -225,6 +228,9 @@ export class ProjectState {
     }
     this.conceptName = name;
     this.#rememberConcept(name);
+    // The newest version goes out with the version list (it is shown unless a draft is kept).
+    const newest = this.#drafts.has(name) ? null : (this.concepts.find((concept) => concept.name === name)?.latestVersion ?? null);
+    const early = newest !== null ? service.getVersion({ version: newest }) : null;
     await this.refreshVersions();
     const kept = this.#drafts.get(name) ?? this.#storedDraft(name);
     if (kept) {
@@ -236,7 +242,7 @@ export class ProjectState {
     }
     const latest = this.versions[0];
     if (!latest) return;
-    const detail = await service.getVersion({ version: latest.number });
+    const detail = early && latest.number === newest ? await early : await service.getVersion({ version: latest.number });
     if (!detail.ok) return this.#fail(detail.error);
     const document = asDocument(detail.value.concept);
     this.parent = detail.value.number;
@@ -464,10 +470,9 @@ export class ProjectState {
   }
 
   /** Browser mode: drafts the server kept for this project file (a restart starts on a new origin with empty storage). */
-  async #restoreKeptDrafts(): Promise<void> {
-    const mirror = this.connection.drafts;
-    if (!mirror || !this.project) return;
-    const kept = await mirror.load();
+  /** Adds the drafts the server kept for this project (browser mode) to local storage, where a draft of this page wins. */
+  #restoreKeptDrafts(kept: Record<string, unknown>): void {
+    if (!this.project) return;
     try {
       const all = JSON.parse(localStorage.getItem(DRAFT_KEY) ?? '{}') as Record<string, unknown>;
       for (const [name, draft] of Object.entries(kept)) {

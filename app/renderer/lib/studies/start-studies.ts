@@ -1,18 +1,23 @@
 /**
  * Starts the window's ranges studies: the state, with the chance study's
- * worker built into the page (an inline worker, so it loads the same way
- * from file:// in the desktop window and over http:// in browser mode), and
- * hands it to the panels through its context.
+ * worker (an inline worker, so it loads the same way from the desktop
+ * window's own protocol and over http:// in browser mode), and hands it to
+ * the panels through its context. The worker's script is a chunk of its own,
+ * fetched when a study first runs: the first diagram does not wait for it.
  */
-import ProbabilityWorker from './probability.worker?worker&inline';
 import type { ProjectState } from '../state/project.svelte';
 import type { Workspace } from '../state/workspace.svelte';
-import type { StudyWorker } from './probability.svelte';
+import { lazyWorker, type StartWorker } from './lazy-worker';
 import { provideWindowStudies } from './studies-context';
 import { WindowStudies } from './window-studies.svelte';
 
+async function loadProbabilityWorker(): Promise<StartWorker> {
+  const { default: ProbabilityWorker } = await import('./probability.worker?worker&inline');
+  return () => new ProbabilityWorker({ name: 'loftpoint-chance-study' }) as unknown as ReturnType<StartWorker>;
+}
+
 export function startWindowStudies(workspace: Workspace, project: ProjectState): WindowStudies {
-  const worker = () => new ProbabilityWorker({ name: 'loftpoint-chance-study' }) as unknown as StudyWorker;
+  const worker = () => lazyWorker(loadProbabilityWorker);
   const studies = new WindowStudies(workspace, worker, () => project.conceptName);
   return provideWindowStudies(studies);
 }
