@@ -31,7 +31,11 @@ export interface TornadoBar {
   /** |high - low| of the relative wing-loading change, of the relative loading change. */
   wingLoadingSwing: number;
   loadingSwing: number;
-  /** The sort key: the larger of the two swings; Infinity when an end has no feasible point. */
+  /**
+   * The sort key: the larger of the two swings; Infinity when an end has no
+   * feasible point. A swing that is undefined (NaN: no nominal optimum, or a
+   * nominal loading of 0 with no power requirement) is left out; NaN when both are.
+   */
   swing: number;
 }
 
@@ -63,6 +67,9 @@ function swingOf(low: TornadoEnd, high: TornadoEnd, key: 'wingLoadingChangeRelat
   return Math.abs(high[key] - low[key]);
 }
 
+/** The larger of two swings, leaving out an undefined one. */
+const largerOf = (a: number, b: number) => (Number.isNaN(a) ? b : Number.isNaN(b) ? a : Math.max(a, b));
+
 /** Sort key with NaN last. */
 const descending = (a: number, b: number) => (Number.isNaN(a) ? 1 : Number.isNaN(b) ? -1 : b - a);
 
@@ -85,7 +92,7 @@ export function tornado(design: Design, parameters: readonly UncertainParameter[
       high,
       wingLoadingSwing,
       loadingSwing,
-      swing: Math.max(wingLoadingSwing, loadingSwing),
+      swing: largerOf(wingLoadingSwing, loadingSwing),
     };
   });
   const key = { largest: 'swing', wingLoading: 'wingLoadingSwing', loading: 'loadingSwing' }[order] as 'swing';
