@@ -67,9 +67,6 @@ function swingOf(low: TornadoEnd, high: TornadoEnd, key: 'wingLoadingChangeRelat
   return Math.abs(high[key] - low[key]);
 }
 
-/** The larger of two swings, leaving out an undefined one. */
-const largerOf = (a: number, b: number) => (Number.isNaN(a) ? b : Number.isNaN(b) ? a : Math.max(a, b));
-
 /** Sort key with NaN last. */
 const descending = (a: number, b: number) => (Number.isNaN(a) ? 1 : Number.isNaN(b) ? -1 : b - a);
 
@@ -92,7 +89,8 @@ export function tornado(design: Design, parameters: readonly UncertainParameter[
       high,
       wingLoadingSwing,
       loadingSwing,
-      swing: largerOf(wingLoadingSwing, loadingSwing),
+      // The loading swing alone can be undefined (a nominal loading of 0); without a nominal optimum both are.
+      swing: Number.isNaN(loadingSwing) ? wingLoadingSwing : Math.max(wingLoadingSwing, loadingSwing),
     };
   });
   const key = { largest: 'swing', wingLoading: 'wingLoadingSwing', loading: 'loadingSwing' }[order] as 'swing';
