@@ -76,6 +76,27 @@ describe('countSample', () => {
     expect(rows(tally.counts, 2)).toEqual([0, 0, 1, 0, 0]); // 1.5 falls between rows 1 and 2: first row at or above is 2
   });
 
+  it('meets a column exactly at a limit, and keeps a fixed envelope above a lower curve of the sample', () => {
+    const tally = columnCounts(WS, YS, FIXED);
+    // Limit exactly 200 Pa: 100 and 200 Pa are met ("at or below every limit"). The sample's own 0.5 lies below the
+    // fixed envelope 2 and 1 there, so the envelope stays 2 and 1 (rows 2 and 1); 300 Pa is beyond the limit.
+    expect(countSample(tally, [200], [() => 0.5])).toEqual({ column: 1, loading: 1 });
+    expect([0, 1, 2, 3].map((i) => rows(tally.counts, i))).toEqual([
+      [0, 0, 1, 0, 0],
+      [0, 1, 0, 0, 0],
+      [0, 0, 0, 0, 1],
+      [0, 0, 0, 0, 1],
+    ]);
+    // A sample's curves in falling order: the envelope is the larger, 2.5, not the last, 1.
+    const own = columnCounts(WS, YS, []);
+    expect(countSample(own, [], [() => 2.5, () => 1])).toEqual({ column: 3, loading: 2.5 });
+  });
+
+  it('ties a loading of exactly 0 everywhere to the largest wing loading', () => {
+    // The relative tie band of 0 is 0 wide: equal zeros still tie.
+    expect(countSample(columnCounts(WS, YS, []), [], [() => 0])).toEqual({ column: 3, loading: 0 });
+  });
+
   it('is null when every column lies beyond a limit', () => {
     const tally = columnCounts(WS, YS, [limit(50)]);
     expect(countSample(tally, [], [() => 1])).toBeNull();

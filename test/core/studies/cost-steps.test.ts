@@ -74,6 +74,12 @@ describe('requirementCosts: the stepped cases', () => {
     assertRelative(cost.relaxed.wingAreaChangeRelative, 1 / 1.21 - 1, 1e-9, 'S x 1/1.1^2');
   });
 
+  it('prices only the enabled requirements', () => {
+    const d = stallBound();
+    const withOff = { ...d, requirements: [...d.requirements, stall(30 * KNOT_MPS, { id: 'off', enabled: false })] };
+    expect(requirementCosts(withOff).costs.map((c) => c.id)).toEqual(['stall', 'cruise']);
+  });
+
   it('gives a jet\'s costs in thrust to weight', () => {
     const d = design({ aircraft: aircraft({ kind: 'turbofan', engines: 2 }), requirements: [stall(60 * KNOT_MPS)], rangePa: [500, 3000] });
     expect(requirementCosts(d).axis).toBe('thrustToWeight');

@@ -49,6 +49,10 @@ describe('templateRequirement: refusals and notes, word for word', () => {
     expect(threeEngines.ok && threeEngines.notes).toEqual([]);
     const allEngines = templateRequirement(ALL_ENGINES, { configurations: ['clean'], requirementIds: [], engines: 3 });
     expect(allEngines.ok && allEngines.notes).toEqual([]);
+    // A 25.121 row with no engine count of its own (made by hand: every shipped row has one) needs no note either.
+    const { engines: _engines, ...countless } = SECOND_SEGMENT;
+    const noCount = templateRequirement(countless, { configurations: ['clean'], requirementIds: [], engines: 3 });
+    expect(noCount.ok && noCount.notes).toEqual([]);
   });
 });
 
@@ -81,5 +85,7 @@ describe('templateRequirement: configuration and id', () => {
     const taken = templateRequirement(SECOND_SEGMENT, target(['14cfr-25.121b-2eng']));
     expect(taken.ok && taken.requirement.id).toBe('14cfr-25.121b-2eng-2');
     expect(SECOND_SEGMENT.requirement.id).toBe('14cfr-25.121b-2eng');
+    const third = templateRequirement(SECOND_SEGMENT, target(['14cfr-25.121b-2eng-3', '14cfr-25.121b-2eng', '14cfr-25.121b-2eng-2']));
+    expect(third.ok && third.requirement.id).toBe('14cfr-25.121b-2eng-4');
   });
 });

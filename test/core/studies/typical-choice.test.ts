@@ -77,6 +77,8 @@ describe('typicalRange: the aspect-ratio bands (light aircraft 6-8, deltas 4-5, 
     expect(ends(AR, trainerWith({ aspectRatio: 8 }))).toEqual([6, 8, false]);
     expect(ends(AR, trainerWith({ aspectRatio: 6 }))).toEqual([6, 8, false]);
     expect(ends(AR, trainerWith({ aspectRatio: 9 }))).toEqual([9, 11, false]);
+    expect(typicalRange(AR, trainerWith({ aspectRatio: 6 }))?.basis).toMatch(/^the band holding the concept's value: aspect ratio 6-8 /);
+    expect(typicalRange(AR, trainerWith({ aspectRatio: 11 }))?.basis).toMatch(/^the band holding the concept's value: aspect ratio about 10 /);
   });
 });
 
