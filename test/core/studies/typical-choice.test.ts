@@ -151,6 +151,29 @@ describe('typicalRange: the other published bands', () => {
   });
 });
 
+describe('typicalRange: rolling friction by the stated runway surface', () => {
+  // Brandt et al. (common practice), core/methods.md section 9: dry paved 0.02-0.05, grass 0.05-0.1, soft ground to 0.3.
+  const RF = 'requirements.takeoff-grass.rollingFriction';
+  const roll = trainer.requirements.find((r) => r.id === 'takeoff-grass') as Record<string, unknown> & Design['requirements'][number];
+  const withRolls = (...rolls: Record<string, unknown>[]): Design => ({ ...trainer, requirements: rolls as unknown as Design['requirements'] });
+
+  it('takes the band of the surface each requirement states, by its own id', () => {
+    const { runwaySurface: _grass, ...unstated } = roll;
+    // The trainer's grass strip at 0.05, and a second take-off run on soft ground listed before it.
+    const d = withRolls({ ...roll, id: 'soft-strip', runwaySurface: 'soft', rollingFriction: 0.2 }, roll);
+    const grass = typicalRange(RF, d);
+    expect(grass && [grass.low, grass.high, grass.widened]).toEqual([0.05, 0.1, false]);
+    expect(grass?.basis).toBe(
+      "runway surface grass strip: short to long or wet grass 0.05-0.1 (Brandt et al.; common practice); triangular, peaking at the concept's 0.05",
+    );
+    expect(ends('requirements.soft-strip.rollingFriction', d)).toEqual([0.1, 0.3, false]);
+    // Without a stated surface, 0.05 sits on the top edge of the paved band, listed first.
+    const none = typicalRange(RF, withRolls({ ...unstated, id: 'soft-strip', runwaySurface: 'soft' }, unstated));
+    expect(none && [none.low, none.high]).toEqual([0.02, 0.05]);
+    expect(none?.basis).toMatch(/^the band holding the concept's value: dry concrete or asphalt/);
+  });
+});
+
 describe('typicalUncertainty', () => {
   it('uses the study defaults unless given a seed and a sample count', () => {
     const block = typicalUncertainty(trainer);
