@@ -92,6 +92,19 @@ describe('countSample', () => {
     expect(countSample(own, [], [() => 2.5, () => 1])).toEqual({ column: 3, loading: 2.5 });
   });
 
+  it('ties a column to the least envelope only on its whole envelope, also at the grid\'s top row', () => {
+    // 100 Pa: curves 3 and 0, envelope 3 (the top row). 200 Pa: curves 3 (1 + 5e-10), within the 1e-9 tie band of 3,
+    // and 10: envelope 10, no tie. The sample's optimum is 100 Pa at loading 3.
+    const first = (w: number) => (w === 100 ? 3 : 3 * (1 + 5e-10));
+    const second = (w: number) => (w === 100 ? 0 : 10);
+    const tally = columnCounts(WS, YS, [limit(200)]);
+    expect(countSample(tally, [], [first, second])).toEqual({ column: 0, loading: 3 });
+    expect([rows(tally.counts, 0), rows(tally.counts, 1)]).toEqual([
+      [0, 0, 0, 1, 0],
+      [0, 0, 0, 0, 1],
+    ]);
+  });
+
   it('ties a loading of exactly 0 everywhere to the largest wing loading', () => {
     // The relative tie band of 0 is 0 wide: equal zeros still tie.
     expect(countSample(columnCounts(WS, YS, []), [], [() => 0])).toEqual({ column: 3, loading: 0 });
