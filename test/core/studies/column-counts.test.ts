@@ -103,6 +103,9 @@ describe('countSample', () => {
       [0, 0, 0, 1, 0],
       [0, 0, 0, 0, 1],
     ]);
+    // The same with the first curve exactly on the edge of the tie band, 3 + 3 x 1e-9.
+    const onEdge = (w: number) => (w === 100 ? 3 : 3 + Math.abs(3) * 1e-9);
+    expect(countSample(columnCounts(WS, YS, [limit(200)]), [], [onEdge, second])).toEqual({ column: 0, loading: 3 });
   });
 
   it('ties a loading of exactly 0 everywhere to the largest wing loading', () => {
