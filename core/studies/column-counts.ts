@@ -45,6 +45,8 @@ export function countSample(
   const { ws, ys, counts, fixedEnvelope } = tally;
   const ny = ys.length;
   const top = ys[ny - 1];
+  // Above this no envelope can tie with one on the grid (the tie band of the top row), nor be counted on it.
+  const beyondTies = top + Math.abs(top) * 1e-9;
   let cap = tally.fixedCap;
   for (const limit of limits) cap = Math.min(cap, limit);
   let bestColumn = -1;
@@ -56,8 +58,8 @@ export function countSample(
       continue;
     }
     let e = fixedEnvelope[i];
-    // Once above the grid's top loading the other curves cannot change the count.
-    for (let c = 0; c < curves.length && e <= top; c++) {
+    // Once beyond the top row's tie band the other curves change neither the count nor the optimum.
+    for (let c = 0; c < curves.length && e <= beyondTies; c++) {
       const y = curves[c](w);
       e = y <= Infinity ? (y > e ? y : e) : Infinity;
     }

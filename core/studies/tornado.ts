@@ -31,7 +31,11 @@ export interface TornadoBar {
   /** |high - low| of the relative wing-loading change, of the relative loading change. */
   wingLoadingSwing: number;
   loadingSwing: number;
-  /** The sort key: the larger of the two swings; Infinity when an end has no feasible point. */
+  /**
+   * The sort key: the larger of the two swings; Infinity when an end has no
+   * feasible point. A swing that is undefined (NaN: no nominal optimum, or a
+   * nominal loading of 0 with no power requirement) is left out; NaN when both are.
+   */
   swing: number;
 }
 
@@ -85,7 +89,8 @@ export function tornado(design: Design, parameters: readonly UncertainParameter[
       high,
       wingLoadingSwing,
       loadingSwing,
-      swing: Math.max(wingLoadingSwing, loadingSwing),
+      // The loading swing alone can be undefined (a nominal loading of 0); without a nominal optimum both are.
+      swing: Number.isNaN(loadingSwing) ? wingLoadingSwing : Math.max(wingLoadingSwing, loadingSwing),
     };
   });
   const key = { largest: 'swing', wingLoading: 'wingLoadingSwing', loading: 'loadingSwing' }[order] as 'swing';

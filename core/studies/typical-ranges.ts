@@ -56,8 +56,6 @@ function typicalBands(ref: FieldRef, design: Design): readonly TypicalBand[] {
   switch (ref.key) {
     case 'aspectRatio':
       return ASPECT_RATIO.bands;
-    case 'cdLinear':
-      return [];
     case 'lapseExponent':
       return propulsionKind(design.aircraft.propulsion.kind).lapseExponent?.typical.bands ?? [];
     case 'cd0': {
@@ -72,6 +70,7 @@ function typicalBands(ref: FieldRef, design: Design): readonly TypicalBand[] {
     if (ref.key === 'oswaldEfficiency') return OSWALD[role].bands;
     return CLMAX[role]?.bands ?? CLMAX.clean?.bands ?? [];
   }
+  // The aircraft's cdLinear: no published range.
   if (ref.scope !== 'requirement') return [];
   const requirement = design.requirements.find((r) => r.id === ref.id) as Requirement;
   const descriptor = requirementKind(requirement.kind);
