@@ -31,7 +31,7 @@ export function registerEvaluate(program: Command, io: CliIO, setExitCode: SetEx
   program
     .command('evaluate')
     .description(
-      'Evaluate a concept: which requirements bind, by how much, the optimum, the design point,\n' +
+      'Evaluate a concept: which requirements bind, by how much, the optimum, the design point, ' +
         'wing area and installed power or thrust. Preliminary sizing only.',
     )
     .argument('<file>', 'a concept JSON file, or a project file with --version')

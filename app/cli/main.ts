@@ -14,7 +14,7 @@ export async function main(argv: string[], io: CliIO = processIO): Promise<numbe
   const program = new Command('loftpoint')
     .description(
       'Preliminary aircraft sizing: constraint diagrams, design points and versioned concepts.\n' +
-        'Preliminary sizing only: certification requirements come from the applicable authority,\n' +
+        'Preliminary sizing only: certification requirements come from the applicable authority, ' +
         'and final numbers need licensed engineering review.',
     )
     // `--version` before a verb is the program's; after one (`evaluate FILE --version 3`) it stays the verb's.

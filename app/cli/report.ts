@@ -43,7 +43,7 @@ export function registerReport(program: Command, io: CliIO, setExitCode: SetExit
   program
     .command('report')
     .description(
-      'Write the design-review report of a concept: requirements, assumptions, the diagram, optimum, design point,\n' +
+      'Write the design-review report of a concept: requirements, assumptions, the diagram, optimum, design point, ' +
         'margins, sizing, speeds, bands, tornado, probabilities, requirement costs, the version note and changes.\n' +
         'The extension of --out picks the output: .html, .pdf, .svg or .png (the diagram), .csv (the boundaries).\n' +
         'Preliminary sizing only.',
