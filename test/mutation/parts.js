@@ -19,7 +19,7 @@ export const mutationParts = [
   { name: 'numeric', mutate: ['core/numeric/**/*.ts'], tests: ['numeric'] },
   { name: 'aero', mutate: ['core/aero/**/*.ts'], tests: ['aero'] },
   { name: 'propulsion', mutate: ['core/propulsion/**/*.ts'], tests: ['propulsion'] },
-  { name: 'constraints', mutate: ['core/constraints/**/*.ts'], tests: ['constraints'] },
+  { name: 'constraints', mutate: ['core/constraints/**/*.ts'], tests: ['constraints', 'requirements'] },
   { name: 'requirements', mutate: ['core/requirements/**/*.ts'], tests: ['requirements', 'constraints'] },
   { name: 'assumptions', mutate: ['core/assumptions/**/*.ts'], tests: ['assumptions'] },
   { name: 'mission', mutate: ['core/mission/**/*.ts'], tests: ['mission'] },
