@@ -177,6 +177,25 @@ describe('probabilityMap counted by hand', () => {
   });
 });
 
+describe('the point the chance is reported at', () => {
+  it('a design point exactly on the nominal stall limit meets it in every sample when nothing is ranged', () => {
+    // With no range every sample is the nominal concept; a point on a limit meets it (margin 0).
+    const onLimit = { wingLoadingPa: Math.min(limitOf(V_LANDING, 2.1), CLEAN_LIMIT), loading: 0 };
+    const map = probabilityMap(CONCEPT, [], { seed: 1, samples: 20, grid: GRID, point: onLimit }) as ProbabilityMap;
+    expect(map.designPoint?.probability).toBe(1);
+    expect(map.designPoint?.byRequirement.map((r) => r.probability)).toEqual([1, 1]);
+  });
+
+  it('no point at all when the concept has none and no plotted wing loading meets every requirement', () => {
+    // Plotted from 1000 Pa, above both stall limits (about 689 and 709 Pa): no optimum to report at.
+    const { designPoint: _none, ...rest } = CONCEPT;
+    const high = { ...rest, diagram: { ...rest.diagram, wingLoadingRangePa: [1000, 2000] as [number, number] } };
+    const map = probabilityMap(high, [], { seed: 1, samples: 20, grid: GRID }) as ProbabilityMap;
+    expect(map.designPoint).toBeUndefined();
+    expect(map.samples).toBe(20);
+  });
+});
+
 describe('probabilityMapRun counted by hand', () => {
   const params = parametersFor('uniform');
   const options = { seed: 20261202, samples: 1600, grid: GRID };
@@ -214,6 +233,37 @@ describe('probabilityMapRun counted by hand', () => {
     }
     expect(whole.done()).toBe(1600);
     expectMapMatches(whole.result(), limits);
+  });
+
+  it('a part run absorbs the rest of its own range: samples 500 to 1599, counted by hand', () => {
+    const run = probabilityMapRun(CONCEPT, params, { ...options, part: { first: 500, end: 1600 } });
+    run.step(500); // samples 500 to 999 here
+    const rest = probabilityMapRun(CONCEPT, params, { ...options, part: { first: 1000, end: 1600 } });
+    rest.step(600);
+    run.absorb(rest.part());
+    expect(run.done()).toBe(1100);
+    expectMapMatches(run.result(), limits.slice(500, 1600));
+  });
+
+  it('before any sample: no chance yet is 0, never NaN, and there is no optimum spread', () => {
+    const map = probabilityMapRun(CONCEPT, params, options).result();
+    expect(map.samples).toBe(0);
+    expect(Array.from(map.probability).every((p) => p === 0)).toBe(true);
+    expect(map.designPoint?.probability).toBe(0);
+    expect(map.designPoint?.standardError).toBe(0);
+    expect(map.designPoint?.byRequirement).toEqual([
+      { id: 'clean-stall', probability: 0 },
+      { id: 'landing-stall', probability: 0 },
+    ]);
+    expect(map.optimumSpread).toBeUndefined();
+  });
+
+  it('refuses a part counted for a concept with other requirements', () => {
+    const run = probabilityMapRun(CONCEPT, params, options);
+    const more = design({ requirements: [...CONCEPT.requirements, stall(40 * KNOT_MPS, { id: 'third' })], designPoint: POINT });
+    const other = probabilityMapRun(more, params, { ...options, part: { first: 0, end: 10 } });
+    other.step(10);
+    expect(() => run.absorb(other.part())).toThrow(new RangeError('the part was counted on another grid or another concept'));
   });
 
   it('refuses a part counted on another grid', () => {
