@@ -24,6 +24,11 @@ describe('a range end at the concept value, to rounding', () => {
     expect(resolve(AR, 6, 7.4 - 8e-9).ok).toBe(false);
   });
 
+  it('exactly a part in 10^9 off still holds the value', () => {
+    expect(resolve(AR, 7.4 + 1e-9 * 7.4, 9).ok).toBe(true);
+    expect(resolve(AR, 6, 7.4 - 1e-9 * 7.4).ok).toBe(true);
+  });
+
   it('under 1 the allowance is 1e-9 absolute: 0.014 + 0.9e-9 holds, 0.014 + 1.1e-9 does not', () => {
     const field = 'aircraft.aero.configurations.takeoff.cd0Increment';
     expect(resolve(field, 0.014 + 0.9e-9, 0.02).ok).toBe(true);

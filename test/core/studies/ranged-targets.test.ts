@@ -88,6 +88,23 @@ describe('the values a ranged value writes', () => {
     expect(odd.apply(CONCEPT, 0.85).aircraft.configurations.landing.oswaldEfficiency).toBe(0.85);
   });
 
+  it("by the same rule clean's CLmax 1.5 leaves takeoff's 1.8 and landing's 2.1, whatever a concept without configurations says", () => {
+    for (const concept of [undefined, null, {}, { aircraft: {} }, { aircraft: { aero: {} } }, { aircraft: { aero: { configurations: 'none' } } }]) {
+      const p = one('aircraft.aero.configurations.clean.clMax', 1.4, 1.6, concept);
+      const c = p.apply(CONCEPT, 1.6).aircraft.configurations;
+      expect([c.clean.clMax, c.takeoff.clMax, c.landing.clMax], JSON.stringify(concept)).toEqual([1.6, 1.8, 2.1]);
+    }
+  });
+
+  it('applied to a concept that lacks the configuration, writes the others and makes none up', () => {
+    const p = one('aircraft.aero.configurations.clean.cd0', 0.025, 0.035);
+    const { landing: _gone, ...rest } = CONCEPT.aircraft.configurations;
+    const fewer: Design = { ...CONCEPT, aircraft: { ...CONCEPT.aircraft, configurations: rest } };
+    const c = p.apply(fewer, 0.025).aircraft.configurations;
+    expect(Object.keys(c)).toEqual(['clean', 'takeoff']);
+    expect(c.takeoff.cd0).toBeCloseTo(0.025 + 0.015, 15);
+  });
+
   it("a CD0 increment sets that configuration's CD0 to clean's plus the increment and leaves the others", () => {
     const c = one('aircraft.aero.configurations.landing.cd0Increment', 0.05, 0.07).apply(CONCEPT, 0.07).aircraft.configurations;
     expect(c.landing.cd0).toBeCloseTo(0.03 + 0.07, 15);
