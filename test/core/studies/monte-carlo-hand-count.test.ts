@@ -245,6 +245,15 @@ describe('probabilityMapRun counted by hand', () => {
     expectMapMatches(run.result(), limits.slice(500, 1600));
   });
 
+  it('absorbing only a late part gives the map of those samples, optimum spread included', () => {
+    const whole = probabilityMapRun(CONCEPT, params, options);
+    const late = probabilityMapRun(CONCEPT, params, { ...options, part: { first: 1300, end: 1600 } });
+    late.step(300);
+    whole.absorb(late.part());
+    expect(whole.done()).toBe(300);
+    expectMapMatches(whole.result(), limits.slice(1300, 1600));
+  });
+
   it('before any sample: no chance yet is 0, never NaN, and there is no optimum spread', () => {
     const map = probabilityMapRun(CONCEPT, params, options).result();
     expect(map.samples).toBe(0);
