@@ -180,7 +180,10 @@ describe('probabilityMap counted by hand', () => {
 describe('the point the chance is reported at', () => {
   it('a design point exactly on the nominal stall limit meets it in every sample when nothing is ranged', () => {
     // With no range every sample is the nominal concept; a point on a limit meets it (margin 0).
-    const onLimit = { wingLoadingPa: Math.min(limitOf(V_LANDING, 2.1), CLEAN_LIMIT), loading: 0 };
+    // Sea-level density from the standard's own constants, rho0 = P0/(R T0) = 101325/(287.05287 x 288.15)
+    // (U.S. Standard Atmosphere 1976), so that the point lies on the limit to rounding, not 1.5e-8 inside it.
+    const rho0 = 101325 / (287.05287 * 288.15);
+    const onLimit = { wingLoadingPa: 0.5 * rho0 * V_LANDING * V_LANDING * 2.1, loading: 0 };
     const map = probabilityMap(CONCEPT, [], { seed: 1, samples: 20, grid: GRID, point: onLimit }) as ProbabilityMap;
     expect(map.designPoint?.probability).toBe(1);
     expect(map.designPoint?.byRequirement.map((r) => r.probability)).toEqual([1, 1]);
