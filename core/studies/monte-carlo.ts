@@ -202,15 +202,15 @@ export function probabilityMapRun(design: Design, parameters: readonly Uncertain
         byRequirement: enabled.map(({ r }, j) => ({ id: r.id, probability: metEach[j] / n })),
       };
     }
-    const w = optimumW.subarray(0, done);
-    // Absorbed parts fill their own slots; with every part in, the slots are all of [0, samples).
-    const onGrid = w.filter((x) => x === x).length;
+    // Samples run here and absorbed parts fill their own slots, not always the first `done`;
+    // a slot not yet filled is NaN, as is one off the grid, so every slot is read.
+    const onGrid = optimumW.filter((x) => x === x).length;
     if (onGrid > 0) {
       map.optimumSpread = {
         samplesOnGrid: onGrid,
         resolutionPa: (grid.wingLoading[1] - grid.wingLoading[0]) / (nx - 1),
-        wingLoadingPa: spreadOf(w),
-        loading: spreadOf(optimumY.subarray(0, done)),
+        wingLoadingPa: spreadOf(optimumW),
+        loading: spreadOf(optimumY),
       };
     }
     return map;
