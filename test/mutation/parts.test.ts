@@ -7,7 +7,7 @@ import { mutationParts } from './parts.js';
 import { mergedReport, score, scoreTable, statusCounts } from './report-counts.js';
 
 const root = new URL('../..', import.meta.url).pathname;
-type Part = { name: string; mutate: string[]; tests: string[] };
+type Part = { name: string; mutate: string[]; tests: string[]; skip?: string[] };
 const parts = mutationParts as Part[];
 
 describe('the parts of `npm run test:mutation`', () => {
@@ -23,6 +23,7 @@ describe('the parts of `npm run test:mutation`', () => {
       for (const tests of part.tests) {
         if (!tests.includes('*')) expect(statSync(join(root, 'test/core', tests)).isDirectory(), `${part.name}: test/core/${tests}`).toBe(true);
       }
+      for (const skipped of part.skip ?? []) expect(statSync(join(root, 'test/core', skipped)).isFile(), `${part.name}: test/core/${skipped}`).toBe(true);
     }
   });
 

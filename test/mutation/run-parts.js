@@ -58,11 +58,11 @@ if (!reportOnly) {
     delete config.htmlReporter;
     const configFile = join(folder, `${part.name}.stryker.json`);
     writeFileSync(configFile, `${JSON.stringify(config, null, 2)}\n`);
-    console.log(`\n== test:mutation, part ${part.name}: ${part.mutate.filter((m) => !m.startsWith('!')).join(' ')} with test/core ${part.tests.join(', ')}`);
+    console.log(`\n== test:mutation, part ${part.name}: ${part.mutate.filter((m) => !m.startsWith('!')).join(' ')} with test/core ${part.tests.join(', ')}${part.skip ? ` without ${part.skip.join(', ')}` : ''}`);
     const run = spawnSync(join(root, 'node_modules/.bin/stryker'), ['run', configFile], {
       cwd: root,
       stdio: 'inherit',
-      env: { ...process.env, LOFTPOINT_MUTATION_ONLY: part.tests.join(','), LOFTPOINT_MUTATION_ENGINE: '', LOFTPOINT_MUTATION_SKIP: '' },
+      env: { ...process.env, LOFTPOINT_MUTATION_ONLY: part.tests.join(','), LOFTPOINT_MUTATION_ENGINE: '', LOFTPOINT_MUTATION_SKIP: (part.skip ?? []).join(',') },
     });
     if (run.status !== 0) failed.push(part.name);
   }
