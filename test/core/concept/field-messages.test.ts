@@ -7,16 +7,8 @@
  * least one engine, whole numbers of engines.
  */
 import { describe, expect, it } from 'vitest';
-import { parseConcept } from '../../../core/concept';
-import { exampleConcept, type Editable } from './fixture';
+import { issuesAfter, type Editable } from './fixture';
 
-function issuesAfter(change: (c: Editable) => void) {
-  const concept = exampleConcept();
-  change(concept);
-  const parsed = parseConcept(concept);
-  if (parsed.ok) throw new Error('expected issues');
-  return parsed.issues;
-}
 
 const PROPULSION = 'piston, turbocharged-piston, turboprop, turbofan, electric';
 const SEGMENTS = 'takeoff-climb, climb, cruise, loiter, descent-landing, reserve';

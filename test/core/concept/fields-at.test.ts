@@ -10,9 +10,8 @@
  * format has no list.
  */
 import { describe, expect, it } from 'vitest';
-import { parseConcept } from '../../../core/concept';
 import { fieldsAt } from '../../../core/concept/fields';
-import { exampleConcept, type Editable } from './fixture';
+import { issuesAfter, type Editable } from './fixture';
 
 const CONFIGURATION = ['cd0Increment', 'oswaldEfficiency', 'clMax'];
 const PROPULSION = ['kind', 'engines', 'lapseExponent', 'lapseModel', 'throttleRatio', 'criticalAltitude'];
@@ -22,13 +21,6 @@ const BATTERY = ['kind', 'specificEnergy', 'usableFraction', 'driveEfficiency'];
 /** Every requirement's common fields (README.md), then a stall requirement's own speed. */
 const STALL = ['kind', 'id', 'label', 'source', 'note', 'enabled', 'altitude', 'temperatureOffset', 'massFraction', 'powerSetting', 'propellerEfficiency', 'configuration', 'speed'];
 
-function issuesAfter(change: (c: Editable) => void) {
-  const concept = exampleConcept();
-  change(concept);
-  const parsed = parseConcept(concept);
-  if (parsed.ok) throw new Error('expected issues');
-  return parsed.issues;
-}
 
 /** A battery mission whose second segment is a cruise, so the segment kind that picks the list is not the first one. */
 function batteryMission(c: Editable): void {

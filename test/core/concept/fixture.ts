@@ -1,3 +1,5 @@
+import { parseConcept } from '../../../core/concept';
+
 /**
  * The example concept printed in DESIGN.md ("The concept file"), verbatim,
  * as a fresh object on every call so a test may change it freely.
@@ -46,4 +48,13 @@ export function conceptWith(requirements: Editable[], aircraft: Editable = {}): 
     },
     requirements,
   };
+}
+
+/** The issues parseConcept reports for the example concept after `change`; a change that leaves it valid fails the test. */
+export function issuesAfter(change: (c: Editable) => void) {
+  const concept = exampleConcept();
+  change(concept);
+  const parsed = parseConcept(concept);
+  if (parsed.ok) throw new Error('expected issues');
+  return parsed.issues;
 }
