@@ -7,6 +7,8 @@
 //   npm run test:mutation -- units,mission     only those parts (the others' last reports still count)
 //   npm run test:mutation -- --report          no run: the score from the parts' last reports
 //   npm run test:mutation -- --concurrency 2   passed on to Stryker (default 1)
+//   npm run test:mutation -- --survivors       with --report or a run: list the survivors that
+//                                              test/mutation/equivalent.md does not list
 //
 // Each part runs in Stryker's incremental mode with its own cache
 // (reports/mutation/parts/<part>-incremental.json): a second run tests again
@@ -21,12 +23,14 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { mutationParts } from './parts.js';
+import { survivors, unlistedLines } from './listed-survivors.js';
 import { mergedReport, partRow, scoreTable } from './report-counts.js';
 
 const root = new URL('../..', import.meta.url).pathname;
 const folder = join(root, 'reports/mutation/parts');
 const args = process.argv.slice(2);
 const reportOnly = args.includes('--report');
+const listSurvivors = args.includes('--survivors');
 const concurrencyAt = args.indexOf('--concurrency');
 const concurrency = concurrencyAt >= 0 ? args[concurrencyAt + 1] : '1';
 if (!/^[1-9][0-9]?$/.test(concurrency ?? '')) {
@@ -80,8 +84,13 @@ for (const part of mutationParts) {
   reports.push(report);
   rows.push(partRow(part.name, report));
 }
-writeFileSync(join(root, 'reports/mutation/mutation.json'), JSON.stringify(mergedReport(reports)));
+const merged = mergedReport(reports);
+writeFileSync(join(root, 'reports/mutation/mutation.json'), JSON.stringify(merged));
 console.log(`\n${scoreTable(rows)}`);
+const found = survivors(merged, readFileSync(join(root, 'test/mutation/equivalent.md'), 'utf8'));
+const unlisted = unlistedLines(found);
+console.log(`Survivors (survived or not covered): ${found.length}; listed as equivalent in test/mutation/equivalent.md: ${found.length - unlisted.length}; not listed: ${unlisted.length}${unlisted.length > 0 && !listSurvivors ? ' (add --survivors to see them)' : ''}.`);
+if (listSurvivors && unlisted.length > 0) console.log(unlisted.join('\n'));
 if (failed.length > 0) {
   console.error(`test:mutation: Stryker failed on part(s) ${failed.join(', ')}; their last reports (if any) are counted above.`);
   process.exit(1);
