@@ -20,7 +20,8 @@ export function listedPlaces(markdown) {
   for (const line of markdown.split('\n')) {
     if (line.startsWith('#')) {
       const paths = [...line.matchAll(/core\/[\w/.-]*/g)].map((m) => m[0].replace(/[/.]+$/, ''));
-      headingFile = paths.length === 1 && paths[0].endsWith('.ts') ? paths[0] : null;
+      const files = paths.filter((p) => p.endsWith('.ts'));
+      headingFile = files.length === 1 ? files[0] : null;
       folders = paths.map((p) => (p.endsWith('.ts') ? p.slice(0, p.lastIndexOf('/')) : p));
       continue;
     }

@@ -18,6 +18,12 @@ const markdown = `# Equivalent mutants in core/
 | --- | --- | --- |
 | bands.ts 86:15, 87:15, column-counts.ts 27:26 | \`>=\` to \`>\` | equal value |
 
+## core/numeric/bracket-root.ts, checked again (with test/core/numeric)
+
+| place | mutation | why equivalent |
+| --- | --- | --- |
+| 25:30 | \`>\` to \`>=\` | tolerance |
+
 ## core/requirements and core/assumptions (two folders)
 
 | place | mutation | why equivalent |
@@ -38,6 +44,7 @@ describe('the survivors equivalent.md lists', () => {
     expect([...listedPlaces(markdown)].sort()).toEqual([
       'core/assumptions/stall.ts 31:7',
       'core/constraints/best-rate-speed.ts 25:19',
+      'core/numeric/bracket-root.ts 25:30',
       'core/requirements/stall.ts 31:7',
       'core/studies/bands.ts 86:15',
       'core/studies/bands.ts 87:15',
