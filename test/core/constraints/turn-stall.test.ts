@@ -19,13 +19,18 @@ const concept = {
   designPoint: { wingLoading: '2000 N/m^2', powerToWeight: '30 W/N' },
 } as ConceptJson;
 
-describe('a sustained turn that stalls', () => {
+/** Evaluated inside each test, so that mutation testing (per-test coverage) sees the code it runs. */
+function evaluated() {
   const parsed = parseConcept(concept);
   if (!parsed.ok) throw new Error(JSON.stringify(parsed.issues));
-  const evaluation = evaluateDesign(parsed.design);
+  return evaluateDesign(parsed.design);
+}
+
+describe('a sustained turn that stalls', () => {
 
   it('draws its stall line at w = q C_Lmax / n', () => {
     // q = 0.5 x 1.225 x 60^2 = 2205 Pa; w = 2205 x 1.5 / 2 = 1653.75 N/m^2.
+    const evaluation = evaluated();
     const turn = evaluation.boundaries.find((b) => b.id === 'turn') as { stallLimit?: number };
     expect(turn.stallLimit).toBeCloseTo(1653.75, 3); // rho0 = 1.2250 kg/m^3 (USSA 1976)
     expect(evaluation.warnings.find((w) => w.code === 'turn-stalls')?.message).toMatch(/"turn" cannot be flown above a wing loading of 1654 N\/m\^2/);
@@ -33,6 +38,7 @@ describe('a sustained turn that stalls', () => {
 
   it('gives a limit margin past it, not -100 %', () => {
     // 1 - 2000/1653.75 = -0.209373.
+    const evaluation = evaluated();
     expect(evaluation.designPoint?.margins[0].margin).toBeCloseTo(-0.209373, 5);
     // The optimum sits at or below the stall line.
     expect(evaluation.optimum?.wingLoading ?? Infinity).toBeLessThanOrEqual(1653.75 * (1 + 1e-9));
