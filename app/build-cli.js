@@ -22,8 +22,8 @@ import { CLI_OUT, MANIFEST, codeCacheFile, freshManifest, loadBuiltCli, writeWho
 export { CLI_OUT, MANIFEST, freshManifest };
 /** Entry points: the command line (exports main) and browser mode (runs on import). */
 export const ENTRIES = { loftpoint: 'app/cli/main.ts', serve: 'app/cli/serve-start.ts' };
-/** The module that is also the Monte Carlo workers' script. */
-const WORKER_SCRIPT = 'app/cli/monte-carlo-workers.ts';
+/** The Monte Carlo worker thread's own entry, built alone (app/cli/monte-carlo-workers.ts starts it). */
+export const THREAD_ENTRY = 'app/cli/monte-carlo-thread.ts';
 
 const here = fileURLToPath(new URL('.', import.meta.url));
 export const defaultRoot = join(here, '..');
@@ -62,18 +62,32 @@ const commanderSpawnsLazily = {
   },
 };
 
-/** The worker module with `import.meta.url` naming its own chunk of the split build, where the worker threads start. */
-function workerScriptIn(chunk) {
-  return {
-    name: 'loftpoint-worker-script',
-    setup(build) {
-      build.onLoad({ filter: /[\\/]app[\\/]cli[\\/]monte-carlo-workers\.ts$/ }, async (args) => {
-        const { readFile } = await import('node:fs/promises');
-        const text = await readFile(args.path, 'utf8');
-        return { contents: text.replaceAll('import.meta.url', `new URL(${JSON.stringify(`./${chunk}`)}, __loftpointModuleUrl).href`), loader: 'ts' };
-      });
-    },
-  };
+/**
+ * The Monte Carlo worker's file: app/cli/monte-carlo-thread.ts and only what it imports, as one
+ * CommonJS file (minified) that the worker's loader runs with V8's code cache. Answers esbuild's
+ * output files, the file's name, its sources, and the `define` that names it to the command line.
+ */
+export async function buildMonteCarloThread(root, outdir) {
+  const { build } = await import('esbuild');
+  const result = await build({
+    absWorkingDir: root,
+    outdir,
+    entryPoints: { 'monte-carlo-thread': THREAD_ENTRY },
+    bundle: true,
+    platform: 'node',
+    target: 'node20.19',
+    format: 'cjs',
+    outExtension: { '.js': '.cjs' },
+    minify: true,
+    entryNames: '[name]-[hash]',
+    metafile: true,
+    write: false,
+    logLevel: 'silent',
+    legalComments: 'none',
+  });
+  const [output] = Object.keys(result.metafile.outputs);
+  const file = basename(output);
+  return { outputFiles: result.outputFiles, file, inputs: Object.keys(result.metafile.inputs), define: { __LOFTPOINT_MONTE_CARLO_THREAD__: JSON.stringify(file) } };
 }
 
 /** Builds out/cli under `root`; answers the manifest. Throws esbuild's error when a source does not build. */
@@ -98,8 +112,11 @@ export async function buildCli(root = defaultRoot) {
     logLevel: 'silent',
     legalComments: 'none',
   };
+  // The worker first: the command line is built knowing its file name.
+  const thread = await buildMonteCarloThread(root, outdir);
   const split = await build({
     ...common,
+    define: thread.define,
     entryPoints: ENTRIES,
     splitting: true,
     format: 'esm',
@@ -114,18 +131,18 @@ export async function buildCli(root = defaultRoot) {
     return basename(found[0]);
   };
   // The same command line as one CommonJS file (every verb inside, loaded when used), which V8 can
-  // cache compiled; its worker threads start from the split build's chunk.
+  // cache compiled; its worker threads start from the worker's own file, like the split build's.
   const single = await build({
     ...common,
     entryPoints: { 'loftpoint-cli': ENTRIES.loftpoint },
     format: 'cjs',
     outExtension: { '.js': '.cjs' },
-    define: { 'import.meta.url': '__loftpointModuleUrl' },
-    plugins: [englishOnlyValidation, commanderSpawnsLazily, workerScriptIn(outputOf(split, WORKER_SCRIPT))],
+    define: { ...thread.define, 'import.meta.url': '__loftpointModuleUrl' },
+    plugins: [englishOnlyValidation, commanderSpawnsLazily],
   });
   mkdirSync(outdir, { recursive: true });
   const written = new Set([basename(MANIFEST)]);
-  for (const file of [...split.outputFiles, ...single.outputFiles]) {
+  for (const file of [...thread.outputFiles, ...split.outputFiles, ...single.outputFiles]) {
     written.add(basename(file.path));
     writeWhole(file.path, file.contents);
   }
@@ -134,9 +151,11 @@ export async function buildCli(root = defaultRoot) {
   entries.cli = outputOf(single, ENTRIES.loftpoint);
   const cache = await makeCodeCache(join(outdir, entries.cli));
   if (cache) written.add(basename(cache));
+  // The worker's caches of this very file (one per set of Node options) stay valid.
+  for (const name of readdirSync(outdir)) if (name.startsWith(`${thread.file}.`) && name.endsWith('.cache')) written.add(name);
   // The sources the launcher compares with the build: our own files, the build scripts, and the
   // lock file for the bundled packages (npm rewrites it whenever a package changes).
-  const own = Object.keys(split.metafile.inputs).filter((input) => !input.startsWith('node_modules/'));
+  const own = [...new Set([...Object.keys(split.metafile.inputs), ...thread.inputs])].filter((input) => !input.startsWith('node_modules/'));
   const manifest = { builtAt: startedAt, entries, inputs: [...own.sort(), 'app/build-cli.js', 'app/cli/built-cli.cjs', 'app/cli/built-cli.js', 'package-lock.json'] };
   writeWhole(join(root, MANIFEST), `${JSON.stringify(manifest, null, 1)}\n`);
   // Files of earlier builds, once no command started in the last minute could still be loading them.
@@ -150,8 +169,9 @@ export async function buildCli(root = defaultRoot) {
 /**
  * The code cache of the single-file command line, made by running it here, quietly, on what a
  * cold start does most: `demo trainer`, `evaluate --json` of it, and a new project with the demo
- * concepts (what browser mode's first start makes). Answers the cache file, or null when it could
- * not be made (the command line then compiles as usual and writes the cache after its first run).
+ * concepts (what browser mode's first start makes); then a report's Monte Carlo on two threads
+ * makes the worker's own cache. Answers the command line's cache file, or null when it could not
+ * be made (the command line then compiles as usual and writes the cache after its first run).
  */
 async function makeCodeCache(bundle) {
   const folder = mkdtempSync(join(tmpdir(), 'loftpoint-cache-'));
@@ -170,7 +190,20 @@ async function makeCodeCache(bundle) {
     } catch {
       // whatever ran is still worth caching
     }
-    return saveCache() ? codeCacheFile(bundle) : null;
+    const saved = saveCache() ? codeCacheFile(bundle) : null;
+    // After the command line's own cache is written, so that cache stays the size a cold start needs:
+    // a report on two threads, whose worker writes the code cache of its own file as it ends.
+    const workers = process.env.LOFTPOINT_WORKERS;
+    try {
+      process.env.LOFTPOINT_WORKERS = '2';
+      await main(['report', concept, '--out', join(folder, 'chance.svg'), '--samples', '2000'], quiet);
+    } catch {
+      // the worker then compiles its file on its first run and writes the cache itself
+    } finally {
+      if (workers === undefined) delete process.env.LOFTPOINT_WORKERS;
+      else process.env.LOFTPOINT_WORKERS = workers;
+    }
+    return saved;
   } catch {
     return null;
   } finally {

@@ -11,7 +11,7 @@
 // app/start.js then starts browser mode instead.
 import { spawn, spawnSync } from 'node:child_process';
 import { copyFileSync, cpSync, existsSync, mkdirSync, readFileSync, readdirSync, statSync, writeFileSync } from 'node:fs';
-import { join, relative, resolve } from 'node:path';
+import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 export const root = fileURLToPath(new URL('..', import.meta.url));
@@ -39,6 +39,17 @@ export function systemDeps(overrides = {}) {
     log: (line) => console.error(line),
     /** Runs a command to its end with the output shown; answers its exit status. */
     run: (command, args, options = {}) => spawnSync(command, args, { cwd: root, stdio: ['ignore', 'inherit', 'inherit'], ...options }).status ?? 1,
+    /** Runs a command to its end with its output kept, not shown; answers its exit status and its output (both streams). */
+    capture: (command, args, options = {}) => {
+      const result = spawnSync(command, args, { cwd: root, stdio: ['ignore', 'pipe', 'pipe'], encoding: 'utf8', maxBuffer: 16 * 1024 * 1024, ...options });
+      const output = `${result.stdout ?? ''}${result.stderr ?? ''}${result.error ? `${result.error.message}\n` : ''}`;
+      return { status: result.status ?? 1, output };
+    },
+    /** Writes a log file of ours (under out/), making its folder. */
+    writeLog: (file, text) => {
+      mkdirSync(dirname(file), { recursive: true });
+      writeFileSync(file, text);
+    },
     ...overrides,
   };
 }
@@ -53,7 +64,7 @@ export function electronBinary(deps) {
   if (env.ELECTRON_OVERRIDE_DIST_PATH) {
     const path = join(resolve(env.ELECTRON_OVERRIDE_DIST_PATH), executable);
     if (exists(path)) return { ok: true, path };
-    return failed('Electron binary', `ELECTRON_OVERRIDE_DIST_PATH names ${env.ELECTRON_OVERRIDE_DIST_PATH}, which has no ${executable}`, `point ELECTRON_OVERRIDE_DIST_PATH at an unpacked Electron ${version} folder, or unset it and run \`npx install-electron --no\``);
+    return failed('Electron binary', `ELECTRON_OVERRIDE_DIST_PATH names ${env.ELECTRON_OVERRIDE_DIST_PATH}, which has no ${executable}`, `point ELECTRON_OVERRIDE_DIST_PATH at an unpacked Electron ${version} folder, or unset it and run \`${INSTALL_ELECTRON}\``);
   }
   const folder = join(deps.root, 'node_modules', 'electron');
   const installed = () => {
@@ -63,10 +74,44 @@ export function electronBinary(deps) {
   const present = installed();
   if (present) return { ok: true, path: present };
   deps.log(`Fetching the Electron ${version} binary with the electron package's own installer (node_modules/electron/install.js); this happens once...`);
-  const status = deps.run(process.execPath, [join(folder, 'install.js')]);
+  // The installer's own output (on failure a stack of "at ..." lines) goes to a log file, not the terminal.
+  const { status, output } = deps.capture(process.execPath, [join(folder, 'install.js')]);
   const fetched = status === 0 ? installed() : null;
   if (fetched) return { ok: true, path: fetched };
-  return failed('Electron binary', status === 0 ? 'the installer ended without an executable' : `the installer failed (exit ${status}); Electron's release host may be unreachable`, 'npx install-electron --no   (or set ELECTRON_OVERRIDE_DIST_PATH to an unpacked Electron folder)');
+  const log = join(deps.root, INSTALL_LOG);
+  let kept;
+  try {
+    deps.writeLog(log, output);
+    kept = `its full output is in ${INSTALL_LOG}`;
+  } catch (error) {
+    kept = `its output could not be kept in ${INSTALL_LOG} (${firstErrorLine(error instanceof Error ? error.message : String(error))})`;
+  }
+  const reason = firstErrorLine(output);
+  const problem =
+    status === 0
+      ? `the installer ended without an executable; ${kept}`
+      : `the installer failed (exit ${status}${reason ? `: ${reason}` : ''}); Electron's release host may be unreachable; ${kept}`;
+  return failed('Electron binary', problem, `${INSTALL_ELECTRON}   (where Electron's release host, or a mirror named by ELECTRON_MIRROR, is reachable; or set ELECTRON_OVERRIDE_DIST_PATH to an unpacked Electron folder)`);
+}
+
+/** The command that fetches Electron's binary: the electron package's own installer, run in the project folder. */
+export const INSTALL_ELECTRON = 'node node_modules/electron/install.js';
+
+/** Where the installer's output is kept when it fails (relative to the project folder). */
+export const INSTALL_LOG = join('out', 'logs', 'electron-install.log');
+
+/**
+ * The line of a program's output that says what went wrong, for a one-line message: the first line
+ * naming an error (else the first line with text), never a stack frame ("at ..."), trimmed and cut
+ * to 200 characters; empty when the output has no such line.
+ */
+export function firstErrorLine(output) {
+  const lines = String(output)
+    .split(/\r?\n/)
+    .map((line) => line.trim())
+    .filter((line) => line !== '' && !/^at\s/.test(line) && !/^\.\.\.\s*\d+\s+more/.test(line) && !/^[{}\[\]]+,?$/.test(line));
+  const line = lines.find((text) => /error|fail/i.test(text) || /\bERR_|\bE[A-Z]{3,}\b/.test(text)) ?? lines[0] ?? '';
+  return line.length > 200 ? `${line.slice(0, 199)}…` : line;
 }
 
 /** The folder of our own that holds better-sqlite3 built for this Electron. */

@@ -9,8 +9,8 @@
  */
 import { extname, resolve } from 'node:path';
 import type { Command } from 'commander';
-import { evaluateDesign, parseConcept, PRELIMINARY_CAUTION, type UnitSystem } from '../../core';
-import type { StudyOptions } from '../report/studies';
+import { evaluateDesign, parseConcept, PRELIMINARY_CAUTION, type ProbabilityMap, type UnitSystem } from '../../core';
+import type { StudyInput, StudyOptions } from '../report/studies';
 import type { SetExitCode } from './io';
 import { EXIT_FAILURE, EXIT_OK, InputError } from './errors';
 import { ProjectReadFailure, readEvaluateInput } from './evaluate-input';
@@ -127,6 +127,24 @@ async function versionInfo(file: string, number: number) {
 
 /** Build and write the output; returns what to print. Throws InputError on bad input. */
 async function runReport(file: string, options: ReportOptions): Promise<string> {
+  const output = outputKind(file, options.out);
+  // The Monte Carlo's worker threads start first, to load while this thread reads and evaluates the concept.
+  const { reportProbabilityMap, startMonteCarloThreads } = await import('./monte-carlo-workers');
+  const threads = output.kind === 'csv' ? null : startMonteCarloThreads();
+  try {
+    return await reportWith(file, options, output, threads === null ? null : (input) => reportProbabilityMap(input, threads));
+  } finally {
+    threads?.close();
+  }
+}
+
+/** runReport once the output is known and the Monte Carlo's threads are starting (`monteCarlo`; null for the CSV, which has no studies). */
+async function reportWith(
+  file: string,
+  options: ReportOptions,
+  output: ReturnType<typeof outputKind>,
+  monteCarlo: ((input: StudyInput) => Promise<{ map: ProbabilityMap | null; ms: number }>) | null,
+): Promise<string> {
   // The report's parts load with this verb only, so the other verbs start without them.
   const { ChromiumUnavailable, findChromium, printPdf, svgToPng } = await import('../report/chromium');
   const { buildReport } = await import('../report/report');
@@ -134,7 +152,6 @@ async function runReport(file: string, options: ReportOptions): Promise<string> 
   const { reportDiagramSvg } = await import('../report/section-studies');
   const { runStudies } = await import('../report/studies');
   const { evaluationCsv } = await import('./evaluate-csv');
-  const output = outputKind(file, options.out);
   const extension = extname(output.target).toLowerCase();
   const system = unitSystem(file, options.units);
   const studyOptions: StudyOptions = { step: parseStep(file, options.step) };
@@ -162,15 +179,14 @@ async function runReport(file: string, options: ReportOptions): Promise<string> 
   if (unclosed) throw new InputError(unclosed.message, file, unclosed.field);
 
   let content: string | Buffer;
-  if (output.kind === 'csv') {
+  if (output.kind === 'csv' || monteCarlo === null) {
     content = markCsv(evaluationCsv({ name, evaluation, system }));
   } else {
     const parsed = parseConcept(input.concept);
     const uncertainty = parsed.ok ? parsed.uncertainty : undefined;
     const studyInput = { design, concept: input.concept, evaluation, system, ...(uncertainty ? { uncertainty } : {}), options: studyOptions };
     // The Monte Carlo on every free core (the same map as one core gives); the other studies here.
-    const { reportProbabilityMap } = await import('./monte-carlo-workers');
-    const studies = runStudies(studyInput, await reportProbabilityMap(studyInput));
+    const studies = runStudies(studyInput, await monteCarlo(studyInput));
     if (output.kind === 'svg' || output.kind === 'png') {
       const svg = reportDiagramSvg({ design, evaluation, system, studies });
       content = output.kind === 'svg' ? markSvg(svg) : markPng(await svgToPng(svg, STUDY_DIAGRAM_SIZE, { binary: chromium as string }));

@@ -54,24 +54,37 @@ export interface BalancedFieldTerms {
  * dG = gamma_2 - gamma_min; x is T/W (jets) or P/W [m/s] (propellers) of the actual weight at the field.
  */
 export function balancedFieldTerms(r: BalancedFieldLengthRequirement, c: FlightCondition, engines: number, w: number, x: number): BalancedFieldTerms {
+  return balancedFieldTermsAt(r, c, engines, w)(x);
+}
+
+/**
+ * balancedFieldTerms at one wing loading w as a function of x alone: what does not depend on x
+ * (stall speed, C_L2, the drag term at V2, U, gamma_min, the ground and constant terms) is worked
+ * out once, so a root search over x repeats only the few operations that take x.
+ */
+export function balancedFieldTermsAt(r: BalancedFieldLengthRequirement, c: FlightCondition, engines: number, w: number): (x: number) => BalancedFieldTerms {
   const { polar, densityKgM3: rho } = c;
   const weightLoading = c.beta * w;
   const vs = stallSpeed(weightLoading, rho, polar.clMax);
   const v2 = r.v2SpeedFactor * vs;
   const cl2 = polar.clMax / (r.v2SpeedFactor * r.v2SpeedFactor);
   const running = (engines - 1) / engines;
-  const thrustAtV2 = c.propeller ? (c.propellerEfficiency * x) / v2 : x;
-  const climbGradient = running * thrustAtV2 - dragCoefficient(polar, cl2) / cl2;
-  const averageThrustToWeight = c.propeller ? (c.propellerEfficiency * x) / (0.7 * LIFTOFF_SPEED_FACTOR * vs) : r.averageThrustFraction * x;
+  const dragAtV2 = dragCoefficient(polar, cl2) / cl2;
+  const runSpeed = 0.7 * LIFTOFF_SPEED_FACTOR * vs;
   const u = 0.01 * polar.clMax + 0.02;
-  const dG = climbGradient - minimumSecondSegmentGradient(engines);
-  const excess = averageThrustToWeight - u;
-  // With a climb (gamma_2 > 0) and gamma_min at most 0.03, 1 + 2.3 dG stays above 0.93: the factor never changes sign.
-  const lengthM =
-    climbGradient > 0 && excess > 0
-      ? (0.863 / (1 + 2.3 * dG)) * (weightLoading / (rho * G0 * cl2) + r.obstacleHeightM) * (1 / excess + 2.7) + CONSTANT_TERM_M / Math.sqrt(rho / RHO0)
-      : Infinity;
-  return { climbGradient, averageThrustToWeight, u, lengthM };
+  const minimumGradient = minimumSecondSegmentGradient(engines);
+  const groundTerm = weightLoading / (rho * G0 * cl2) + r.obstacleHeightM;
+  const constantTerm = CONSTANT_TERM_M / Math.sqrt(rho / RHO0);
+  return (x: number): BalancedFieldTerms => {
+    const thrustAtV2 = c.propeller ? (c.propellerEfficiency * x) / v2 : x;
+    const climbGradient = running * thrustAtV2 - dragAtV2;
+    const averageThrustToWeight = c.propeller ? (c.propellerEfficiency * x) / runSpeed : r.averageThrustFraction * x;
+    const dG = climbGradient - minimumGradient;
+    const excess = averageThrustToWeight - u;
+    // With a climb (gamma_2 > 0) and gamma_min at most 0.03, 1 + 2.3 dG stays above 0.93: the factor never changes sign.
+    const lengthM = climbGradient > 0 && excess > 0 ? (0.863 / (1 + 2.3 * dG)) * groundTerm * (1 / excess + 2.7) + constantTerm : Infinity;
+    return { climbGradient, averageThrustToWeight, u, lengthM };
+  };
 }
 
 /** The terms at wing loading w with the sea-level loading given (T_SL/W_TO or P_SL/W_TO). */
@@ -90,7 +103,8 @@ export function balancedFieldLengthBoundary(r: BalancedFieldLengthRequirement, a
     required(w: number): number {
       if (!(w > 0) || !(c.alpha > 0) || !(engines >= 2)) return NaN;
       const scale = c.propeller ? stallSpeed(c.beta * w, c.densityKgM3, c.polar.clMax) / c.propellerEfficiency : 1;
-      const x = fallingRoot((t) => balancedFieldTerms(r, c, engines, w, t).lengthM - r.distanceM, 1e-6 * scale, 0.3 * scale, 50 * scale);
+      const terms = balancedFieldTermsAt(r, c, engines, w);
+      const x = fallingRoot((t) => terms(t).lengthM - r.distanceM, 1e-6 * scale, 0.3 * scale, 50 * scale);
       return (c.beta / c.alpha) * x;
     },
     speedAt: (w: number): number => (w > 0 ? r.v2SpeedFactor * stallSpeed(c.beta * w, c.densityKgM3, c.polar.clMax) : NaN),

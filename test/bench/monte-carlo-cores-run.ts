@@ -5,6 +5,7 @@
  * demo with typical ranges, on 1 and 2 threads, interleaved run by run;
  * medians with spread, and whether the maps are bit-identical.
  */
+import { readFileSync } from 'node:fs';
 import { loadavg, availableParallelism } from 'node:os';
 import { DEMO_CONCEPTS, evaluateDesign, parseConcept } from '../../core';
 import type { StudyInput } from '../../app/report/studies';
@@ -25,8 +26,21 @@ function stats(xs: number[]) {
 }
 const fmt = (x: { median: number; p10: number; p90: number }) => `${Math.round(x.median)} ms (${Math.round(x.p10)}-${Math.round(x.p90)})`;
 
+/** This thread's own CPU time in ms (Linux); NaN elsewhere. */
+function threadCpuMs(): number {
+  try {
+    return Number(readFileSync('/proc/thread-self/schedstat', 'utf8').split(' ')[0]) / 1e6;
+  } catch {
+    return NaN;
+  }
+}
+
 const reference = (await reportProbabilityMap(input, 1)).map!; // warm-up, and the one-thread map
 const times: Record<number, number[]> = { 1: [], 2: [] };
+// Each thread's own CPU time over a run: on a machine busy with other work, wall time says little, but
+// with two free cores each thread would run its CPU time in wall time, side by side. The estimate:
+// one thread's CPU over the larger of the two threads' CPU (the worker's from its very start).
+const ownCpu: Record<number, number[]> = { 1: [], 2: [] };
 const cpu: Record<number, number[]> = { 1: [], 2: [] };
 let identical = true;
 // Where the two-thread runs spend their time, per run: the worker's start (asked to code loaded), its
@@ -37,12 +51,16 @@ const note = (key: string, value: number) => Number.isFinite(value) && (breakdow
 for (let r = 0; r < RUNS; r++) {
   for (const workers of r % 2 === 0 ? [1, 2] : [2, 1]) {
     const start = performance.now();
+    const mainCpu = threadCpuMs();
     const used = process.cpuUsage(); // every thread of the process
     const timings: ThreadTiming[] = [];
     const { map } = await reportProbabilityMap(input, workers, timings);
     const end = performance.timeOrigin + performance.now();
     times[workers].push(performance.now() - start);
+    const mainSpent = threadCpuMs() - mainCpu;
     const main = timings.find((t) => t.thread === 'main');
+    const workerCpu = timings.filter((t) => t.thread !== 'main').map((t) => t.cpuAtDone);
+    ownCpu[workers].push(Math.max(mainSpent, ...workerCpu));
     for (const t of timings.filter((t) => t.thread !== 'main')) {
       note('worker: asked to loaded, wall ms', t.loadedAt - t.askedAt);
       note('worker: design and ranges, wall ms', t.readyAt - t.loadedAt);
@@ -67,6 +85,11 @@ console.log(`Monte Carlo, 10,000 samples, business-jet demo, typical ranges; wal
 console.log(`  cores ${availableParallelism()}; load average ${loadavg().map((x) => x.toFixed(2)).join(' ')}; threads chosen for this load: ${monteCarloWorkers()}`);
 console.log(`  1 thread    wall ${fmt(one)}   CPU ${fmt(stats(cpu[1]))}`);
 console.log(`  2 threads   wall ${fmt(two)}   CPU ${fmt(stats(cpu[2]))}   speed-up ${(one.median / two.median).toFixed(2)}x`);
+const own1 = stats(ownCpu[1]);
+const own2 = stats(ownCpu[2]);
+if (Number.isFinite(own1.median) && Number.isFinite(own2.median)) {
+  console.log(`  estimate for two free cores from each thread's own CPU time: 1 thread ${fmt(own1)}, 2 threads (the busier thread) ${fmt(own2)}: ${(own1.median / own2.median).toFixed(2)}x (an estimate, not a measurement: it leaves out waits and the worker's start before its first CPU)`);
+}
 console.log('  two threads, median (10th-90th percentile):');
 for (const [key, values] of Object.entries(breakdown)) console.log(`    ${key.padEnd(62)} ${fmt(stats(values)).replace(' ms', '')}`);
 console.log(`  maps bit-identical for the seed on 1 and 2 threads: ${identical ? 'yes' : 'NO'}`);

@@ -1,18 +1,23 @@
 #!/usr/bin/env node
 // The Monte Carlo on one and two threads: bundles monte-carlo-cores-run.ts
-// with esbuild as the command line is built (split, so the worker module is
-// a chunk of its own that a worker thread can load; minified) into a temporary folder,
-// then runs it in Node. Run: node test/bench/monte-carlo-cores.js
+// with esbuild as the command line is built (minified, with the worker
+// thread's own file beside it, built by app/build-cli.js's
+// buildMonteCarloThread) into a temporary folder, then runs it in Node.
+// Run: node test/bench/monte-carlo-cores.js
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { build } from 'esbuild';
+import { buildMonteCarloThread } from '../../app/build-cli.js';
 
 const root = new URL('../..', import.meta.url).pathname;
 const outdir = mkdtempSync(join(tmpdir(), 'loftpoint-mc-bench-'));
 try {
+  const thread = await buildMonteCarloThread(root, outdir);
+  for (const file of thread.outputFiles) writeFileSync(file.path, file.contents);
   await build({
+    define: thread.define,
     absWorkingDir: root,
     entryPoints: { run: 'test/bench/monte-carlo-cores-run.ts' },
     outdir,

@@ -22,7 +22,7 @@ function desktopPieces(): { executable?: string; binding?: string; reason?: stri
   const deps = systemDeps({ run: () => 1, log: () => {} });
   const override = process.env.ELECTRON_OVERRIDE_DIST_PATH;
   const installed = join(root, 'node_modules', 'electron', 'path.txt');
-  if (!override && !existsSync(installed)) return { reason: 'no Electron binary on this machine (run `npx install-electron --no` where Electron’s release host is reachable, or set ELECTRON_OVERRIDE_DIST_PATH)' };
+  if (!override && !existsSync(installed)) return { reason: 'no Electron binary on this machine (run `node node_modules/electron/install.js` where Electron’s release host is reachable, or set ELECTRON_OVERRIDE_DIST_PATH)' };
   const found = electronBinary(deps);
   if (!found.ok) return { reason: `no Electron binary: ${found.problem}` };
   const binding = process.env.LOFTPOINT_SQLITE_BINDING ?? join(nativeFolder(deps), 'better_sqlite3.node');

@@ -29,6 +29,8 @@ function deps(overrides: Record<string, unknown> = {}) {
       exists: () => false,
       log: (line: string) => void logged.push(line),
       run: (command: string, args: string[]) => (ran.push({ command, args }), 1),
+      capture: (command: string, args: string[]) => (ran.push({ command, args }), { status: 1, output: '' }),
+      writeLog: () => {},
       ...overrides,
     },
   };
@@ -48,10 +50,10 @@ describe('step 1: the Electron binary', () => {
     const installed = new Set<string>();
     const t = withRoot({
       exists: (path: string) => installed.has(path),
-      run: (command: string, args: string[]) => {
+      capture: (command: string, args: string[]) => {
         t.ran.push({ command, args });
         installed.add(join(root, 'node_modules/electron/path.txt')).add(join(root, 'node_modules/electron/dist/electron'));
-        return 0;
+        return { status: 0, output: '' };
       },
     });
     expect(steps.electronBinary(t.deps)).toEqual({ ok: true, path: join(root, 'node_modules/electron/dist/electron') });
@@ -62,11 +64,67 @@ describe('step 1: the Electron binary', () => {
   it('names the failed step and the command that fixes it when the installer fails', () => {
     const failure = steps.electronBinary(withRoot({}).deps);
     expect(failure).toMatchObject({ ok: false, step: 'Electron binary' });
-    expect(failure.fix).toContain('npx install-electron');
+    expect(failure.fix).toContain('node node_modules/electron/install.js');
     const message = steps.fallbackMessage(failure);
     expect(message).toMatch(/step "Electron binary" failed/);
-    expect(message).toMatch(/To fix it: npx install-electron/);
+    expect(message).toMatch(/To fix it: node node_modules\/electron\/install\.js/);
     expect(message).toMatch(/Starting browser mode instead/);
+  });
+
+  // What the electron package's installer printed on a machine with no route to Electron's release
+  // host (Node 20's fetch; paths shortened): the error, then its stack.
+  const offlineOutput = [
+    'TypeError: fetch failed',
+    '    at node:internal/deps/undici/undici:14976:13',
+    '    at process.processTicksAndRejections (node:internal/process/task_queues:95:5)',
+    '    at async FetchDownloader.download (file:///app/node_modules/@electron/get/dist/FetchDownloader.js:46:30)',
+    '    at async downloadArtifact (file:///app/node_modules/@electron/get/dist/index.js:154:12)',
+    '',
+  ].join('\n');
+
+  it('keeps the installer’s output out of the terminal: its first error line is the reason, the whole of it goes to a log under out/', () => {
+    const logs: Array<[string, string]> = [];
+    const t = withRoot({
+      capture: (command: string, args: string[]) => (t.ran.push({ command, args }), { status: 1, output: offlineOutput }),
+      writeLog: (file: string, text: string) => void logs.push([file, text]),
+    });
+    const failure = steps.electronBinary(t.deps);
+    expect(t.ran).toEqual([{ command: process.execPath, args: [join(root, 'node_modules/electron/install.js')] }]);
+    expect(failure).toMatchObject({ ok: false, step: 'Electron binary' });
+    expect(failure.problem).toContain('the installer failed (exit 1: TypeError: fetch failed)');
+    expect(failure.problem).toContain(join('out', 'logs', 'electron-install.log'));
+    expect(logs).toEqual([[join(root, 'out', 'logs', 'electron-install.log'), offlineOutput]]);
+    const message = steps.fallbackMessage(failure);
+    expect(message).not.toMatch(/^\s*at\s/m);
+    expect(message).not.toContain('undici');
+    expect(message.split('\n')).toHaveLength(3);
+    // Nothing of the installer reached the terminal: the only line logged is our own.
+    expect(t.logged).toHaveLength(1);
+    expect(t.logged[0]).toMatch(/^Fetching the Electron /);
+  });
+
+  it('says so, still in one line, when the log cannot be written', () => {
+    const t = withRoot({
+      capture: () => ({ status: 1, output: offlineOutput }),
+      writeLog: () => {
+        throw new Error("EACCES: permission denied, open '/opt/app/out/logs/electron-install.log'");
+      },
+    });
+    const failure = steps.electronBinary(t.deps);
+    expect(failure.problem).toContain('TypeError: fetch failed');
+    expect(failure.problem).toMatch(/could not be kept in out\/logs\/electron-install\.log \(EACCES: permission denied/);
+  });
+
+  it('takes the line naming the error from a program’s output, never a stack frame', () => {
+    expect(steps.firstErrorLine(offlineOutput)).toBe('TypeError: fetch failed');
+    // Progress first, then the error: the error is the reason.
+    expect(steps.firstErrorLine('Downloading electron-v45.zip\nHTTPError: Response code 404 (Not Found)\n    at Request.<anonymous> (x.js:1:1)\n')).toBe('HTTPError: Response code 404 (Not Found)');
+    // A system error code without the word "error" (Node's getaddrinfo).
+    expect(steps.firstErrorLine('getaddrinfo ENOTFOUND github.com\n    at GetAddrInfoReqWrap.onlookup (node:dns:1:1)')).toBe('getaddrinfo ENOTFOUND github.com');
+    // Only a stack, or nothing: no reason rather than a frame.
+    expect(steps.firstErrorLine('    at a (b.js:1:1)\n    at c (d.js:2:2)\n')).toBe('');
+    expect(steps.firstErrorLine('')).toBe('');
+    expect(steps.firstErrorLine(`Error: ${'x'.repeat(300)}`)).toHaveLength(200);
   });
 
   it('says so when ELECTRON_OVERRIDE_DIST_PATH has no executable', () => {

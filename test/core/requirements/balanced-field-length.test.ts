@@ -34,6 +34,27 @@ describe('balanced field length (Torenbeek, as given by Raymer)', () => {
     assertRelative(t.lengthM, feet * 0.3048, 1e-4);
   });
 
+  it('matches the formula as printed for a propeller twin, thrust from power at V2 and over the run (within 0.01 %)', () => {
+    // Propeller aircraft (core/methods.md): T = eta_p P / V at V2 = 1.2 V_s,TO, and over the run
+    // T_av = eta_p P / (0.7 V_LOF), V_LOF = 1.1 V_s,TO, eta_p 0.55. Sea level ISA as above; stall speed
+    // V_s = sqrt(2 (W/S) / (rho C_Lmax)).
+    const ac = aircraft({ kind: 'turboprop', engines: 2, aspectRatio: 9, increments: { takeoff: { cd0Increment: 0.02, oswaldEfficiency: 0.76, clMax: 1.9 } } });
+    const polar = polarOf(ac, 'takeoff') as Polar;
+    const w = 2200;
+    const powerLoading = 30; // P/W, W/N = m/s: enough to climb on one engine (gamma_2 about 0.06)
+    const t = balancedFieldAt(balancedField(1100), ac, w, powerLoading);
+    const vsFps = Math.sqrt((2 * (w / 47.880259)) / (0.0023769 * 1.9));
+    const powerFtPerS = powerLoading / 0.3048;
+    const cl2 = 1.9 / 1.44;
+    const gamma2 = (0.5 * 0.55 * powerFtPerS) / (1.2 * vsFps) - dragCoefficient(polar, cl2) / cl2;
+    assertRelative(t.climbGradient, gamma2, 1e-4);
+    expect(gamma2).toBeGreaterThan(0.03);
+    const tavW = (0.55 * powerFtPerS) / (0.7 * 1.1 * vsFps);
+    assertRelative(t.averageThrustToWeight, tavW, 1e-4);
+    const feet = bflFeet({ wPsf: w / 47.880259, rhoSlug: 0.0023769, cl2, hFt: 35, tavW, u: 0.01 * 1.9 + 0.02, dG: gamma2 - 0.024, sigma: 1 });
+    assertRelative(t.lengthM, feet * 0.3048, 1e-4);
+  });
+
   it('is at or above the all-engines take-off distance over 35 ft for the same aircraft', () => {
     // An engine failure can only lengthen the field: the loading for a BFL of D is at least the all-engines one for D.
     for (const engines of [2, 3, 4]) {
