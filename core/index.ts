@@ -15,6 +15,7 @@ export {
   toDisplay,
   fromDisplay,
   formatQuantity,
+  fixedDecimals,
   formatMargin,
   UNIT_SYSTEMS,
   UNIT_SYSTEM_TITLES,

@@ -50,12 +50,15 @@ export function placeLabels(data: ChartData, scales: ChartScales, options: Label
   );
   // Only the segments near a box are looked at (the same ones a scan of all of them would find).
   const grid = segmentGrid(segments);
-  const crossings = (box: Box, ownId: string | null): number => {
+  // Counting stops once it reaches `enough` (a box that already costs that much is not the best one).
+  const crossings = (box: Box, ownId: string | null, enough = Infinity): number => {
     let count = 0;
+    for (const [id, px] of limitXs) if (id !== ownId && px > box.x0 && px < box.x1) count += 6;
+    if (count >= enough) return count;
     grid.near(box, (s) => {
       if (segmentHitsBox(s.a, s.b, box)) count += s.id === ownId ? 2 : 3;
+      return count >= enough;
     });
-    for (const [id, px] of limitXs) if (id !== ownId && px > box.x0 && px < box.x1) count += 6;
     return count;
   };
 
@@ -65,7 +68,7 @@ export function placeLabels(data: ChartData, scales: ChartScales, options: Label
   placed.push(...markers);
 
   const notes = (options.notes ?? []).map((note) => {
-    const best = bestOf(noteCandidates(note, scales, fontSize), scales.plot, placed, (box) => crossings(box, null));
+    const best = bestOf(noteCandidates(note, scales, fontSize), scales.plot, placed, (box, enough) => crossings(box, null, enough));
     placed.push(best.box);
     return best;
   });
@@ -79,7 +82,7 @@ export function placeLabels(data: ChartData, scales: ChartScales, options: Label
       boundaries.push(offPlot(curve.id, text, curve.colour, scales.plot, fontSize));
       continue;
     }
-    const best = bestOf(candidates, scales.plot, placed, (box) => crossings(box, curve.id));
+    const best = bestOf(candidates, scales.plot, placed, (box, enough) => crossings(box, curve.id, enough));
     placed.push(best.box);
     boundaries.push(best);
   }
@@ -91,22 +94,31 @@ export function placeLabels(data: ChartData, scales: ChartScales, options: Label
       continue;
     }
     const candidates = limitCandidates(limit.id, text, limit.colour, px, scales.plot, fontSize);
-    const best = bestOf(candidates, scales.plot, placed, (box) => crossings(box, limit.id));
+    const best = bestOf(candidates, scales.plot, placed, (box, enough) => crossings(box, limit.id, enough));
     placed.push(best.box);
     boundaries.push(best);
   }
   return { boundaries, notes };
 }
 
-/** The candidate that fits the plot, avoids placed boxes and hides the fewest lines. */
-function bestOf(candidates: Candidate[], plot: PlotArea, placed: Box[], cost: (box: Box) => number): LabelPlacement {
+/**
+ * The candidate that fits the plot, avoids placed boxes and hides the fewest
+ * lines (the first of equals). `cost` is never negative and may stop counting
+ * once it reaches `enough`: a candidate whose overlaps and bias alone already
+ * score no better than the best so far is not costed at all.
+ */
+function bestOf(candidates: Candidate[], plot: PlotArea, placed: Box[], cost: (box: Box, enough: number) => number): LabelPlacement {
   const inside = candidates.filter((candidate) => boxInside(candidate.box, plot));
   const pool = inside.length > 0 ? inside : candidates;
   let best: Candidate | null = null;
   let bestScore = Infinity;
   for (const candidate of pool) {
-    const overlaps = placed.filter((box) => boxesOverlap(box, candidate.box)).length;
-    const score = overlaps * 1000 + cost(candidate.box) + candidate.bias;
+    let overlaps = 0;
+    for (const box of placed) if (boxesOverlap(box, candidate.box)) overlaps += 1;
+    const fixed = overlaps * 1000 + candidate.bias;
+    if (fixed >= bestScore) continue;
+    // Half a line more than the difference: stopping there still leaves this candidate worse whatever the rounding.
+    const score = fixed + cost(candidate.box, bestScore - fixed + 0.5);
     if (score < bestScore) {
       bestScore = score;
       best = candidate;

@@ -23,8 +23,11 @@ const CELL = 32;
 const MOST_CELLS = 4096;
 
 export interface SegmentGrid {
-  /** Calls `visit` once for each segment whose extent touches `box` (edges included). */
-  near(box: Box, visit: (segment: Segment) => void): void;
+  /**
+   * Calls `visit` once for each segment whose extent touches `box` (edges
+   * included), until `visit` answers true (enough seen: the rest are skipped).
+   */
+  near(box: Box, visit: (segment: Segment) => boolean | void): void;
 }
 
 const cell = (value: number) => Math.floor(value / CELL);
@@ -55,14 +58,15 @@ export function segmentGrid(segments: readonly Segment[]): SegmentGrid {
     near(box, visit) {
       query += 1;
       const touches = (s: Segment) => !(s.x1 < box.x0 || s.x0 > box.x1 || s.y1 < box.y0 || s.y0 > box.y1);
-      for (const index of everywhere) if (touches(segments[index])) visit(segments[index]);
+      for (const index of everywhere) if (touches(segments[index]) && visit(segments[index])) return;
       const [cx0, cx1, cy0, cy1] = [cell(box.x0), cell(box.x1), cell(box.y0), cell(box.y1)];
       const count = (cx1 - cx0 + 1) * (cy1 - cy0 + 1);
       if (!Number.isFinite(count) || count > MOST_CELLS) {
         // A box with no finite extent, or one larger than the plot: every segment, as a full scan would.
-        segments.forEach((s, index) => {
-          if (seen[index] !== query && !everywhere.includes(index) && touches(s)) visit(s);
-        });
+        for (let index = 0; index < segments.length; index += 1) {
+          const s = segments[index];
+          if (seen[index] !== query && !everywhere.includes(index) && touches(s) && visit(s)) return;
+        }
         return;
       }
       for (let cx = cx0; cx <= cx1; cx += 1) {
@@ -72,7 +76,7 @@ export function segmentGrid(segments: readonly Segment[]): SegmentGrid {
           for (const index of list) {
             if (seen[index] === query) continue;
             seen[index] = query;
-            if (touches(segments[index])) visit(segments[index]);
+            if (touches(segments[index]) && visit(segments[index])) return;
           }
         }
       }

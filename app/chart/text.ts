@@ -3,7 +3,7 @@
  * names and labels go into markup), shortening for tight spots, and display
  * numbers with the same units and digits as the rest of Loftpoint.
  */
-import { displayUnit, type DisplayQuantity, type UnitSystem } from '../../core/units/display';
+import { displayUnit, fixedDecimals, type DisplayQuantity, type UnitSystem } from '../../core/units/display';
 
 // Characters XML 1.0 does not allow at all (C0 controls other than tab, LF, CR; lone surrogates; U+FFFE/U+FFFF).
 const NOT_XML = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g;
@@ -29,7 +29,7 @@ export function shorten(text: string, max: number): string {
 export function formatDisplayed(value: number, quantity: DisplayQuantity, system: UnitSystem): string {
   if (!Number.isFinite(value)) return '—';
   const { unit, digits } = displayUnit(quantity, system);
-  const shown = value.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+  const shown = fixedDecimals(value, digits);
   return unit ? `${shown} ${unit}` : shown;
 }
 

@@ -15,6 +15,7 @@ import { chromiumPrinter } from './print';
 import { startBrowserServer, type BrowserServer, type PageStep } from './server';
 import { rendererFolders } from './static-files';
 import { createLaunchToken } from './token';
+import { makeProjectOnWorker, singleFileBuild, type SingleFileBuild } from './new-project-worker';
 
 const PROJECT_ROOT = fileURLToPath(new URL('../..', import.meta.url));
 
@@ -24,12 +25,20 @@ export interface LaunchOptions {
   project?: string;
   /** Folder of the built page; default out/renderer (or dist/renderer). */
   rendererDir?: string;
+  /**
+   * Where a new project is made on a worker thread, from the moment the server listens: the
+   * single-file command line this runs from (default), or null to make it on this thread once
+   * the page is on its way.
+   */
+  workerBuild?: SingleFileBuild | null;
 }
 
 export interface BrowserMode {
   server: BrowserServer;
   project: ProjectInfo;
   created: boolean;
+  /** True when the new project was made on a worker thread. */
+  madeOnWorker: boolean;
   close(): Promise<void>;
 }
 
@@ -113,10 +122,17 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
   }
   onListening(server.url);
   if (!begun) moment ??= setTimeout(begin, OPEN_PROJECT_AFTER_MS);
+  const workerBuild = options.workerBuild === undefined ? singleFileBuild() : options.workerBuild;
+  let madeOnWorker = false;
   let opened: Awaited<ReturnType<typeof openOrCreateProject>>;
   try {
-    // An existing project opens at once (a file that is not one is reported without delay); a new one waits for its moment.
-    opened = await openOrCreateProject(service, options.project, dataFolder, { beforeCreating: () => pageLoading });
+    // An existing project opens at once (a file that is not one is reported without delay). A new one is made
+    // on a worker thread at once, while this thread serves the page; or, where there is no worker, here once
+    // the page is on its way (and so too when the worker did not make it, with this thread's own error).
+    opened = await openOrCreateProject(service, options.project, dataFolder, {
+      beforeCreating: () => pageLoading,
+      ...(workerBuild ? { makeElsewhere: async (file: string, name: string) => (madeOnWorker = await makeProjectOnWorker(workerBuild, file, name)) } : {}),
+    });
   } catch (error) {
     opened = { ok: false, error: { code: 'internal', message: error instanceof Error ? error.message.split('\n')[0] : String(error) } };
   }
@@ -132,6 +148,7 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
     server,
     project: opened.value.info,
     created: opened.value.created,
+    madeOnWorker,
     close: async () => {
       await server.close();
       await invokeService(service, 'closeProject', {});

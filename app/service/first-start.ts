@@ -55,6 +55,16 @@ async function evaluateDemosAhead(): Promise<void> {
   await new Promise((resolveTurn) => setImmediate(resolveTurn));
 }
 
+export interface OpenOrCreateOptions {
+  /** Waited for before a new project is made here (browser mode: until the page is on its way). */
+  beforeCreating?: () => Promise<unknown>;
+  /**
+   * Makes the new project elsewhere (browser mode: on a worker thread), resolving true once the
+   * file is there whole; it is then opened. On false the project is made here, as without it.
+   */
+  makeElsewhere?: (file: string, name: string) => Promise<boolean>;
+}
+
 /**
  * Opens `file`, or creates it with the demo concepts when it does not exist
  * (after `beforeCreating`, when given). With no file, the first-start project
@@ -64,7 +74,7 @@ export async function openOrCreateProject(
   service: ServiceHandlers,
   file: string | undefined,
   dataFolder: string,
-  options: { beforeCreating?: () => Promise<unknown> } = {},
+  options: OpenOrCreateOptions = {},
 ): Promise<ServiceResult<OpenedProject>> {
   const target = projectTarget(file, dataFolder);
   if (existsSync(target)) {
@@ -73,6 +83,10 @@ export async function openOrCreateProject(
   }
   if (!file) mkdirSync(dataFolder, { recursive: true });
   const name = file ? basename(target, extname(target)) || FIRST_PROJECT_NAME : FIRST_PROJECT_NAME;
+  if (options.makeElsewhere && (await options.makeElsewhere(target, name))) {
+    const opened = await invokeService(service, 'openProject', { file: target });
+    return opened.ok ? { ok: true, value: { info: opened.value, created: true } } : opened;
+  }
   // A new project waits for its moment (browser mode: once the page is on its way), then evaluates the demos.
   await options.beforeCreating?.();
   await evaluateDemosAhead();

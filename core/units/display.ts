@@ -98,6 +98,20 @@ export function fromDisplay(value: number, quantity: DisplayQuantity, system: Un
 }
 
 /**
+ * US-English number formats by number of decimals (0 to 6), each built once:
+ * `toLocaleString` with options builds a new one on every call (about 60
+ * times slower), and a window shows hundreds of numbers at once.
+ */
+const FIXED_FORMATS: Intl.NumberFormat[] = [];
+
+/** `number` with exactly `decimals` decimals (0 to 6) and thousands separators: "12,345.68". */
+export function fixedDecimals(number: number, decimals: number): string {
+  const places = Math.min(6, Math.max(0, Math.round(decimals)));
+  const format = (FIXED_FORMATS[places] ??= new Intl.NumberFormat('en-US', { minimumFractionDigits: places, maximumFractionDigits: places }));
+  return format.format(number);
+}
+
+/**
  * "812 N/m²", "16.9 lb/ft²", at least two significant figures ("0.80 kW");
  * never "NaN": a value that is not finite reads "—".
  */
@@ -108,10 +122,7 @@ export function formatQuantity(value: number | null | undefined, quantity: Displ
   if (system === 'kt-ft') return workingText(number, quantity, unit);
   // At least two significant figures, so a small aircraft's 1.07 hp reads "1.1 hp", not "1 hp".
   const decimals = number === 0 ? digits : Math.min(6, Math.max(digits, 1 - Math.floor(Math.log10(Math.abs(number)))));
-  const shown = number.toLocaleString('en-US', {
-    minimumFractionDigits: decimals,
-    maximumFractionDigits: decimals,
-  });
+  const shown = fixedDecimals(number, decimals);
   return unit ? `${shown} ${unit}` : shown;
 }
 
@@ -132,7 +143,7 @@ function workingText(number: number, quantity: DisplayQuantity, unit: string): s
       return `FL${String(Math.round(hundreds)).padStart(3, '0')}`;
     }
   }
-  const shown = WHOLE.has(quantity) && Math.abs(number) >= 10 ? Math.round(number).toLocaleString('en-US') : threeFigures(number);
+  const shown = WHOLE.has(quantity) && Math.abs(number) >= 10 ? fixedDecimals(Math.round(number), 0) : threeFigures(number);
   return unit ? `${shown} ${unit}` : shown;
 }
 
@@ -142,7 +153,7 @@ export function threeFigures(number: number): string {
   // Decimals from the rounded value: 9.996 rounds to 10.0, which has one decimal, not two.
   const rounded = Number(number.toPrecision(3));
   const decimals = Math.max(0, 2 - Math.floor(Math.log10(Math.abs(rounded))));
-  return rounded.toLocaleString('en-US', { minimumFractionDigits: Math.min(decimals, 6), maximumFractionDigits: Math.min(decimals, 6) });
+  return fixedDecimals(rounded, Math.min(decimals, 6));
 }
 
 /** "+12.3 %" for a relative margin; "—" when not finite. */

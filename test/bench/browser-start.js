@@ -6,7 +6,10 @@
 // way, serving a page that draws one SVG path. Chromium is started once
 // beforehand and is not in either time. Run: node test/bench/browser-start.js
 //
-// Target: under 1 s from launch to the first diagram.
+// Target: under 1 s from launch to the first diagram. A new project is made on
+// a worker thread while the page loads (app/server/new-project-worker.ts); the
+// window draws the diagram first and fills its side panels in the next frame,
+// which the breakdown shows as "window ready".
 import { spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { loadavg, tmpdir } from 'node:os';
@@ -25,17 +28,17 @@ server.listen(0, '127.0.0.1', () => console.log('http://127.0.0.1:' + server.add
 process.on('SIGTERM', () => server.close(() => process.exit(0)));
 `;
 
-// Put in the page before its own script: when the window is first mounted and when the first curve appears.
+// Put in the page before its own script: when the window is first mounted, when the first curve appears, and
+// when the window reads as ready (the side panels filled, which the window does in the frame after the diagram).
 const PAGE_MARKS = `
-window.__startMarks = { mounted: null, curve: null };
+window.__startMarks = { mounted: null, curve: null, ready: null };
 new MutationObserver((changes, observer) => {
   const marks = window.__startMarks;
   if (marks.mounted === null && document.getElementById('app')?.firstElementChild) marks.mounted = performance.now();
-  if (document.querySelector('[data-testid^="curve-"]')) {
-    marks.curve = performance.now();
-    observer.disconnect();
-  }
-}).observe(document, { childList: true, subtree: true });
+  if (marks.curve === null && document.querySelector('[data-testid^="curve-"]')) marks.curve = performance.now();
+  if (marks.ready === null && document.querySelector('[data-testid="window"][data-ready="true"]')) marks.ready = performance.now();
+  if (marks.curve !== null && marks.ready !== null) observer.disconnect();
+}).observe(document, { childList: true, subtree: true, attributes: true, attributeFilter: ['data-ready'] });
 `;
 
 /** Where the time went in one launch, in ms from launch: read from the page's own clock and resource timings. */
@@ -57,6 +60,7 @@ async function pageBreakdown(page, launchedAt, addressAt) {
     firstApi: apiBefore.length ? at(apiBefore[0].start) : null,
     lastApi: apiBefore.length ? at(apiBefore[apiBefore.length - 1].end) : null,
     curve: at(seen.curve),
+    ready: at(seen.ready),
     calls: apiBefore.map((call) => `${call.method} ${Math.round(call.end - call.start)}`),
   };
 }
@@ -82,7 +86,11 @@ async function launchToDiagram(browser, args, env, breakdown) {
     await page.goto(url);
     await page.locator('[data-testid^="curve-"]').first().waitFor({ state: 'visible', timeout: 30_000 });
     const ms = performance.now() - start;
-    if (breakdown) breakdown.push(await pageBreakdown(page, launchedAt, addressAt));
+    if (breakdown) {
+      // Outside the timing: the whole window, side panels included.
+      await page.locator('[data-testid="window"][data-ready="true"]').waitFor({ state: 'attached', timeout: 30_000 });
+      breakdown.push(await pageBreakdown(page, launchedAt, addressAt));
+    }
     await page.close();
     return ms;
   } finally {
@@ -136,6 +144,7 @@ try {
   console.log('  where the time went (median ms from launch, each step on its own):');
   console.log(`    address printed ${median('address')}   page received ${median('html')}   page script received ${median('script')}   window mounted ${median('mounted')}`);
   console.log(`    first API call sent ${median('firstApi')}   last API answer before the curve ${median('lastApi')}   first curve in the page ${median('curve')}`);
+  console.log(`    window ready (side panels filled) ${median('ready')}`);
   console.log(`    API calls before the curve (ms each, last run): ${breakdown.at(-1)?.calls.join(', ') || 'none'}`);
   console.log(`Target under 1 s: ${m.median < 1000 ? 'met' : 'NOT met'}`);
 } finally {

@@ -15,7 +15,7 @@ function touching(segments: Segment[], box: Box): Segment[] {
 
 function visited(segments: Segment[], box: Box): Segment[] {
   const found: Segment[] = [];
-  segmentGrid(segments).near(box, (s) => found.push(s));
+  segmentGrid(segments).near(box, (s) => void found.push(s));
   return found;
 }
 
@@ -47,5 +47,17 @@ describe('segmentGrid', () => {
     const ordinary = segment('ordinary', [10, 10], [20, 20]);
     expect(visited([endless, ordinary], { x0: 15, y0: 0, x1: 30, y1: 12 }).map((s) => s.id).sort()).toEqual(['endless', 'ordinary']);
     expect(visited([endless, ordinary], { x0: -1e9, y0: -1e9, x1: 1e9, y1: 1e9 }).map((s) => s.id).sort()).toEqual(['endless', 'ordinary']);
+  });
+
+  it('stops as soon as the visitor has seen enough, for boxes of any size', () => {
+    const segments = Array.from({ length: 10 }, (_, i) => segment(`s${i}`, [i * 10, 0], [i * 10 + 5, 5]));
+    const endless = segment('endless', [0, 0], [Infinity, 5]);
+    for (const box of [{ x0: 0, y0: 0, x1: 100, y1: 10 }, { x0: -1e9, y0: -1e9, x1: 1e9, y1: 1e9 }]) {
+      for (const list of [segments, [endless, ...segments]]) {
+        let seen = 0;
+        segmentGrid(list).near(box, () => ++seen >= 3);
+        expect(seen).toBe(3);
+      }
+    }
   });
 });

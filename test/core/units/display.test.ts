@@ -3,6 +3,7 @@ import Qty from 'js-quantities';
 import { describe, expect, it } from 'vitest';
 import {
   displayUnit,
+  fixedDecimals,
   formatMargin,
   formatQuantity,
   fromDisplay,
@@ -95,5 +96,30 @@ describe('formatQuantity on small values', () => {
     expect(formatQuantity(80_900, 'power', 'si')).toBe('80.9 kW');
     expect(formatQuantity(84.2, 'wingLoading', 'si')).toBe('84 N/m²');
     expect(formatQuantity(0, 'power', 'si')).toBe('0.0 kW');
+  });
+});
+
+describe('fixedDecimals', () => {
+  it('writes US-English numbers with thousands separators and exactly the decimals asked for', () => {
+    // Unicode CLDR, locale en-US: grouping separator "," every three digits, decimal separator ".".
+    expect(fixedDecimals(12_345.678, 2)).toBe('12,345.68');
+    expect(fixedDecimals(1_234_567, 0)).toBe('1,234,567');
+    expect(fixedDecimals(0.5, 3)).toBe('0.500');
+    expect(fixedDecimals(-1_500.25, 1)).toBe('-1,500.3');
+    // At most six decimals, never fewer than none.
+    expect(fixedDecimals(1 / 3, 9)).toBe('0.333333');
+    expect(fixedDecimals(2.5, -1)).toBe('3');
+  });
+
+  it('agrees with the platform\'s own toLocaleString for any number and number of decimals (ECMA-402)', () => {
+    fc.assert(
+      fc.property(fc.double({ noNaN: true, min: -1e12, max: 1e12 }), fc.integer({ min: 0, max: 6 }), (number, decimals) => {
+        // The same number formatted twice in a row, in any order, reads the same (the format is kept between calls).
+        const reference = number.toLocaleString('en-US', { minimumFractionDigits: decimals, maximumFractionDigits: decimals });
+        expect(fixedDecimals(number, decimals)).toBe(reference);
+        expect(fixedDecimals(number, decimals)).toBe(reference);
+      }),
+      { numRuns: 300 },
+    );
   });
 });

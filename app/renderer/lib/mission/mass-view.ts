@@ -33,18 +33,21 @@ export function shareText(share: number): string {
   return Number.isFinite(share) ? `${Math.round(share * 100)} %` : '—';
 }
 
+/** Up to six decimals, as many as the number needs, with thousands separators (built once: a format per call is slow). */
+const UP_TO_SIX_DECIMALS = new Intl.NumberFormat('en-US', { maximumFractionDigits: 6 });
+
 /** Battery energy in kWh, or Wh below 1 kWh, three significant figures; "—" when there is none. */
 export function energyText(joules: number | null): string {
   if (joules === null || !Number.isFinite(joules)) return '—';
   const kwh = joules / 3.6e6;
   const [value, unit] = Math.abs(kwh) >= 1 || kwh === 0 ? [kwh, 'kWh'] : [kwh * 1000, 'Wh'];
-  return `${Number(value.toPrecision(3)).toLocaleString('en-US', { maximumFractionDigits: 6 })} ${unit}`;
+  return `${UP_TO_SIX_DECIMALS.format(Number(value.toPrecision(3)))} ${unit}`;
 }
 
 /** A plain number to three significant figures, "—" when not finite. */
 export function plain3(value: number | null | undefined): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '—';
-  return Number(value.toPrecision(3)).toLocaleString('en-US', { maximumFractionDigits: 6 });
+  return UP_TO_SIX_DECIMALS.format(Number(value.toPrecision(3)));
 }
 
 export interface DriverRow {
