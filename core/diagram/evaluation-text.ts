@@ -13,15 +13,14 @@ const MARK = '\u0001loftpoint-columns:';
 /**
  * Each number of a column as JSON writes it (null for NaN), converted by the
  * JSON serializer itself in one call, which is faster than one String() per
- * number.
+ * number. The columns are never empty (at least two samples).
  */
 function numberTexts(column: Float64Array): string[] {
-  return column.length === 0 ? [] : JSON.stringify(Array.from(column)).slice(1, -1).split(',');
+  return JSON.stringify(Array.from(column)).slice(1, -1).split(',');
 }
 
-/** One column as JSON.stringify writes an array of [w, y] pairs at the given indentation. */
+/** One column (never empty) as JSON.stringify writes an array of [w, y] pairs at the given indentation. */
 function pointsText(wsTexts: readonly string[], column: Float64Array, indent: string): string {
-  if (column.length === 0) return '[]';
   const ys = numberTexts(column);
   const open = `${indent}  [\n${indent}    `;
   const middle = `,\n${indent}    `;
