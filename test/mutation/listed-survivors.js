@@ -7,7 +7,8 @@
 // the first cell of a row gives the place: "25:19" under a file heading, or
 // "bands.ts 86:15, 87:15" under a folder heading. A survivor is listed when a
 // row of a section naming its folder (or file) gives its file and its
-// line:column. Places are those of the code when the row was written: when
+// line:column. Rows of a "why not killed" table, and rows whose reason starts
+// "not killed", are not listings. Places are those of the code when the row was written: when
 // the code moves, the survivor shows as not listed until the row is updated.
 
 const UNCOUNTED = new Set(['Killed', 'Timeout', 'Ignored', 'CompileError', 'RuntimeError', 'Pending']);
@@ -17,6 +18,7 @@ export function listedPlaces(markdown) {
   const places = new Set();
   let folders = [];
   let headingFile = null;
+  let notKilledTable = false;
   for (const line of markdown.split('\n')) {
     if (line.startsWith('#')) {
       const paths = [...line.matchAll(/core\/[\w/.-]*/g)].map((m) => m[0].replace(/[/.]+$/, ''));
@@ -25,8 +27,19 @@ export function listedPlaces(markdown) {
       folders = paths.map((p) => (p.endsWith('.ts') ? p.slice(0, p.lastIndexOf('/')) : p));
       continue;
     }
-    if (!line.startsWith('|') || /^\|\s*(-|place\b)/.test(line)) continue;
-    const cell = line.split('|')[1] ?? '';
+    if (!line.startsWith('|')) {
+      if (line.trim() !== '') notKilledTable = false;
+      continue;
+    }
+    if (/^\|\s*place\b/.test(line)) {
+      notKilledTable = /not killed/i.test(line);
+      continue;
+    }
+    if (/^\|\s*-/.test(line) || notKilledTable) continue;
+    const cells = line.split('|');
+    // A row that says it is not killed ("not killed: ...") lists a mutant still waiting for a test.
+    if (/^\s*not killed\b/i.test(cells[3] ?? '')) continue;
+    const cell = cells[1] ?? '';
     // "a.ts 1:2, 3:4, b.ts 5:6": each position belongs to the last file named before it.
     let files = headingFile ? [headingFile] : [];
     for (const token of cell.matchAll(/([\w-]+\.ts)|(\d+):(\d+)/g)) {

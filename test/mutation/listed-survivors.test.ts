@@ -24,6 +24,17 @@ const markdown = `# Equivalent mutants in core/
 | --- | --- | --- |
 | 25:30 | \`>\` to \`>=\` | tolerance |
 
+## core/diagram/optimum.ts (rows that wait for a test are not listings)
+
+| place | mutation | why |
+| --- | --- | --- |
+| 40:9 | \`<=\` to \`<\` | equal values only |
+| 47:25 | band to 100x | not killed: only widens the search |
+
+| place | mutation | why not killed |
+| --- | --- | --- |
+| 58:10 | no slice | a test would need several sharp minima |
+
 ## core/requirements and core/assumptions (two folders)
 
 | place | mutation | why equivalent |
@@ -44,6 +55,7 @@ describe('the survivors equivalent.md lists', () => {
     expect([...listedPlaces(markdown)].sort()).toEqual([
       'core/assumptions/stall.ts 31:7',
       'core/constraints/best-rate-speed.ts 25:19',
+      'core/diagram/optimum.ts 40:9',
       'core/numeric/bracket-root.ts 25:30',
       'core/requirements/stall.ts 31:7',
       'core/studies/bands.ts 86:15',
