@@ -5,7 +5,8 @@
 // folder(s) or the file of core/ it speaks of ("## core/diagram (with ...)",
 // "## core/requirements and core/assumptions", "## core/constraints/stall.ts");
 // the first cell of a row gives the place: "25:19" under a file heading, or
-// "bands.ts 86:15, 87:15" under a folder heading. A survivor is listed when a
+// "bands.ts 86:15, 87:15" under a folder heading, or a whole path
+// "core/units/display.ts 119:7" under any heading. A survivor is listed when a
 // row of a section naming its folder (or file) gives its file and its
 // line:column. Rows of a "why not killed" table, and rows whose reason starts
 // "not killed", are not listings. Places are those of the code when the row was written: when
@@ -42,9 +43,9 @@ export function listedPlaces(markdown) {
     const cell = cells[1] ?? '';
     // "a.ts 1:2, 3:4, b.ts 5:6": each position belongs to the last file named before it.
     let files = headingFile ? [headingFile] : [];
-    for (const token of cell.matchAll(/([\w-]+\.ts)|(\d+):(\d+)/g)) {
+    for (const token of cell.matchAll(/((?:core\/[\w/-]+\/)?[\w-]+\.ts)|(\d+):(\d+)/g)) {
       if (token[1]) {
-        files = folders.map((folder) => `${folder}/${token[1]}`);
+        files = token[1].startsWith('core/') ? [token[1]] : folders.map((folder) => `${folder}/${token[1]}`);
         continue;
       }
       for (const file of files) places.add(`${file} ${token[2]}:${token[3]}`);

@@ -35,6 +35,12 @@ const markdown = `# Equivalent mutants in core/
 | --- | --- | --- |
 | 58:10 | no slice | a test would need several sharp minima |
 
+## Places moved (a heading without a folder: whole paths in the rows)
+
+| place | mutation | why equivalent |
+| --- | --- | --- |
+| core/units/display.ts 119:7 | guard | same |
+
 ## core/requirements and core/assumptions (two folders)
 
 | place | mutation | why equivalent |
@@ -61,6 +67,7 @@ describe('the survivors equivalent.md lists', () => {
       'core/studies/bands.ts 86:15',
       'core/studies/bands.ts 87:15',
       'core/studies/column-counts.ts 27:26',
+      'core/units/display.ts 119:7',
     ]);
   });
 
