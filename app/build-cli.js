@@ -62,6 +62,19 @@ const commanderSpawnsLazily = {
   },
 };
 
+/** esbuild options every built file shares: bundled for Node, minified, named by content, kept in memory until all are built. */
+const BUNDLE = {
+  bundle: true,
+  platform: 'node',
+  target: 'node20.19',
+  minify: true,
+  entryNames: '[name]-[hash]',
+  metafile: true,
+  write: false,
+  logLevel: 'silent',
+  legalComments: 'none',
+};
+
 /**
  * The Monte Carlo worker's file: app/cli/monte-carlo-thread.ts and only what it imports, as one
  * CommonJS file (minified) that the worker's loader runs with V8's code cache. Answers esbuild's
@@ -70,20 +83,12 @@ const commanderSpawnsLazily = {
 export async function buildMonteCarloThread(root, outdir) {
   const { build } = await import('esbuild');
   const result = await build({
+    ...BUNDLE,
     absWorkingDir: root,
     outdir,
     entryPoints: { 'monte-carlo-thread': THREAD_ENTRY },
-    bundle: true,
-    platform: 'node',
-    target: 'node20.19',
     format: 'cjs',
     outExtension: { '.js': '.cjs' },
-    minify: true,
-    entryNames: '[name]-[hash]',
-    metafile: true,
-    write: false,
-    logLevel: 'silent',
-    legalComments: 'none',
   });
   const [output] = Object.keys(result.metafile.outputs);
   const file = basename(output);
@@ -96,21 +101,13 @@ export async function buildCli(root = defaultRoot) {
   const startedAt = Date.now();
   const outdir = join(root, CLI_OUT);
   const common = {
+    ...BUNDLE,
     absWorkingDir: root,
     outdir,
-    bundle: true,
-    platform: 'node',
-    target: 'node20.19',
     // Pure-JavaScript packages are bundled (one file read instead of hundreds, and only the parts
     // used); the native SQLite module loads from node_modules, and the page build tools are never
     // part of the output.
     external: ['better-sqlite3', 'vite', '@sveltejs/*', 'svelte', 'svelte/*', 'esbuild', 'tsx'],
-    minify: true,
-    entryNames: '[name]-[hash]',
-    metafile: true,
-    write: false,
-    logLevel: 'silent',
-    legalComments: 'none',
   };
   // The worker first: the command line is built knowing its file name.
   const thread = await buildMonteCarloThread(root, outdir);
