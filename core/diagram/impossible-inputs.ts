@@ -71,7 +71,7 @@ function requiredLoadingInputs(design: Design, out: ImpossibleInput[]): void {
         const byLinearTerm = design.aircraft.cdLinear < 0;
         out.push({
           field: byLinearTerm ? 'aircraft.aero.cdLinear' : `requirements[${index}]`,
-          message: `${byLinearTerm ? `${shown(design.aircraft.cdLinear)} makes` : 'makes'} requirement "${requirement.id}" need ${y < 0 ? 'negative' : 'no'} ${what} at ${shown(w)} Pa wing loading, which no aircraft can; ${byLinearTerm ? 'use a linear term closer to zero' : 'check its values'}`,
+          message: `${byLinearTerm ? `${shown(design.aircraft.cdLinear)} makes` : 'makes'} requirement "${requirement.id}" need ${y < 0 ? `negative ${what}` : `no ${what}`} at ${shown(w)} Pa wing loading, ${y < 0 ? 'which no aircraft can' : 'so it sizes nothing'}; ${byLinearTerm ? 'use a linear term closer to zero' : 'check its values'}`,
         });
         break;
       }
