@@ -2,7 +2,7 @@
  * Inputs no aircraft can have, which the concept reader reports as errors
  * naming the field: a drag polar whose least drag is not positive, a ground
  * run whose lift coefficient lifts the aircraft before lift-off speed or
- * takes the weight off the wheels (negative rolling friction), and a
+ * takes the weight off the wheels (zero or negative rolling friction), and a
  * requirement met with no power or thrust at all somewhere on the diagram.
  */
 import { minimumDragCoefficient, polarOf, type Polar } from '../aero/drag-polar';
@@ -51,7 +51,7 @@ function groundRunInputs(design: Design, out: ImpossibleInput[]): void {
     if (r.rollingFriction > 0 && !(liftOverWeight < 1)) {
       out.push({
         field,
-        message: `${shown(r.clGroundRun)} with lift-off at ${shown(r.liftoffSpeedFactor)} V_s gives lift above the weight during the roll, so negative rolling friction (requirement "${r.id}"); use a smaller ground-run C_L`,
+        message: `${shown(r.clGroundRun)} with lift-off at ${shown(r.liftoffSpeedFactor)} V_s gives lift at or above the weight during the roll, so no wheel load: zero or negative rolling friction (requirement "${r.id}"); use a smaller ground-run C_L`,
       });
     }
   });

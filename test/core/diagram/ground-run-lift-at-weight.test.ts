@@ -23,6 +23,8 @@ describe('a ground run whose lift equals the weight at the mean-force speed', ()
     const found = impossibleInputs(design({ aircraft: plane, requirements: [takeoffRoll(300, { clGroundRun: 1, liftoffSpeedFactor: 2, rollingFriction: 0.04 })], rangePa: [100, 2000] }));
     expect(found.map((i) => i.field)).toEqual(['requirements[0].clGroundRun']);
     expect(found[0].message).toContain('requirement "takeoff"');
+    // L/W exactly 1: the wheels carry nothing, so the friction is zero; the line does not claim it is negative.
+    expect(found[0].message).toContain('lift at or above the weight during the roll, so no wheel load: zero or negative rolling friction');
   });
 
   it('is accepted just below: C_L,g 0.99 gives L/W = 0.99', () => {
