@@ -22,7 +22,7 @@ export interface TakeoffGroundRollRequirement extends RequirementCommon {
 }
 
 /** Speed at which the mean forces are taken, as a fraction of V_LOF. */
-const MEAN_ROLL_SPEED_FRACTION = 0.7;
+export const MEAN_ROLL_SPEED_FRACTION = 0.7;
 
 /**
  * T_SL/W_TO = (beta/alpha)[V_LOF^2/(2 g0 S_G) + qbar C_D,g/(beta w) + mu(1 - qbar C_L,g/(beta w))],

@@ -11,18 +11,15 @@ import type { WarningJson } from '../evaluation';
 import type { Design } from '../model';
 import { propulsionKind } from '../propulsion/kinds';
 import { requirementKind } from '../requirements';
+import { messageNumber } from '../units/message-number';
 
 function check(out: WarningJson[], field: string, what: string, value: number, range: TypicalRange): void {
   if (value >= range.low && value <= range.high) return;
   out.push({
     code: 'assumption-outside-typical-range',
     field,
-    message: `${what} ${round(value)} is outside the typical range: ${range.text}.`,
+    message: `${what} ${messageNumber(value)} is outside the typical range: ${range.text}.`,
   });
-}
-
-export function round(x: number): string {
-  return Number.isFinite(x) ? String(Number(x.toPrecision(4))) : String(x);
 }
 
 function configurationWarnings(design: Design, out: WarningJson[]): void {
@@ -53,7 +50,7 @@ function configurationWarnings(design: Design, out: WarningJson[]): void {
       out.push({
         code: 'drag-polar-not-positive',
         field: `${aero}.cdLinear`,
-        message: `With C_D linear term ${round(aircraft.cdLinear)} the ${name} polar reaches zero or negative drag; check cdLinear and the Oswald efficiency.`,
+        message: `With C_D linear term ${messageNumber(aircraft.cdLinear)} the ${name} polar reaches zero or negative drag; check cdLinear and the Oswald efficiency.`,
       });
     }
   }
@@ -72,10 +69,10 @@ function requirementAssumptionWarnings(design: Design, out: WarningJson[]): void
       check(out, `${path}.${key}`, title, (requirement as unknown as Record<string, number>)[field], range);
     }
     if (requirement.massFraction > 1) {
-      out.push({ code: 'assumption-outside-typical-range', field: `${path}.massFraction`, message: `Mass fraction ${round(requirement.massFraction)} is above take-off mass.` });
+      out.push({ code: 'assumption-outside-typical-range', field: `${path}.massFraction`, message: `Mass fraction ${messageNumber(requirement.massFraction)} is above take-off mass.` });
     }
     if (requirement.powerSetting > 1) {
-      out.push({ code: 'assumption-outside-typical-range', field: `${path}.powerSetting`, message: `Power setting ${round(requirement.powerSetting)} is above rated power or thrust.` });
+      out.push({ code: 'assumption-outside-typical-range', field: `${path}.powerSetting`, message: `Power setting ${messageNumber(requirement.powerSetting)} is above rated power or thrust.` });
     }
   });
 }

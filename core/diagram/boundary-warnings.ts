@@ -6,7 +6,7 @@ import { polarOf } from '../aero/drag-polar';
 import type { WarningJson } from '../evaluation';
 import type { Aircraft, Requirement } from '../model';
 import { availableFraction } from '../propulsion/available-fraction';
-import { round } from './assumption-warnings';
+import { messageNumber } from '../units/message-number';
 import { requirementKind } from '../requirements';
 import type { RequirementBoundary } from './boundaries';
 
@@ -21,7 +21,7 @@ function knownCause(requirement: Requirement, aircraft: Aircraft, path: string):
     return {
       code: 'no-power-available',
       field,
-      message: `No ${aircraft.propulsion.kind} power or thrust is left at this altitude and power setting (lapse x setting = ${round(alpha)}).`,
+      message: `No ${aircraft.propulsion.kind} power or thrust is left at this altitude and power setting (lapse x setting = ${messageNumber(alpha)}).`,
     };
   }
   return undefined;
@@ -63,7 +63,7 @@ export function unattainableWarnings(
         out.push({
           code: 'limit-below-range',
           field: path,
-          message: `Requirement "${requirement.id}" allows at most ${round(boundary.wingLoadingMaxPa)} N/m^2 of wing loading, left of the plotted range (from ${round(rangeLoPa)} N/m^2).`,
+          message: `Requirement "${requirement.id}" allows at most ${messageNumber(boundary.wingLoadingMaxPa)} N/m^2 of wing loading, left of the plotted range (from ${messageNumber(rangeLoPa)} N/m^2).`,
         });
       }
       continue;

@@ -7,7 +7,7 @@ import { minimumDragLiftCoefficient, minimumPowerLiftCoefficient } from '../aero
 import type { WarningJson } from '../evaluation';
 import type { Design } from '../model';
 import { PSF_PA } from '../units/factors';
-import { round } from './assumption-warnings';
+import { messageNumber } from '../units/message-number';
 import type { Optimum } from './optimum';
 
 /** An optimum on an edge of the plot, none at all, or nothing that sets power. */
@@ -38,10 +38,10 @@ export function optimumWarnings(
 export function designPointWarnings(wingLoadingPa: number, range: readonly [number, number]): WarningJson[] {
   const out: WarningJson[] = [];
   if (wingLoadingPa < range[0] || wingLoadingPa > range[1]) {
-    out.push({ code: 'design-point-outside-range', field: 'designPoint.wingLoading', message: `The design point's wing loading ${round(wingLoadingPa)} N/m^2 is outside the plotted range.` });
+    out.push({ code: 'design-point-outside-range', field: 'designPoint.wingLoading', message: `The design point's wing loading ${messageNumber(wingLoadingPa)} N/m^2 is outside the plotted range.` });
   }
   if (wingLoadingPa < PSF_PA || wingLoadingPa > 150 * PSF_PA) {
-    out.push({ code: 'assumption-outside-typical-range', field: 'designPoint.wingLoading', message: `Wing loading ${round(wingLoadingPa)} N/m^2 is outside the typical 1-150 psf (48-7200 N/m^2) (common practice).` });
+    out.push({ code: 'assumption-outside-typical-range', field: 'designPoint.wingLoading', message: `Wing loading ${messageNumber(wingLoadingPa)} N/m^2 is outside the typical 1-150 psf (48-7200 N/m^2) (common practice).` });
   }
   return out;
 }
@@ -54,7 +54,7 @@ export function speedWarnings(design: Design): WarningJson[] {
       out.push({
         code: 'speed-below-stall',
         field: 'aircraft.aero.configurations.clean.clMax',
-        message: `The ${name} speed needs C_L ${round(cl)}, above the clean C_Lmax ${round(clean.clMax)}: it is below the stall speed and shown for reference only.`,
+        message: `The ${name} speed needs C_L ${messageNumber(cl)}, above the clean C_Lmax ${messageNumber(clean.clMax)}: it is below the stall speed and shown for reference only.`,
       });
     }
   }

@@ -127,6 +127,11 @@ export interface RequirementDescriptor<
   }[];
   /** Problems only seen when the written fields are read together. */
   issues?(written: z.infer<z.ZodObject<Shape>>, context: { engines: number }): KindIssue[];
+  /**
+   * Inputs of the kind that no aircraft can have (a ground run that lifts the aircraft early): errors that refuse the
+   * concept, each naming its field under the requirement. Checked on enabled requirements once the concept is resolved.
+   */
+  refused?(requirement: Resolved, aircraft: Aircraft): KindIssue[];
   /** Why the resolved requirement cannot be met, when the inputs alone say so. */
   impossible?(requirement: Resolved, aircraft: Aircraft): (KindIssue & { code: string }) | undefined;
   /** Rules from published codes that set a requirement of this kind. */

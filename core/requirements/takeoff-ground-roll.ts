@@ -5,13 +5,38 @@
 import * as z from 'zod';
 import { RUNWAY_SURFACES } from '../assumptions/study-case';
 import { CL_GROUND_RUN, PROPELLER_TAKEOFF, ROLLING_FRICTION } from '../assumptions/typical-ranges';
-import { takeoffGroundRollBoundary, type TakeoffGroundRollRequirement } from '../constraints/takeoff-ground-roll';
+import { polarOf, type Polar } from '../aero/drag-polar';
+import type { Aircraft } from '../aircraft';
+import { MEAN_ROLL_SPEED_FRACTION, takeoffGroundRollBoundary, type TakeoffGroundRollRequirement } from '../constraints/takeoff-ground-roll';
 import { quantityField } from '../concept/quantity-field';
 import { formatQuantity } from '../units/display';
 import { defineRequirement } from './descriptor';
 import { lengthValue, mark, numberValue, plain, speedFactor } from './fields';
+import { messageNumber } from '../units/message-number';
 
 export type { TakeoffGroundRollRequirement };
+
+
+/**
+ * A ground-run lift coefficient at or above C_Lmax lifts the aircraft before lift-off speed; one whose lift at the
+ * mean-force speed reaches the weight leaves the wheels no load (zero or negative rolling friction).
+ */
+function groundRunRefusals(r: TakeoffGroundRollRequirement, aircraft: Aircraft): { field: string; message: string }[] {
+  const polar = polarOf(aircraft, r.configuration) ?? (polarOf(aircraft, 'clean') as Polar);
+  if (!(r.clGroundRun < polar.clMax)) {
+    return [{ field: 'clGroundRun', message: `${messageNumber(r.clGroundRun)} is at or above the ${r.configuration} C_Lmax ${messageNumber(polar.clMax)} (requirement "${r.id}"): the wing would lift the aircraft before lift-off speed; use a value below C_Lmax` }];
+  }
+  // Lift over weight at the mean-force speed: qbar C_L,g/(beta w) = (0.7 k_LOF)^2 C_L,g / C_Lmax.
+  const k = MEAN_ROLL_SPEED_FRACTION * r.liftoffSpeedFactor;
+  const liftOverWeight = (k * k * r.clGroundRun) / polar.clMax;
+  if (r.rollingFriction > 0 && !(liftOverWeight < 1)) {
+    return [{
+      field: 'clGroundRun',
+      message: `${messageNumber(r.clGroundRun)} with lift-off at ${messageNumber(r.liftoffSpeedFactor)} V_s gives lift at or above the weight during the roll, so no wheel load: zero or negative rolling friction (requirement "${r.id}"); use a smaller ground-run C_L`,
+    }];
+  }
+  return [];
+}
 
 const shape = {
   distance: quantityField('length', { above: 0 }),
@@ -56,6 +81,7 @@ export const takeoffGroundRoll = defineRequirement<'takeoff-ground-roll', Takeof
     { field: 'rollingFriction', key: 'rollingFriction', title: 'Rolling friction', label: 'Rolling friction', range: ROLLING_FRICTION, bounds: { min: 0, max: 1, openMin: false, openMax: true } },
     { field: 'clGroundRun', key: 'clGroundRun', title: 'Ground-run C_L', label: 'Ground-run CL', range: CL_GROUND_RUN, bounds: { min: 0, max: Infinity, openMin: false, openMax: false } },
   ],
+  refused: groundRunRefusals,
   templates: [],
   methods: `### Take-off ground roll (\`takeoff-ground-roll\`)
 

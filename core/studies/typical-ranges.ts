@@ -14,6 +14,7 @@ import { propulsionKind } from '../propulsion/kinds';
 import { requirementKind } from '../requirements';
 import { fieldRef, nominalOf, rangeableFields, type FieldRef } from './uncertain-fields';
 import { DEFAULT_SAMPLES, DEFAULT_SEED } from './uncertainty-schema';
+import { messageNumber } from '../units/message-number';
 
 export interface TypicalRange {
   field: string;
@@ -78,7 +79,6 @@ function typicalBands(ref: FieldRef, design: Design): readonly TypicalBand[] {
   return descriptor.typicalRanges.find((entry) => entry.key === ref.key)?.range.bands ?? [];
 }
 
-const shown = (x: number) => String(Number(x.toPrecision(4)));
 
 /**
  * The published range for this field of this design, and why: the band the
@@ -103,7 +103,7 @@ export function typicalRange(field: string, design: Design): TypicalRange | null
   const low = Math.min(chosen.low, nominal);
   const high = Math.max(chosen.high, nominal);
   const widened = low < chosen.low || high > chosen.high;
-  const basis = `${why}${widened ? `, widened to ${shown(low)}-${shown(high)} to contain the concept's value` : ''}; triangular, peaking at the concept's ${shown(nominal)}`;
+  const basis = `${why}${widened ? `, widened to ${messageNumber(low)}-${messageNumber(high)} to contain the concept's value` : ''}; triangular, peaking at the concept's ${messageNumber(nominal)}`;
   return { field, low, high, source: `${SOURCE_PREFIX}${chosen.source}`, widened, distribution: 'triangular', basis };
 }
 

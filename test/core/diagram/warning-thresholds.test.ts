@@ -6,7 +6,7 @@
  * the typical ranges' inclusive bounds.
  */
 import { describe, expect, it } from 'vitest';
-import { assumptionWarnings, round } from '../../../core/diagram/assumption-warnings';
+import { assumptionWarnings } from '../../../core/diagram/assumption-warnings';
 import { compressibilityWarnings, COMPRESSIBILITY_MACH } from '../../../core/diagram/compressibility-warnings';
 import { designPointWarnings, optimumWarnings, speedWarnings } from '../../../core/diagram/diagram-warnings';
 import { requirementBoundaries } from '../../../core/diagram/boundaries';
@@ -131,13 +131,6 @@ describe('assumptionWarnings: typical ranges with inclusive bounds', () => {
       { code: 'assumption-outside-typical-range', field: 'aircraft.aero.aspectRatio', message: `Aspect ratio 3.9 is outside the typical range: ${ASPECT_RATIO.text}.` },
     ]);
     expect(codes(assumptionWarnings(withAspectRatio(41)))).toEqual(['assumption-outside-typical-range']);
-  });
-
-  it('round keeps four significant figures and writes non-finite values as they are', () => {
-    expect(round(1234.5678)).toBe('1235');
-    expect(round(0.000123456)).toBe('0.0001235');
-    expect(round(NaN)).toBe('NaN');
-    expect(round(Infinity)).toBe('Infinity');
   });
 
   it('mass fraction and power setting above 1 warn; exactly 1 does not', () => {
