@@ -105,12 +105,12 @@ describe('early requests (browser mode)', () => {
   });
 
   it('a server that does not answer gives the window the error its own call would', async () => {
-    const fetch = (async () => {
+    const dead = (async () => {
       throw new TypeError('fetch failed');
     }) as unknown as typeof fetch;
-    sendEarlyRequests(environment(fetch));
+    sendEarlyRequests(environment(dead));
     await settle();
-    const result = await httpService('tok_1', fetch).getProject({});
+    const result = await httpService('tok_1', dead).getProject({});
     expect(result.ok).toBe(false);
     if (!result.ok) expect(result.error.message).toContain('not answering');
   });
