@@ -3,7 +3,8 @@
  * Requirements and Design point), each built as its own chunk: the first
  * page carries only what the first diagram and the two panels beside it
  * need. A panel loads when its tab is chosen, and all of them once the
- * window is ready, so a tab shows at once when it is clicked.
+ * first diagram is drawn; the window reads as ready (`data-ready`) when
+ * they are here, so a tab then shows at once when it is clicked.
  */
 const LOADERS = {
   assumptions: () => import('./AssumptionsPanel.svelte'),
@@ -40,7 +41,7 @@ export class LaterPanels {
     return loading;
   }
 
-  /** Loads every panel not loaded yet (once the window is ready). */
+  /** Loads every panel not loaded yet (once the first diagram is drawn); resolves even when one could not be loaded. */
   loadAll(): Promise<void> {
     return Promise.all((Object.keys(LOADERS) as LaterPanel[]).map((name) => this.load(name))).then(() => undefined);
   }
