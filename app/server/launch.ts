@@ -122,23 +122,7 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
     clearTimeout(moment);
     resolveBegin();
   };
-  // While the worker makes a new project, this thread loads the service once the browser has the page's files
-  // (loading it holds this thread for a moment, and the page's files should not wait behind that), or once the
-  // worker is done, or when no browser came: API calls wait for the project anyway, so they do not hurry it.
-  let filesSent = false;
-  let filesMoment: ReturnType<typeof setTimeout> | undefined;
-  let resolveFiles!: () => void;
-  const pageHasFiles = new Promise<void>((resolvePage) => (resolveFiles = resolvePage));
-  const filesDone = () => {
-    filesSent = true;
-    clearTimeout(filesMoment);
-    resolveFiles();
-  };
   const onPageActivity = (step: PageStep) => {
-    if (!filesSent && step !== 'api') {
-      clearTimeout(filesMoment);
-      filesMoment = setTimeout(filesDone, step === 'page' ? OPEN_PROJECT_AFTER_PAGE_MS : OPEN_PROJECT_QUIET_MS);
-    }
     if (begun) return;
     if (step === 'api') return begin();
     clearTimeout(moment);
@@ -157,7 +141,8 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
   onListening(server.url);
   if (!begun) moment ??= setTimeout(begin, OPEN_PROJECT_AFTER_MS);
   const workerBuild = options.workerBuild === undefined ? singleFileBuild() : options.workerBuild;
-  // A new project is begun on a worker thread at once, before this thread loads the service and the engine.
+  // A new project is begun on a worker thread at once; this thread then loads the service and the engine while
+  // the browser comes for the page, so the project opens the moment the worker is done.
   const existed = existsSync(target);
   let onWorker: Promise<boolean> | null = null;
   if (!existed && workerBuild) {
@@ -172,11 +157,6 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
   let opened: Awaited<ReturnType<Awaited<ReturnType<typeof loadServiceParts>>['openOrCreateProject']>>;
   let loaded: Awaited<ReturnType<typeof loadServiceParts>> | undefined;
   try {
-    if (onWorker) {
-      if (!filesSent) filesMoment ??= setTimeout(filesDone, OPEN_PROJECT_AFTER_MS);
-      await Promise.race([pageHasFiles, onWorker]);
-    }
-    filesDone();
     loaded = await serviceParts();
     // An existing project opens at once (a file that is not one is reported without delay). A new one made on
     // the worker is opened once it is there whole; where there is no worker, or the worker did not make it, it
