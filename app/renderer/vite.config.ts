@@ -5,7 +5,7 @@
  */
 import { fileURLToPath } from 'node:url';
 import { svelte } from '@sveltejs/vite-plugin-svelte';
-import { defineConfig, type Plugin, type UserConfig } from 'vite';
+import { defineConfig, type Plugin, type Rolldown, type UserConfig } from 'vite';
 import { CONTENT_SECURITY_POLICY } from '../shared/csp';
 
 const here = fileURLToPath(new URL('.', import.meta.url));
@@ -18,6 +18,47 @@ function contentSecurityPolicy(): Plugin {
   };
 }
 
+/** The module that sends the window's first service calls while the rest of the page loads (browser mode). */
+const EARLY_REQUESTS = fileURLToPath(new URL('./lib/api/early-requests.ts', import.meta.url));
+/** Where index.html wants the early module's script tag: after the content security policy, before every other script. */
+export const EARLY_REQUESTS_MARK = '<!-- early requests -->';
+
+/** The chunk that holds the early module's code (not a facade that only re-exports it). */
+function chunkHolding(bundle: Rolldown.OutputBundle, id: string): Rolldown.OutputChunk | undefined {
+  return Object.values(bundle).find((output): output is Rolldown.OutputChunk => output.type === 'chunk' && output.modules[id] !== undefined);
+}
+
+/**
+ * Builds app/renderer/lib/api/early-requests.ts as its own small chunk and loads it first, as an
+ * async module script, so the page asks for its first data the moment the HTML arrives; the window's
+ * script imports the very same chunk (one module in the page) and takes those answers.
+ */
+function earlyRequests(): Plugin {
+  return {
+    name: 'loftpoint-early-requests',
+    apply: 'build',
+    buildStart() {
+      this.emitFile({ type: 'chunk', id: EARLY_REQUESTS, name: 'early-requests' });
+    },
+    transformIndexHtml: {
+      order: 'post',
+      handler(html, context) {
+        const chunk = chunkHolding(context.bundle ?? {}, EARLY_REQUESTS);
+        if (!chunk) throw new Error('the early requests chunk was not built');
+        if (!html.includes(EARLY_REQUESTS_MARK)) throw new Error(`index.html has no ${EARLY_REQUESTS_MARK} mark`);
+        return html.replace(EARLY_REQUESTS_MARK, `<script type="module" async crossorigin src="./${chunk.fileName}"></script>`);
+      },
+    },
+    // The bundler may put a file in front of the shared chunk that only re-exports it: the page loads the chunk itself.
+    generateBundle(_options, bundle) {
+      const holder = chunkHolding(bundle, EARLY_REQUESTS);
+      for (const [name, output] of Object.entries(bundle)) {
+        if (output !== holder && output.type === 'chunk' && output.facadeModuleId === EARLY_REQUESTS) delete bundle[name];
+      }
+    },
+  };
+}
+
 export const rendererRoot = here;
 export const rendererOutDir = fileURLToPath(new URL('../../out/renderer', import.meta.url));
 
@@ -25,7 +66,7 @@ export const rendererConfig: UserConfig = {
   root: here,
   // Relative asset paths: the page loads from file:// in the desktop window and from http:// in browser mode.
   base: './',
-  plugins: [svelte(), contentSecurityPolicy()],
+  plugins: [svelte(), contentSecurityPolicy(), earlyRequests()],
   build: {
     outDir: rendererOutDir,
     emptyOutDir: true,

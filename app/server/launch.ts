@@ -2,16 +2,15 @@
  * Starting browser mode: open (or on first start create) the project, find
  * the page built ahead, and serve both on 127.0.0.1 with a fresh token.
  */
-import { existsSync } from 'node:fs';
+import { existsSync, mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { createService, invokeService, type ProjectService } from '../service';
+import type { ProjectService } from '../service';
 import type { ProjectInfo, ServiceError } from '../shared/contract';
-import { createDispatch } from '../shared/dispatch';
+import type { Dispatch } from '../shared/transport';
 import { fileDraftStore } from './drafts';
-import { pagePolicy } from '../shared/page-policy';
-import { openOrCreateProject, projectTarget, userDataFolder } from '../service/first-start';
-import { chromiumPrinter } from './print';
+import { newProjectName, projectTarget, userDataFolder } from '../service/project-target';
+import type { PrintPdf } from './print';
 import { startBrowserServer, type BrowserServer, type PageStep } from './server';
 import { rendererFolders } from './static-files';
 import { createLaunchToken } from './token';
@@ -81,18 +80,37 @@ export const OPEN_PROJECT_QUIET_MS = 40;
  * sees it half made). Resolves once the project is open; a project that cannot
  * be opened closes the server and rejects with a LaunchError naming --project.
  */
-export async function launchBrowserMode(options: LaunchOptions, onListening: (url: string) => void = () => {}): Promise<BrowserMode> {
+/** What serving the API takes: the service (and with it the engine), its dispatch, the printer, first start. */
+async function loadServiceParts() {
+  const [{ createService, invokeService }, { createDispatch }, { pagePolicy }, { chromiumPrinter }, { openOrCreateProject }] = await Promise.all([
+    import('../service'),
+    import('../shared/dispatch'),
+    import('../shared/page-policy'),
+    import('./print'),
+    import('../service/first-start'),
+  ]);
   const service: ProjectService = createService();
-  const rendererDir = findPage(options.rendererDir);
-  const dataFolder = userDataFolder();
-  let settle!: (problem: ServiceError | null) => void;
-  const ready = new Promise<ServiceError | null>((resolveReady) => (settle = resolveReady));
-  // Drafts are kept per project file in the data folder, so a restart on another port still offers them.
-  const drafts = fileDraftStore(dataFolder, projectTarget(options.project, dataFolder));
   const dispatch = createDispatch(
     (method, request) => invokeService(service, method, request),
     pagePolicy('start `loftpoint serve --project FILE` to work on another project'),
   );
+  return { service, invokeService, dispatch, printPdf: chromiumPrinter(), openOrCreateProject };
+}
+
+export async function launchBrowserMode(options: LaunchOptions, onListening: (url: string) => void = () => {}): Promise<BrowserMode> {
+  const rendererDir = findPage(options.rendererDir);
+  const dataFolder = userDataFolder();
+  const target = projectTarget(options.project, dataFolder);
+  let settle!: (problem: ServiceError | null) => void;
+  const ready = new Promise<ServiceError | null>((resolveReady) => (settle = resolveReady));
+  // Drafts are kept per project file in the data folder, so a restart on another port still offers them.
+  const drafts = fileDraftStore(dataFolder, target);
+  // The service and the engine load once the server listens: the address comes first, and API calls wait
+  // for the project anyway (`ready`), which needs them.
+  let parts: ReturnType<typeof loadServiceParts> | undefined;
+  const serviceParts = () => (parts ??= loadServiceParts());
+  const dispatch: Dispatch = async (method, request) => (await serviceParts()).dispatch(method, request);
+  const printPdf: PrintPdf = async (html) => (await serviceParts()).printPdf(html);
   // A new project is made once the browser has the page's files to read, or asks the API, or no browser came
   // within a moment: making it evaluates the demo concepts, and serving the page should not wait behind that.
   let begun = false;
@@ -112,7 +130,7 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
   };
   let server: BrowserServer;
   try {
-    server = await startBrowserServer({ port: options.port, token: createLaunchToken(), rendererDir, dispatch, printPdf: chromiumPrinter(), drafts, ready, onPageActivity });
+    server = await startBrowserServer({ port: options.port, token: createLaunchToken(), rendererDir, dispatch, printPdf, drafts, ready, onPageActivity });
   } catch (error) {
     settle({ code: 'io', message: 'browser mode did not start' });
     const code = (error as NodeJS.ErrnoException).code;
@@ -123,15 +141,30 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
   onListening(server.url);
   if (!begun) moment ??= setTimeout(begin, OPEN_PROJECT_AFTER_MS);
   const workerBuild = options.workerBuild === undefined ? singleFileBuild() : options.workerBuild;
+  // A new project is begun on a worker thread at once; this thread then loads the service and the engine while
+  // the browser comes for the page, so the project opens the moment the worker is done.
+  const existed = existsSync(target);
+  let onWorker: Promise<boolean> | null = null;
+  if (!existed && workerBuild) {
+    try {
+      if (!options.project) mkdirSync(dataFolder, { recursive: true });
+      onWorker = makeProjectOnWorker(workerBuild, target, newProjectName(options.project, target));
+    } catch {
+      onWorker = null; // the data folder could not be made: this thread makes the project, with its own error
+    }
+  }
   let madeOnWorker = false;
-  let opened: Awaited<ReturnType<typeof openOrCreateProject>>;
+  let opened: Awaited<ReturnType<Awaited<ReturnType<typeof loadServiceParts>>['openOrCreateProject']>>;
+  let loaded: Awaited<ReturnType<typeof loadServiceParts>> | undefined;
   try {
-    // An existing project opens at once (a file that is not one is reported without delay). A new one is made
-    // on a worker thread at once, while this thread serves the page; or, where there is no worker, here once
-    // the page is on its way (and so too when the worker did not make it, with this thread's own error).
-    opened = await openOrCreateProject(service, options.project, dataFolder, {
+    loaded = await serviceParts();
+    // An existing project opens at once (a file that is not one is reported without delay). A new one made on
+    // the worker is opened once it is there whole; where there is no worker, or the worker did not make it, it
+    // is made here once the page is on its way, with this thread's own error.
+    opened = await loaded.openOrCreateProject(loaded.service, options.project, dataFolder, {
+      existed,
       beforeCreating: () => pageLoading,
-      ...(workerBuild ? { makeElsewhere: async (file: string, name: string) => (madeOnWorker = await makeProjectOnWorker(workerBuild, file, name)) } : {}),
+      ...(onWorker ? { makeElsewhere: async () => (madeOnWorker = await onWorker) } : {}),
     });
   } catch (error) {
     opened = { ok: false, error: { code: 'internal', message: error instanceof Error ? error.message.split('\n')[0] : String(error) } };
@@ -140,10 +173,11 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
   if (!opened.ok) {
     settle(opened.error);
     await server.close();
-    await invokeService(service, 'closeProject', {});
+    if (loaded) await loaded.invokeService(loaded.service, 'closeProject', {});
     throw projectProblem(opened.error);
   }
   settle(null);
+  const { service, invokeService } = loaded!;
   return {
     server,
     project: opened.value.info,

@@ -4,37 +4,18 @@
  * sees a full diagram at once. Shared by browser mode and the desktop window.
  */
 import { existsSync, mkdirSync } from 'node:fs';
-import { homedir } from 'node:os';
-import { basename, extname, join, resolve } from 'node:path';
 import type { ProjectInfo, ServiceResult } from '../shared/contract';
 import type { ServiceHandlers } from './service';
 import { invokeService } from './invoke';
 import { checkedDemo, demoConcepts } from './engine';
+import { newProjectName, projectTarget } from './project-target';
 
-export const PROJECT_EXTENSION = '.loftpoint';
-const FIRST_PROJECT_NAME = 'Demo project';
-
-/** The user's data folder: $LOFTPOINT_DATA_DIR, else the platform's usual place for application data. */
-export function userDataFolder(env: NodeJS.ProcessEnv = process.env, platform: NodeJS.Platform = process.platform, home = homedir()): string {
-  if (env.LOFTPOINT_DATA_DIR) return resolve(env.LOFTPOINT_DATA_DIR);
-  if (platform === 'win32') return join(env.APPDATA ?? join(home, 'AppData', 'Roaming'), 'Loftpoint');
-  if (platform === 'darwin') return join(home, 'Library', 'Application Support', 'Loftpoint');
-  return join(env.XDG_CONFIG_HOME ?? join(home, '.config'), 'Loftpoint');
-}
-
-export function firstProjectFile(dataFolder: string): string {
-  return join(dataFolder, `${FIRST_PROJECT_NAME}${PROJECT_EXTENSION}`);
-}
+export { PROJECT_EXTENSION, firstProjectFile, newProjectName, projectTarget, userDataFolder } from './project-target';
 
 export interface OpenedProject {
   info: ProjectInfo;
   /** True when the file was made just now (with the demo concepts). */
   created: boolean;
-}
-
-/** The project file a front end opens: `file` resolved, or the first-start project in the data folder. */
-export function projectTarget(file: string | undefined, dataFolder: string): string {
-  return file ? resolve(file) : firstProjectFile(dataFolder);
 }
 
 /**
@@ -63,6 +44,11 @@ export interface OpenOrCreateOptions {
    * file is there whole; it is then opened. On false the project is made here, as without it.
    */
   makeElsewhere?: (file: string, name: string) => Promise<boolean>;
+  /**
+   * Whether the file was there when the front end started: given when a new project's making
+   * began before this call (browser mode's worker), so a project made meanwhile still counts as new.
+   */
+  existed?: boolean;
 }
 
 /**
@@ -77,12 +63,12 @@ export async function openOrCreateProject(
   options: OpenOrCreateOptions = {},
 ): Promise<ServiceResult<OpenedProject>> {
   const target = projectTarget(file, dataFolder);
-  if (existsSync(target)) {
+  if (options.existed ?? existsSync(target)) {
     const opened = await invokeService(service, 'openProject', { file: target });
     return opened.ok ? { ok: true, value: { info: opened.value, created: false } } : opened;
   }
   if (!file) mkdirSync(dataFolder, { recursive: true });
-  const name = file ? basename(target, extname(target)) || FIRST_PROJECT_NAME : FIRST_PROJECT_NAME;
+  const name = newProjectName(file, target);
   if (options.makeElsewhere && (await options.makeElsewhere(target, name))) {
     const opened = await invokeService(service, 'openProject', { file: target });
     return opened.ok ? { ok: true, value: { info: opened.value, created: true } } : opened;

@@ -52,3 +52,26 @@ test('the server refuses API calls without the token or from another origin', as
   expect((await fine.json()).ok).toBe(true);
   void window;
 });
+
+test('the first calls go out from the small module loaded ahead of the window, and nothing is asked twice', async ({ page }) => {
+  const asked: string[] = [];
+  page.on('request', (request) => {
+    const [, method] = request.url().split('/api/');
+    if (method) asked.push(`${method} ${request.postData() ?? ''}`);
+  });
+  const problems: string[] = [];
+  page.on('pageerror', (error) => problems.push(error.message));
+  await page.goto(serverAddress());
+  await expect(page.getByTestId('window')).toHaveAttribute('data-ready', 'true');
+  await expect(page.locator('[data-testid^="curve-"]').first()).toBeVisible();
+  // The module that sends them is the first script of the page, loaded on its own (async), ahead of the window's.
+  const scripts = await page.locator('head script[src]').evaluateAll((tags) => tags.map((tag) => `${tag.getAttribute('src')} ${tag.hasAttribute('async') ? 'async' : ''}`.trim()));
+  expect(scripts[0]).toMatch(/^\.\/assets\/early-requests-[\w-]+\.js async$/);
+  expect(scripts.length).toBe(2);
+  for (const first of ['getProject {}', 'keptDrafts {}', 'listConcepts {}']) expect(asked).toContain(first);
+  expect(asked.some((call) => call.startsWith('getVersion '))).toBe(true);
+  expect(asked.some((call) => call.startsWith('listVersions '))).toBe(true);
+  // Each call once: the window took the answers sent ahead instead of asking again.
+  expect(asked.length).toBe(new Set(asked).size);
+  expect(problems).toEqual([]);
+});

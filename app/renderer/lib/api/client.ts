@@ -8,9 +8,12 @@ import type { DesktopApi, ExportFileRequest, WindowCommand, WindowStateReport } 
 import { EXPORT_KINDS } from '../../../shared/desktop-api';
 import { PRINT_PDF_PATH } from '../../../shared/print-request';
 import { base64ToBytes } from '../export/base64';
+import { endEarlyRequests, takeEarlyRequest, TOKEN_HEADER, TOKEN_IN_FRAGMENT, TOKEN_KEY } from './early-requests';
 
-export const TOKEN_HEADER = 'X-Loftpoint-Token';
-const TOKEN_KEY = 'loftpoint.token';
+export { TOKEN_HEADER };
+
+/** Takes an answer sent ahead for a call (method, JSON body) if there is one (early-requests.ts). */
+export type EarlyAnswers = (method: string, body: string) => Promise<Response> | undefined;
 
 export interface Connection {
   mode: 'desktop' | 'browser' | 'offline';
@@ -26,6 +29,8 @@ export interface Connection {
   reportWindowState?(state: WindowStateReport): void;
   /** Browser mode: unsaved drafts kept by the server per project file, so a restart on a new port still offers them. */
   drafts?: DraftMirror;
+  /** Browser mode: the window's first start is over, so answers sent ahead for it are no longer taken. */
+  endFirstStart?(): void;
 }
 
 export interface DraftMirror {
@@ -35,15 +40,17 @@ export interface DraftMirror {
   save(drafts: Record<string, unknown>): Promise<void>;
 }
 
-export function httpDrafts(token: string, fetcher: typeof fetch = fetch): DraftMirror {
-  const post = async (method: string, body: unknown): Promise<unknown> => {
-    const response = await fetcher(`./api/${method}`, {
-      method: 'POST',
-      headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
-      body: JSON.stringify(body),
-      credentials: 'same-origin',
-      cache: 'no-store',
-    });
+export function httpDrafts(token: string, fetcher: typeof fetch = fetch, early: EarlyAnswers = takeEarlyRequest): DraftMirror {
+  const post = async (method: string, request: unknown): Promise<unknown> => {
+    const body = JSON.stringify(request);
+    const response = await (early(method, body) ??
+      fetcher(`./api/${method}`, {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
+        body,
+        credentials: 'same-origin',
+        cache: 'no-store',
+      }));
     return response.json();
   };
   return {
@@ -73,7 +80,7 @@ declare global {
 
 /** Takes the token from the address fragment once, keeps it for reloads of this tab, and clears it from the address bar. */
 export function launchToken(location: Location, storage: Storage, history: History): string | null {
-  const match = /(?:^#|&)token=([A-Za-z0-9_-]+)/.exec(location.hash);
+  const match = TOKEN_IN_FRAGMENT.exec(location.hash);
   if (match) {
     storage.setItem(TOKEN_KEY, match[1]);
     history.replaceState(null, '', location.pathname + location.search);
@@ -82,17 +89,19 @@ export function launchToken(location: Location, storage: Storage, history: Histo
   return storage.getItem(TOKEN_KEY);
 }
 
-export function httpService(token: string, fetcher: typeof fetch = fetch): RemoteService {
+export function httpService(token: string, fetcher: typeof fetch = fetch, early: EarlyAnswers = takeEarlyRequest): RemoteService {
   const call = async (method: ServiceMethod, request: unknown): Promise<ServiceResult<unknown>> => {
     let response: Response;
+    const body = JSON.stringify(request ?? {});
     try {
-      response = await fetcher(`./api/${method}`, {
-        method: 'POST',
-        headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
-        body: JSON.stringify(request ?? {}),
-        credentials: 'same-origin',
-        cache: 'no-store',
-      });
+      response = await (early(method, body) ??
+        fetcher(`./api/${method}`, {
+          method: 'POST',
+          headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
+          body,
+          credentials: 'same-origin',
+          cache: 'no-store',
+        }));
     } catch {
       return { ok: false, error: { code: 'io', message: 'The Loftpoint server is not answering; is `loftpoint serve` still running?' } };
     }
@@ -197,5 +206,5 @@ export function connect(): Connection {
       ...local,
     };
   }
-  return { mode: 'browser', service: httpService(token), ...local, printPdf: httpPrinter(token), drafts: httpDrafts(token) };
+  return { mode: 'browser', service: httpService(token), ...local, printPdf: httpPrinter(token), drafts: httpDrafts(token), endFirstStart: endEarlyRequests };
 }

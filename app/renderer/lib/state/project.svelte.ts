@@ -17,6 +17,7 @@ import type {
   VersionSummary,
 } from '../../../shared/contract';
 import type { Connection } from '../api/client';
+import { conceptToOpen, rememberedConceptKey } from '../api/early-requests';
 import type { ConceptDocument } from '../concept/edit';
 import type { Workspace } from './workspace.svelte';
 
@@ -134,6 +135,15 @@ export class ProjectState {
 
   /** First load: the project's concepts, the last one worked on, its newest version. */
   async start(): Promise<void> {
+    try {
+      await this.#start();
+    } finally {
+      // Answers sent ahead for the first start (browser mode, early-requests.ts) are never taken after it.
+      this.connection.endFirstStart?.();
+    }
+  }
+
+  async #start(): Promise<void> {
     const service = this.#service;
     if (!service) {
       this.#loadOffline(this.connection.problem ?? 'No project is open.');
@@ -151,7 +161,7 @@ export class ProjectState {
     else this.#fail(concepts.error);
     await this.#refreshAlternatives();
     const remembered = this.#rememberedConcept();
-    const first = this.concepts.find((concept) => concept.name === remembered) ?? this.concepts.find((concept) => concept.latestVersion !== null);
+    const first = conceptToOpen(this.concepts, remembered);
     if (first) await this.selectConcept(first.name);
     else this.#loadOffline('The project has no concepts yet; this demo concept is not saved until you save a version.', true);
   }
@@ -539,7 +549,7 @@ export class ProjectState {
 
   #rememberedConcept(): string | null {
     try {
-      return this.project ? localStorage.getItem(`loftpoint.concept:${this.project.file}`) : null;
+      return this.project ? localStorage.getItem(rememberedConceptKey(this.project.file)) : null;
     } catch {
       return null;
     }
@@ -547,7 +557,7 @@ export class ProjectState {
 
   #rememberConcept(name: string): void {
     try {
-      if (this.project) localStorage.setItem(`loftpoint.concept:${this.project.file}`, name);
+      if (this.project) localStorage.setItem(rememberedConceptKey(this.project.file), name);
     } catch {
       // Not remembered; the first concept opens next time.
     }
