@@ -23,7 +23,8 @@ export const mutationParts = [
   { name: 'requirements', mutate: ['core/requirements/**/*.ts'], tests: ['requirements', 'constraints'] },
   { name: 'assumptions', mutate: ['core/assumptions/**/*.ts'], tests: ['assumptions'] },
   { name: 'mission', mutate: ['core/mission/**/*.ts'], tests: ['mission'] },
-  { name: 'diagram', mutate: ['core/diagram/**/*.ts'], tests: ['diagram', 'numeric'] },
+  // The kinds' own refusals (core/requirements/<kind>.ts `refused`) reach the diagram's impossible-input check.
+  { name: 'diagram', mutate: ['core/diagram/**/*.ts'], tests: ['diagram', 'numeric', 'requirements/ground-run-lift-at-weight.test.ts', 'requirements/ground-run-cl-at-clmax.test.ts'] },
   { name: 'concept', mutate: ['core/concept/**/*.ts', '!core/concept/demos/**'], tests: ['concept'] },
   // The two slowest studies tests (several seconds for each mutant they cover) are left out: the Monte Carlo
   // is recounted by hand in monte-carlo-hand-count.test.ts, the typical ranges in typical-ranges.test.ts.

@@ -1,6 +1,7 @@
 /**
  * A take-off ground-run lift coefficient at or above the configuration's
- * C_Lmax is refused, naming the field (core/diagram/impossible-inputs.ts):
+ * C_Lmax is refused, naming the field (the kind's `refused`, core/requirements/takeoff-ground-roll.ts,
+ * through core/diagram/impossible-inputs.ts):
  * at C_L,g = C_Lmax the wing carries the weight at the stall speed, below
  * lift-off speed (V_LOF = k_LOF V_s, k_LOF > 1; lift equation, common practice).
  * The take-off configuration's C_Lmax is 1.8 here.

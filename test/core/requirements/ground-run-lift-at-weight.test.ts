@@ -1,6 +1,7 @@
 /**
  * A take-off ground run whose lift reaches the weight at the speed of its
- * mean forces is refused (core/diagram/impossible-inputs.ts): the wheels then
+ * mean forces is refused (the kind's `refused`, core/requirements/takeoff-ground-roll.ts,
+ * through core/diagram/impossible-inputs.ts): the wheels then
  * carry nothing, so the aircraft would leave the ground before lift-off speed.
  *
  * Hand derivation: the mean forces act at 0.7 V_LOF (Raymer, Aircraft Design:
