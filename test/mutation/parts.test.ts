@@ -18,10 +18,12 @@ describe('the parts of `npm run test:mutation`', () => {
     expect(mutated).toContain('core/*.ts');
   });
 
-  it('each run the tests of a folder that exists in test/core', () => {
+  it('each run the tests of a folder or file that exists in test/core', () => {
     for (const part of parts) {
       for (const tests of part.tests) {
-        if (!tests.includes('*')) expect(statSync(join(root, 'test/core', tests)).isDirectory(), `${part.name}: test/core/${tests}`).toBe(true);
+        if (tests.includes('*')) continue;
+        const found = statSync(join(root, 'test/core', tests));
+        expect(tests.endsWith('.test.ts') ? found.isFile() : found.isDirectory(), `${part.name}: test/core/${tests}`).toBe(true);
       }
       for (const skipped of part.skip ?? []) expect(statSync(join(root, 'test/core', skipped)).isFile(), `${part.name}: test/core/${skipped}`).toBe(true);
     }
