@@ -43,7 +43,7 @@ export type ThreadAnswer = { parts: ProbabilityPart[]; timing: ThreadTiming } | 
 /**
  * Runs this worker: waits for the run, claims samples until none is left,
  * posts the counts back, then calls `afterAnswer` (the loader writes the code
- * cache there, so it holds what the run compiled). Does nothing outside a
+ * cache there, off the way of the run). Does nothing outside a
  * Monte Carlo worker.
  */
 export function runThread(afterAnswer: () => void = () => {}): void {
