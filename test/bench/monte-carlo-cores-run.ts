@@ -73,6 +73,10 @@ for (let r = 0; r < RUNS; r++) {
     if (main) {
       note('main: samples run', main.samples);
       note('main: CPU per 1,000 samples, ms', (1000 * (main.cpuAtDone - main.cpuAtReady)) / main.samples);
+      // The same run's two threads side by side, under the same load: steadier than either median alone.
+      for (const t of timings.filter((t) => t.thread !== 'main')) {
+        note('worker over main, CPU per sample, %', (100 * ((t.cpuAtDone - t.cpuAtReady) / t.samples)) / ((main.cpuAtDone - main.cpuAtReady) / main.samples));
+      }
     }
     const spent = process.cpuUsage(used);
     cpu[workers].push((spent.user + spent.system) / 1000);
