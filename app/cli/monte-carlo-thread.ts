@@ -11,7 +11,7 @@
 import { isMainThread, parentPort, threadId, workerData } from 'node:worker_threads';
 import type { Design } from '../../core/model';
 import type { ProbabilityPart } from '../../core/studies/monte-carlo';
-import { now, runClaims, threadParameters, type MonteCarloJob, type PlainParameter, type ThreadTiming } from './monte-carlo-claims';
+import { now, runClaims, sharedTexts, threadParameters, type MonteCarloJob, type PlainParameter, type ThreadTiming } from './monte-carlo-claims';
 
 /** In workerData: marks a Monte Carlo worker. */
 export const THREAD_MARKER = 'loftpoint-monte-carlo-thread';
@@ -43,7 +43,7 @@ export type ThreadAnswer = { parts: ProbabilityPart[]; timing: ThreadTiming } | 
 /**
  * Runs this worker: waits for the run, claims samples until none is left,
  * posts the counts back, then calls `afterAnswer` (the loader writes the code
- * cache there, so it holds what the run compiled). Does nothing outside a
+ * cache there, off the way of the run). Does nothing outside a
  * Monte Carlo worker.
  */
 export function runThread(afterAnswer: () => void = () => {}): void {
@@ -53,7 +53,8 @@ export function runThread(afterAnswer: () => void = () => {}): void {
   const timing: ThreadTiming = { thread: `worker ${threadId}`, askedAt, loadedAt: now(), readyAt: 0, doneAt: 0, samples: 0, claims: 0, cpuAtReady: NaN, cpuAtDone: NaN };
   port.once('message', ({ job, threads, design, concept, parameters }: ThreadJob) => {
     try {
-      const ranged = threadParameters(parameters, design, concept);
+      // Texts as V8 shares them, as in a design read on this thread (sharedTexts says why).
+      const ranged = threadParameters(sharedTexts(parameters), sharedTexts(design), sharedTexts(concept));
       const words = new Int32Array(shared);
       Atomics.store(words, slot, 1);
       const parts = runClaims(design, ranged, job, words, threads, timing);

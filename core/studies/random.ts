@@ -75,20 +75,32 @@ export function mersenneTwisterByArray(key: readonly number[]): RandomStream {
   return streamFrom(state);
 }
 
-function streamFrom(state: Uint32Array): RandomStream {
-  let index = N;
+/**
+ * The generator itself: one class, so every stream shares its methods and
+ * their compiled code (a stream of closures made new for each stream leaves
+ * the optimised sampling loop calling a function it has not seen at every
+ * new block, and V8 compiles that loop again).
+ */
+class TwisterStream implements RandomStream {
+  private readonly state: Uint32Array;
+  private index = N;
 
-  function twist(): void {
+  constructor(state: Uint32Array) {
+    this.state = state;
+  }
+
+  private twist(): void {
+    const state = this.state;
     for (let i = 0; i < N; i++) {
       const y = (state[i] & UPPER) | (state[(i + 1) % N] & LOWER);
       state[i] = state[(i + M) % N] ^ (y >>> 1) ^ (y & 1 ? MATRIX_A : 0);
     }
-    index = 0;
+    this.index = 0;
   }
 
-  function nextUint32(): number {
-    if (index >= N) twist();
-    let y = state[index++];
+  nextUint32(): number {
+    if (this.index >= N) this.twist();
+    let y = this.state[this.index++];
     // Tempering (Matsumoto and Nishimura 1998, eq. 2.2-2.5).
     y ^= y >>> 11;
     y ^= (y << 7) & 0x9d2c5680;
@@ -97,15 +109,16 @@ function streamFrom(state: Uint32Array): RandomStream {
     return y >>> 0;
   }
 
-  return {
-    nextUint32,
-    nextUnit() {
-      // genrand_res53 of the reference implementation: 27 + 26 bits over 2^53.
-      const a = nextUint32() >>> 5;
-      const b = nextUint32() >>> 6;
-      return (a * 67108864 + b) / 9007199254740992;
-    },
-  };
+  nextUnit(): number {
+    // genrand_res53 of the reference implementation: 27 + 26 bits over 2^53.
+    const a = this.nextUint32() >>> 5;
+    const b = this.nextUint32() >>> 6;
+    return (a * 67108864 + b) / 9007199254740992;
+  }
+}
+
+function streamFrom(state: Uint32Array): RandomStream {
+  return new TwisterStream(state);
 }
 
 export type Distribution = 'uniform' | 'triangular';

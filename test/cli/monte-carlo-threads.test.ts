@@ -10,7 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_CONCEPTS, evaluateDesign, parseConcept, probabilityMap } from '../../core';
-import { plainParameters, threadParameters, type ThreadTiming } from '../../app/cli/monte-carlo-claims';
+import { plainParameters, sharedTexts, threadParameters, type ThreadTiming } from '../../app/cli/monte-carlo-claims';
 import { startMonteCarloThreads } from '../../app/cli/monte-carlo-workers';
 import { studySettings, type StudyInput } from '../../app/report/studies';
 // @ts-expect-error plain JavaScript module without types
@@ -90,5 +90,28 @@ describe('the ranged assumptions sent to a worker', () => {
       expect(JSON.stringify(again[i].apply(input.design, value))).toBe(JSON.stringify(p.apply(input.design, value)));
       expect(JSON.stringify(again[i].apply(input.design, value))).not.toBe(JSON.stringify(input.design));
     });
+  });
+});
+
+describe('the texts of what a worker receives, made shared copies', () => {
+  it('keeps every value, at any depth, and the object itself', () => {
+    const looped: Record<string, unknown> = { kind: 'stall', ids: ['cruise', { id: 'ceiling' }], cd0: 0.02, zero: -0, samples: new Float64Array([1.5, Number.NaN]) };
+    looped.self = looped;
+    const copy = structuredClone(looped);
+    expect(sharedTexts(copy)).toBe(copy);
+    expect(copy).toEqual(looped);
+    expect(Object.is(copy.zero, -0)).toBe(true);
+    expect(copy.self).toBe(copy);
+  });
+
+  it('leaves a design sent to another thread equal to the one read, so the samples draw the same map', () => {
+    const { input, seed, grid, parameters } = businessJet(200, 3);
+    const design = sharedTexts(structuredClone(input.design));
+    expect(design).toEqual(input.design);
+    const ranged = threadParameters(sharedTexts(structuredClone(plainParameters(parameters))), design, sharedTexts(structuredClone(input.concept)));
+    const there = probabilityMap(design, ranged, { seed, samples: 200, grid })!;
+    const here = probabilityMap(input.design, parameters, { seed, samples: 200, grid })!;
+    expect(Buffer.from(there.probability.buffer).equals(Buffer.from(here.probability.buffer))).toBe(true);
+    expect(there.designPoint).toEqual(here.designPoint);
   });
 });
