@@ -270,6 +270,34 @@ describe('probabilityMapRun counted by hand', () => {
     expect(map.optimumSpread).toBeUndefined();
   });
 
+  it('a part is what was counted when it was taken: running on does not change it', () => {
+    const run = probabilityMapRun(CONCEPT, params, options);
+    run.step(250);
+    const part = run.part();
+    run.step(500);
+    const hand = countByHand(limits.slice(0, 250));
+    expect(part.end).toBe(250);
+    expect(part.metAll).toBe(hand.metLanding);
+    expect(Array.from(part.metEach)).toEqual([250, hand.metLanding]);
+    // The optimum spread holds one entry per sample counted, not a slot for every sample of the run.
+    expect(Array.from(part.optimumW)).toEqual(hand.optimumW);
+    expect(Array.from(part.optimumY)).toEqual(hand.optimumW.map((w) => (w === w ? 0 : NaN)));
+    // counts[i (ny + 1) + k] holds the samples whose lowest row met in column i is k; with no curve a column
+    // met at all is met from row 0, so k = 0 counts the samples meeting w (at or below both stall limits).
+    expect(WS.map((_, i) => part.counts[i * (GRID.ny + 1)])).toEqual(hand.met);
+  });
+
+  it('a map is a copy: writing into one leaves the next map of the same run as it was', () => {
+    const run = probabilityMapRun(CONCEPT, params, options);
+    run.step(100);
+    const first = run.result();
+    first.wingLoadings[0] = -1;
+    first.loadings[0] = -1;
+    const second = run.result();
+    expect(second.wingLoadings[0]).toBe(600);
+    expect(second.loadings[0]).toBe(0);
+  });
+
   it('refuses a part counted for a concept with other requirements', () => {
     const run = probabilityMapRun(CONCEPT, params, options);
     const more = design({ requirements: [...CONCEPT.requirements, stall(40 * KNOT_MPS, { id: 'third' })], designPoint: POINT });
