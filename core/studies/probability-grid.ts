@@ -43,7 +43,10 @@ export function firstRowAtOrAbove(ys: Float64Array, v: number): number {
 /**
  * A grid that shows the study: the wing-loading range the diagram plots, and
  * loadings from 0 to twice the larger of the optimum's and the design
- * point's.
+ * point's. When neither needs any loading (only limits, or no wing loading
+ * can be met and there is no design point): 0 to 1 in thrust-to-weight, 0 to
+ * 30 W/N in power-to-weight (above the 10-20 W/N of light propeller aircraft,
+ * from memory).
  */
 export function defaultProbabilityGrid(design: Design, nx = 200, ny = 200): ProbabilityGrid {
   const optimum = optimumOf(design);
