@@ -28,6 +28,11 @@ describe('a ground run whose lift equals the weight at the mean-force speed', ()
     expect(found[0].message).toContain('lift at or above the weight during the roll, so no wheel load: zero or negative rolling friction');
   });
 
+  it('is accepted with no rolling friction: the friction term mu (1 - L/W) is 0 whatever the lift', () => {
+    const found = impossibleInputs(design({ aircraft: plane, requirements: [takeoffRoll(300, { clGroundRun: 1, liftoffSpeedFactor: 2, rollingFriction: 0 })], rangePa: [100, 2000] }));
+    expect(found.filter((i) => i.field === 'requirements[0].clGroundRun')).toEqual([]);
+  });
+
   it('is accepted just below: C_L,g 0.99 gives L/W = 0.99', () => {
     const found = impossibleInputs(design({ aircraft: plane, requirements: [takeoffRoll(300, { clGroundRun: 0.99, liftoffSpeedFactor: 2, rollingFriction: 0.04 })], rangePa: [100, 2000] }));
     expect(found.filter((i) => i.field === 'requirements[0].clGroundRun')).toEqual([]);
