@@ -40,17 +40,24 @@ export interface DraftMirror {
   save(drafts: Record<string, unknown>): Promise<void>;
 }
 
+/** One call over HTTP: the answer sent ahead for it when there is one (early-requests.ts), else a POST with the launch token. */
+function postCall(fetcher: typeof fetch, token: string, early: EarlyAnswers, method: string, body: string): Promise<Response> {
+  return (
+    early(method, body) ??
+    fetcher(`./api/${method}`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
+      body,
+      credentials: 'same-origin',
+      cache: 'no-store',
+    })
+  );
+}
+
 export function httpDrafts(token: string, fetcher: typeof fetch = fetch, early: EarlyAnswers = takeEarlyRequest): DraftMirror {
   const post = async (method: string, request: unknown): Promise<unknown> => {
     const body = JSON.stringify(request);
-    const response = await (early(method, body) ??
-      fetcher(`./api/${method}`, {
-        method: 'POST',
-        headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
-        body,
-        credentials: 'same-origin',
-        cache: 'no-store',
-      }));
+    const response = await postCall(fetcher, token, early, method, body);
     return response.json();
   };
   return {
@@ -94,14 +101,7 @@ export function httpService(token: string, fetcher: typeof fetch = fetch, early:
     let response: Response;
     const body = JSON.stringify(request ?? {});
     try {
-      response = await (early(method, body) ??
-        fetcher(`./api/${method}`, {
-          method: 'POST',
-          headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
-          body,
-          credentials: 'same-origin',
-          cache: 'no-store',
-        }));
+      response = await postCall(fetcher, token, early, method, body);
     } catch {
       return { ok: false, error: { code: 'io', message: 'The Loftpoint server is not answering; is `loftpoint serve` still running?' } };
     }
