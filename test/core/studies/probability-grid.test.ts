@@ -28,6 +28,8 @@ describe('firstRowAtOrAbove', () => {
     Float64Array.from({ length: 11 }, (_, j) => j * 0.1),
     Float64Array.from({ length: 201 }, (_, j) => (j * 7) / 3),
     Float64Array.from({ length: 37 }, (_, j) => 0.3 + j * 0.07),
+    // A grid may start below zero (checkedGrid asks only low < high): rows -1 to 1, symmetric about 0.
+    Float64Array.from({ length: 21 }, (_, j) => -1 + j * 0.1),
   ];
 
   it('finds the first row at or above each row value, and the values one ulp either side of it', () => {
