@@ -8,16 +8,15 @@
 import { minimumDragCoefficient, polarOf, type Polar } from '../aero/drag-polar';
 import { loadingAxis, type Design } from '../model';
 import { requirementKind } from '../requirements';
+import { messageNumber } from '../units/message-number';
 import { requirementBoundaries } from './boundaries';
 import { DEFAULT_SAMPLES, plotRange } from './evaluate';
 import { sampleWingLoadings } from './sampling';
-import { messageNumber } from '../units/message-number';
 
 export interface ImpossibleInput {
   field: string;
   message: string;
 }
-
 
 function polarInputs(design: Design, out: ImpossibleInput[]): void {
   const { aircraft } = design;

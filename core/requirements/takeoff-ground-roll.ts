@@ -10,12 +10,11 @@ import type { Aircraft } from '../aircraft';
 import { MEAN_ROLL_SPEED_FRACTION, takeoffGroundRollBoundary, type TakeoffGroundRollRequirement } from '../constraints/takeoff-ground-roll';
 import { quantityField } from '../concept/quantity-field';
 import { formatQuantity } from '../units/display';
+import { messageNumber } from '../units/message-number';
 import { defineRequirement } from './descriptor';
 import { lengthValue, mark, numberValue, plain, speedFactor } from './fields';
-import { messageNumber } from '../units/message-number';
 
 export type { TakeoffGroundRollRequirement };
-
 
 /**
  * A ground-run lift coefficient at or above C_Lmax lifts the aircraft before lift-off speed; one whose lift at the
@@ -30,10 +29,12 @@ function groundRunRefusals(r: TakeoffGroundRollRequirement, aircraft: Aircraft):
   const k = MEAN_ROLL_SPEED_FRACTION * r.liftoffSpeedFactor;
   const liftOverWeight = (k * k * r.clGroundRun) / polar.clMax;
   if (r.rollingFriction > 0 && !(liftOverWeight < 1)) {
-    return [{
-      field: 'clGroundRun',
-      message: `${messageNumber(r.clGroundRun)} with lift-off at ${messageNumber(r.liftoffSpeedFactor)} V_s gives lift at or above the weight during the roll, so no wheel load: zero or negative rolling friction (requirement "${r.id}"); use a smaller ground-run C_L`,
-    }];
+    return [
+      {
+        field: 'clGroundRun',
+        message: `${messageNumber(r.clGroundRun)} with lift-off at ${messageNumber(r.liftoffSpeedFactor)} V_s gives lift at or above the weight during the roll, so no wheel load: zero or negative rolling friction (requirement "${r.id}"); use a smaller ground-run C_L`,
+      },
+    ];
   }
   return [];
 }
