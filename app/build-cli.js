@@ -148,6 +148,8 @@ export async function buildCli(root = defaultRoot) {
   entries.cli = outputOf(single, ENTRIES.loftpoint);
   const cache = await makeCodeCache(join(outdir, entries.cli));
   if (cache) written.add(basename(cache));
+  const demoChecks = await recordDemoChecks(join(outdir, entries.cli));
+  if (demoChecks) written.add(basename(demoChecks));
   // The worker's caches of this very file (one per set of Node options) stay valid.
   for (const name of readdirSync(outdir)) if (name.startsWith(`${thread.file}.`) && name.endsWith('.cache')) written.add(name);
   // The sources the launcher compares with the build: our own files, the build scripts, and the
@@ -205,6 +207,24 @@ async function makeCodeCache(bundle) {
     return null;
   } finally {
     rmSync(folder, { recursive: true, force: true });
+  }
+}
+
+/**
+ * The demo concepts checked and evaluated by the single file `bundle` itself, kept beside it
+ * (app/service/demo-checks.ts), so that a new project with the demos (browser mode's first start)
+ * need not evaluate them again. Answers the file, or null when they could not be worked out
+ * (a new project then evaluates the demos as it is made).
+ */
+async function recordDemoChecks(bundle) {
+  try {
+    const { exports } = loadBuiltCli(bundle, 'off');
+    const checks = await exports.demoChecksForBuild();
+    if (!checks) return null;
+    writeWhole(checks.file, checks.text);
+    return checks.file;
+  } catch {
+    return null;
   }
 }
 

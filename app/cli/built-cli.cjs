@@ -98,6 +98,8 @@ function loadBuiltCli(bundle, cache = 'use') {
   const write = cache === 'write' || (cache === 'use' && (cachedData === undefined || script.cachedDataRejected === true));
   return {
     main: module.exports.main,
+    /** Every export of the bundle (the build also asks it for the demo checks it keeps beside it). */
+    exports: module.exports,
     saveCache() {
       if (!write) return false;
       try {

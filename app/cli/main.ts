@@ -56,3 +56,14 @@ export async function main(argv: string[], io: CliIO = processIO): Promise<numbe
     return EXIT_FAILURE;
   }
 }
+
+/**
+ * For the build (app/build-cli.js): the demo concepts checked and evaluated now, and the file this
+ * single-file build keeps them in (app/service/demo-checks.ts); null from anything but the single
+ * file. Loads the service only when called.
+ */
+export async function demoChecksForBuild(): Promise<{ file: string; text: string } | null> {
+  const [{ freshDemoChecksText }, { ownDemoChecksFile }] = await Promise.all([import('../service/engine'), import('../service/demo-checks')]);
+  const file = ownDemoChecksFile();
+  return file === null ? null : { file, text: freshDemoChecksText() };
+}

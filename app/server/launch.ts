@@ -15,6 +15,7 @@ import { startBrowserServer, type BrowserServer, type PageStep } from './server'
 import { rendererFolders } from './static-files';
 import { createLaunchToken } from './token';
 import { makeProjectOnWorker, singleFileBuild, type SingleFileBuild } from './new-project-worker';
+import { demoChecksFile } from '../service/demo-checks';
 
 const PROJECT_ROOT = fileURLToPath(new URL('../..', import.meta.url));
 
@@ -141,11 +142,14 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
   onListening(server.url);
   if (!begun) moment ??= setTimeout(begin, OPEN_PROJECT_AFTER_MS);
   const workerBuild = options.workerBuild === undefined ? singleFileBuild() : options.workerBuild;
-  // A new project is begun on a worker thread at once; this thread then loads the service and the engine while
-  // the browser comes for the page, so the project opens the moment the worker is done.
   const existed = existsSync(target);
+  // Where the build recorded the demos' checks beside the single file, a new project is only a file to write:
+  // this thread makes it at once, as soon as it has loaded the service, long before the browser asks.
+  const quickToMake = !existed && workerBuild !== null && existsSync(demoChecksFile(workerBuild.bundle));
+  // Otherwise a new project is begun on a worker thread at once; this thread then loads the service and the
+  // engine while the browser comes for the page, so the project opens the moment the worker is done.
   let onWorker: Promise<boolean> | null = null;
-  if (!existed && workerBuild) {
+  if (!existed && workerBuild && !quickToMake) {
     try {
       if (!options.project) mkdirSync(dataFolder, { recursive: true });
       onWorker = makeProjectOnWorker(workerBuild, target, newProjectName(options.project, target));
@@ -163,7 +167,7 @@ export async function launchBrowserMode(options: LaunchOptions, onListening: (ur
     // is made here once the page is on its way, with this thread's own error.
     opened = await loaded.openOrCreateProject(loaded.service, options.project, dataFolder, {
       existed,
-      beforeCreating: () => pageLoading,
+      beforeCreating: () => (quickToMake ? Promise.resolve() : pageLoading),
       ...(onWorker ? { makeElsewhere: async () => (madeOnWorker = await onWorker) } : {}),
     });
   } catch (error) {

@@ -4,6 +4,7 @@
  */
 import { DEMO_CONCEPTS, evaluateDesign, loadingAxis, parseConcept, parseConceptText, type ParsedConcept } from '../../core';
 import type { ConceptIssue, EvaluationSummary } from './contract';
+import { demoChecksText, matchingDemoChecks, ownDemoChecksFile, readDemoChecks } from './demo-checks';
 import { ServiceFailure } from './failure';
 import { failedSummary, summarise } from './summary';
 
@@ -74,10 +75,35 @@ export function demoConcepts(): DemoConcept[] {
 
 /** Each demo concept's check and evaluation, by its concept object: the demos are constants and the engine is pure. */
 const checkedDemos = new WeakMap<object, CheckedConcept>();
+let recordedRead = false;
+
+/**
+ * The checks the build recorded beside the single file this runs from (app/service/demo-checks.ts),
+ * taken once per process for the demos they still match.
+ */
+function takeRecordedChecks(): void {
+  if (recordedRead) return;
+  recordedRead = true;
+  const text = readDemoChecks(ownDemoChecksFile());
+  if (text === null) return;
+  for (const [demo, checked] of matchingDemoChecks(text, DEMO_CONCEPTS as readonly DemoConcept[])) checkedDemos.set(demo.concept as object, checked);
+}
+
+/** True when every demo concept's check is known without evaluating it (recorded by the build). */
+export function demoChecksKnown(): boolean {
+  takeRecordedChecks();
+  return (DEMO_CONCEPTS as readonly DemoConcept[]).every((demo) => demo.concept !== null && typeof demo.concept === 'object' && checkedDemos.has(demo.concept));
+}
+
+/** The text of the file the build keeps beside its single file: every demo checked and evaluated now. */
+export function freshDemoChecksText(): string {
+  return demoChecksText(demoConcepts(), (demo) => checkAndEvaluate(demo.concept, `demo concept "${demo.title}"`));
+}
 
 /** A demo concept checked and evaluated, once per process (a demo the engine refuses throws every time). */
 export function checkedDemo(demo: DemoConcept): CheckedConcept {
   const key = demo.concept && typeof demo.concept === 'object' ? demo.concept : null;
+  takeRecordedChecks();
   const known = key ? checkedDemos.get(key) : undefined;
   if (known) return known;
   const checked = checkAndEvaluate(demo.concept, `demo concept "${demo.title}"`);

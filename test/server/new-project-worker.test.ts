@@ -1,11 +1,12 @@
-import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { copyFileSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { dirname, join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
 // @ts-expect-error plain JavaScript module without types
 import { builtEntry, defaultRoot } from '../../app/build-cli.js';
 import { createService, invokeService } from '../../app/service';
+import { demoChecksFile } from '../../app/service/demo-checks';
 import { launchBrowserMode, LaunchError } from '../../app/server/launch';
 import { makeProjectOnWorker, singleFileBuild, type SingleFileBuild } from '../../app/server/new-project-worker';
 import { DEMO_CONCEPTS } from '../../core';
@@ -79,35 +80,62 @@ describe('a new project made on a worker thread', () => {
     expect(readdirSync(folder).filter((name) => name.endsWith('.creating'))).toEqual([]);
   });
 
-  it('serves the project it made as new, with every demo concept from the first answer', { timeout: 60_000 }, async () => {
-    const project = join(folder, 'Served.loftpoint');
+  /** Browser mode on a new project `name` run from `from`: where it was made, and the concepts its API lists first. */
+  async function serveNew(name: string, from: SingleFileBuild) {
+    const project = join(folder, `${name}.loftpoint`);
     let address = '';
-    const mode = await launchBrowserMode({ port: 0, project, rendererDir: page, workerBuild: build }, (url) => (address = url));
+    const mode = await launchBrowserMode({ port: 0, project, rendererDir: page, workerBuild: from }, (url) => (address = url));
     try {
-      expect(mode.created).toBe(true);
-      expect(mode.madeOnWorker).toBe(true);
-      expect(mode.project.conceptCount).toBe(DEMO_CONCEPTS.length);
       const url = new URL(address);
       const answer = await fetch(`${url.origin}/api/listConcepts`, {
         method: 'POST',
         headers: { 'Content-Type': 'application/json', 'X-Loftpoint-Token': url.hash.replace('#token=', '') },
         body: '{}',
       }).then((response) => response.json());
-      expect(answer.value.map((concept: { name: string }) => concept.name)).toEqual(DEMO_CONCEPTS.map((demo) => demo.title));
+      return { created: mode.created, madeOnWorker: mode.madeOnWorker, conceptCount: mode.project.conceptCount, listed: answer.value.map((concept: { name: string }) => concept.name) };
     } finally {
       await mode.close();
     }
+  }
+
+  /** A copy of the single file beside it, for which the build recorded no demo checks (there the worker makes a new project). */
+  function withoutRecordedChecks<T>(run: (from: SingleFileBuild) => Promise<T>): Promise<T> {
+    const copy = join(dirname(build.bundle), `worker-test-${process.pid}.cjs`);
+    copyFileSync(build.bundle, copy);
+    expect(existsSync(demoChecksFile(copy))).toBe(false);
+    return run({ ...build, bundle: copy }).finally(() => rmSync(copy, { force: true }));
+  }
+
+  it('serves the project it made as new, with every demo concept from the first answer', { timeout: 60_000 }, async () => {
+    const served = await withoutRecordedChecks((from) => serveNew('Served', from));
+    expect(served).toEqual({ created: true, madeOnWorker: true, conceptCount: DEMO_CONCEPTS.length, listed: DEMO_CONCEPTS.map((demo) => demo.title) });
   });
 
-  it('still names --project when the project cannot be made, the worker having failed first', { timeout: 60_000 }, async () => {
+  it('makes a new project on its own thread at once where the build recorded the demo checks', { timeout: 60_000 }, async () => {
+    expect(existsSync(demoChecksFile(build.bundle))).toBe(true);
+    const served = await serveNew('Quick', build);
+    expect(served).toEqual({ created: true, madeOnWorker: false, conceptCount: DEMO_CONCEPTS.length, listed: DEMO_CONCEPTS.map((demo) => demo.title) });
+    // The same versions and evaluations as a project whose demos were evaluated as it was made.
+    const here = join(folder, 'Evaluated.loftpoint');
+    const service = createService();
+    expect((await invokeService(service, 'createProject', { file: here, name: 'Evaluated', demo: true })).ok).toBe(true);
+    await invokeService(service, 'closeProject', {});
+    const comparable = (versions: Awaited<ReturnType<typeof versionsOf>>['versions']) => versions.map(({ createdAt: _at, author: _by, ...rest }) => rest);
+    expect(comparable((await versionsOf(join(folder, 'Quick.loftpoint'))).versions)).toEqual(comparable((await versionsOf(here)).versions));
+  });
+
+  it('still names --project when the project cannot be made, the worker having failed first or not started', { timeout: 60_000 }, async () => {
     const project = join(folder, 'missing-folder', 'New.loftpoint');
-    const refusal = await launchBrowserMode({ port: 0, project, rendererDir: page, workerBuild: build }).then(
-      () => null,
-      (error: unknown) => error,
-    );
-    expect(refusal).toBeInstanceOf(LaunchError);
-    expect((refusal as LaunchError).field).toBe('--project');
-    expect((refusal as LaunchError).message).toContain('does not exist');
+    const refusal = (from: SingleFileBuild) =>
+      launchBrowserMode({ port: 0, project, rendererDir: page, workerBuild: from }).then(
+        () => null,
+        (error: unknown) => error,
+      );
+    for (const refused of [await withoutRecordedChecks(refusal), await refusal(build)]) {
+      expect(refused).toBeInstanceOf(LaunchError);
+      expect((refused as LaunchError).field).toBe('--project');
+      expect((refused as LaunchError).message).toContain('does not exist');
+    }
     expect(existsSync(project)).toBe(false);
   });
 });
