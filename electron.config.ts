@@ -36,7 +36,8 @@ export default defineConfig({
     root: rendererRoot,
     build: {
       ...rendererConfig.build,
-      rolldownOptions: { input: resolve(rendererRoot, 'index.html') },
+      // The same chunks as plain Vite's build (the window's start in one script), from this entry.
+      rolldownOptions: { ...rendererConfig.build?.rolldownOptions, input: resolve(rendererRoot, 'index.html') },
     },
   },
 });

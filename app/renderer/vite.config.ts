@@ -59,6 +59,35 @@ function earlyRequests(): Plugin {
   };
 }
 
+/**
+ * The window's start in one module script: every module the page imports statically from its entry
+ * (the window's first view) is bundled into one chunk, instead of a dozen small chunks the bundler
+ * would make for the ways the later tabs share them. Each file the page must fetch and instantiate
+ * before the first diagram costs the browser a request and a module of its own, on a machine
+ * that is busy starting everything at once. The early module stays its own small file.
+ */
+function windowStart(): { plugin: Plugin; holds: (id: string) => boolean } {
+  const startup = new Set<string>();
+  const plugin: Plugin = {
+    name: 'loftpoint-window-start',
+    apply: 'build',
+    buildEnd() {
+      startup.clear();
+      const entries = [...this.getModuleIds()].filter((id) => this.getModuleInfo(id)?.isEntry && id.endsWith('.html'));
+      const queue = [...entries];
+      while (queue.length > 0) {
+        const id = queue.pop()!;
+        if (startup.has(id)) continue;
+        startup.add(id);
+        for (const next of this.getModuleInfo(id)?.importedIds ?? []) queue.push(next);
+      }
+    },
+  };
+  return { plugin, holds: (id) => startup.has(id) && id !== EARLY_REQUESTS };
+}
+
+const start = windowStart();
+
 export const rendererRoot = here;
 export const rendererOutDir = fileURLToPath(new URL('../../out/renderer', import.meta.url));
 
@@ -66,7 +95,7 @@ export const rendererConfig: UserConfig = {
   root: here,
   // Relative asset paths: the page loads from file:// in the desktop window and from http:// in browser mode.
   base: './',
-  plugins: [svelte(), contentSecurityPolicy(), earlyRequests()],
+  plugins: [svelte(), contentSecurityPolicy(), earlyRequests(), start.plugin],
   build: {
     outDir: rendererOutDir,
     emptyOutDir: true,
@@ -78,6 +107,16 @@ export const rendererConfig: UserConfig = {
     reportCompressedSize: false,
     // The page loads from the local disk or 127.0.0.1, never over a network: one ~0.6 MB bundle is fine.
     chunkSizeWarningLimit: 1024,
+    rolldownOptions: {
+      output: {
+        codeSplitting: {
+          groups: [
+            { name: 'early-requests', test: (id: string) => id === EARLY_REQUESTS, priority: 2 },
+            { name: 'window', test: start.holds, priority: 1 },
+          ],
+        },
+      },
+    },
   },
   // Pure core code runs in the page; nothing from Node is bundled.
   resolve: { conditions: ['browser'] },

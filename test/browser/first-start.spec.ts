@@ -68,6 +68,10 @@ test('the first calls go out from the small module loaded ahead of the window, a
   const scripts = await page.locator('head script[src]').evaluateAll((tags) => tags.map((tag) => `${tag.getAttribute('src')} ${tag.hasAttribute('async') ? 'async' : ''}`.trim()));
   expect(scripts[0]).toMatch(/^\.\/assets\/early-requests-[\w-]+\.js async$/);
   expect(scripts.length).toBe(2);
+  // The window's start is one script besides it: the page names no further module for the first view (the later
+  // tabs add their own files once the diagram is drawn).
+  const named = await page.locator('head link[rel="modulepreload"]').evaluateAll((links) => links.map((link) => link.getAttribute('href')));
+  expect(named.filter((href) => href?.startsWith('./'))).toEqual([scripts[0]!.replace(' async', '')]);
   for (const first of ['getProject {}', 'keptDrafts {}', 'listConcepts {}']) expect(asked).toContain(first);
   expect(asked.some((call) => call.startsWith('getVersion '))).toBe(true);
   expect(asked.some((call) => call.startsWith('listVersions '))).toBe(true);
