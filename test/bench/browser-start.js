@@ -6,10 +6,13 @@
 // way, serving a page that draws one SVG path. Chromium is started once
 // beforehand and is not in either time. Run: node test/bench/browser-start.js
 //
-// Target: under 1 s from launch to the first diagram. A new project is made on
-// a worker thread while the page loads (app/server/new-project-worker.ts); the
-// window draws the diagram first and fills its side panels in the next frame,
-// which the breakdown shows as "window ready".
+// Target: under 1 s from launch to the first diagram. A new project is written
+// by the server at once, with the demo checks the build recorded beside its
+// single file (app/service/demo-checks.ts; without them, on a worker thread
+// while the page loads, app/server/new-project-worker.ts); the window draws the
+// diagram first and fills its side panels in the next frame, which the
+// breakdown shows as "window ready". Both pages are watched in every animation
+// frame, so a time is the frame the curve is first drawn in.
 import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync, watch } from 'node:fs';
 import { loadavg, tmpdir } from 'node:os';
@@ -31,14 +34,25 @@ process.on('SIGTERM', () => server.close(() => process.exit(0)));
 // Put in the page before its own script: when the window is first mounted, when the first curve appears, and
 // when the window reads as ready (the side panels filled, which the window does in the frame after the diagram).
 const PAGE_MARKS = `
-window.__startMarks = { mounted: null, curve: null, ready: null };
-new MutationObserver((changes, observer) => {
+window.__startMarks = { mounted: null, curve: null, drawn: null, ready: null };
+{
   const marks = window.__startMarks;
-  if (marks.mounted === null && document.getElementById('app')?.firstElementChild) marks.mounted = performance.now();
-  if (marks.curve === null && document.querySelector('[data-testid^="curve-"]')) marks.curve = performance.now();
-  if (marks.ready === null && document.querySelector('[data-testid="window"][data-ready="true"]')) marks.ready = performance.now();
-  if (marks.curve !== null && marks.ready !== null) observer.disconnect();
-}).observe(document, { childList: true, subtree: true, attributes: true, attributeFilter: ['data-ready'] });
+  // The frame that draws the curve: the next animation frame, then a task, which runs once that frame is painted.
+  const drawnAfterPaint = () => requestAnimationFrame(() => setTimeout(() => {
+    const box = document.querySelector('[data-testid^="curve-"]')?.getBoundingClientRect();
+    if (box && (box.width > 0 || box.height > 0)) marks.drawn = performance.now();
+    else drawnAfterPaint();
+  }, 0));
+  new MutationObserver((changes, observer) => {
+    if (marks.mounted === null && document.getElementById('app')?.firstElementChild) marks.mounted = performance.now();
+    if (marks.curve === null && document.querySelector('[data-testid^="curve-"]')) {
+      marks.curve = performance.now();
+      drawnAfterPaint();
+    }
+    if (marks.ready === null && document.querySelector('[data-testid="window"][data-ready="true"]')) marks.ready = performance.now();
+    if (marks.curve !== null && (marks.ready !== null || !document.getElementById('app'))) observer.disconnect();
+  }).observe(document, { childList: true, subtree: true, attributes: true, attributeFilter: ['data-ready'] });
+}
 `;
 
 /** Where the time went in one launch, in ms from launch: read from the page's own clock and resource timings. */
@@ -62,16 +76,18 @@ async function pageBreakdown(page, launchedAt, addressAt, projectAt) {
     firstApi: apiBefore.length ? at(apiBefore[0].start) : null,
     lastApi: apiBefore.length ? at(apiBefore[apiBefore.length - 1].end) : null,
     curve: at(seen.curve),
+    drawn: at(seen.drawn),
     ready: at(seen.ready),
     calls: apiBefore.map((call) => `${call.method} ${Math.round(call.end - call.start)}`),
   };
 }
 
 /**
- * Starts a server, waits for its address line, opens it, waits for a curve; answers ms from launch (and, with
- * `breakdown`, where they went, with when the new project file `project` appeared whole: it is renamed into place).
+ * Starts a server, waits for its address line, opens it, waits for a curve; answers ms from launch to the frame that
+ * draws it (and pushes the time the test driver heard of it onto `driverSaw`; with `breakdown`, where the time went,
+ * with when the new project file `project` appeared whole: it is renamed into place).
  */
-async function launchToDiagram(browser, args, env, breakdown, project) {
+async function launchToDiagram(browser, args, env, { driverSaw, breakdown, project } = {}) {
   const launchedAt = performance.timeOrigin + performance.now();
   const start = performance.now();
   let projectAt = null;
@@ -93,10 +109,16 @@ async function launchToDiagram(browser, args, env, breakdown, project) {
     });
     const addressAt = performance.timeOrigin + performance.now();
     const page = await browser.newPage();
-    if (breakdown) await page.addInitScript(PAGE_MARKS);
+    await page.addInitScript(PAGE_MARKS);
     await page.goto(url);
-    await page.locator('[data-testid^="curve-"]').first().waitFor({ state: 'visible', timeout: 30_000 });
-    const ms = performance.now() - start;
+    // Timed by the page's own clock: when the frame that first draws a curve is painted. The test driver hears of
+    // it later, by as much as 0.2 s on a busy machine (its messages wait behind the page's and the server's work),
+    // which is not part of the start; that time is kept beside it.
+    await page.waitForFunction(() => window.__startMarks.drawn !== null, null, { polling: 'raf', timeout: 30_000 });
+    const seen = performance.now() - start;
+    const drawn = await page.evaluate(() => performance.timeOrigin + window.__startMarks.drawn);
+    const ms = drawn - launchedAt;
+    driverSaw?.push(seen);
     if (breakdown) {
       // Outside the timing: the whole window, side panels included.
       await page.locator('[data-testid="window"][data-ready="true"]').waitFor({ state: 'attached', timeout: 30_000 });
@@ -131,12 +153,14 @@ const folder = mkdtempSync(join(tmpdir(), 'loftpoint-start-'));
 try {
   const mode = [];
   const floor = [];
+  const modeSeen = [];
+  const floorSeen = [];
   const breakdown = [];
   const serve = (r) => {
     const project = join(folder, `start-${r}.loftpoint`);
-    return launchToDiagram(browser, [join(root, 'app/cli/browser-mode.js'), '--port', '0', '--project', project], { LOFTPOINT_DATA_DIR: join(folder, 'data') }, r === 'warm' ? undefined : breakdown, project);
+    return launchToDiagram(browser, [join(root, 'app/cli/browser-mode.js'), '--port', '0', '--project', project], { LOFTPOINT_DATA_DIR: join(folder, 'data') }, r === 'warm' ? {} : { driverSaw: modeSeen, breakdown, project });
   };
-  const bare = () => launchToDiagram(browser, ['-e', FLOOR_SERVER], {});
+  const bare = () => launchToDiagram(browser, ['-e', FLOOR_SERVER], {}, { driverSaw: floorSeen });
   await serve('warm'); // a stale build is rebuilt here, outside the timing
   for (let r = 0; r < RUNS; r++) {
     if (r % 2 === 0) {
@@ -154,14 +178,15 @@ try {
   console.log(`Browser mode, launch to first diagram, median (10th-90th percentile) of ${RUNS} interleaved runs; load average ${loadavg().map((x) => x.toFixed(2)).join(' ')}; a bare Node start ${Math.round(Number(nodeStart.stdout))} ms CPU`);
   console.log(`  loftpoint browser mode (new project)   ${fmt(m)}`);
   console.log(`  floor: bare server and one-path page   ${fmt(f)}   ratio ${(m.median / f.median).toFixed(1)}x`);
+  console.log(`  (the frame that draws the curve, by the page's clock; the test driver heard of it at ${fmt(stats(modeSeen))} and ${fmt(stats(floorSeen))})`);
   const median = (key) => {
     const values = breakdown.map((b) => b[key]).filter((v) => v !== null);
     return values.length ? `${Math.round(stats(values).median)}`.padStart(5) : '    -';
   };
   console.log('  where the time went (median ms from launch, each step on its own):');
   console.log(`    address printed ${median('address')}   page received ${median('html')}   page script received ${median('script')}   window mounted ${median('mounted')}`);
-  console.log(`    new project file written ${median('project')} (on the server's worker thread)`);
-  console.log(`    first API call sent ${median('firstApi')}   last API answer before the curve ${median('lastApi')}   first curve in the page ${median('curve')}`);
+  console.log(`    new project file written ${median('project')} (by the server, with the demo checks the build recorded)`);
+  console.log(`    first API call sent ${median('firstApi')}   last API answer before the curve ${median('lastApi')}   first curve in the page ${median('curve')}   drawn ${median('drawn')}`);
   console.log(`    window ready (side panels filled) ${median('ready')}`);
   console.log(`    API calls before the curve (ms each, last run): ${breakdown.at(-1)?.calls.join(', ') || 'none'}`);
   console.log(`Target under 1 s: ${m.median < 1000 ? 'met' : 'NOT met'}`);
