@@ -7,7 +7,8 @@
 import type { ChartData } from './series-types';
 import type { ChartScales, PlotArea } from './scales';
 import { clipToBand, type XY } from './clip';
-import { boxesOverlap, boxInside, segmentHitsBox, type Box } from './boxes';
+import { segmentHitsBox, type Box } from './boxes';
+import { bestOf } from './best-candidate';
 import { curveCandidates, limitCandidates, markerBox, noteCandidates, offPlot, type Candidate } from './label-candidates';
 import { segmentGrid } from './segment-grid';
 import { shorten } from './text';
@@ -100,31 +101,3 @@ export function placeLabels(data: ChartData, scales: ChartScales, options: Label
   }
   return { boundaries, notes };
 }
-
-/**
- * The candidate that fits the plot, avoids placed boxes and hides the fewest
- * lines (the first of equals). `cost` is never negative and may stop counting
- * once it reaches `enough`: a candidate whose overlaps and bias alone already
- * score no better than the best so far is not costed at all.
- */
-function bestOf(candidates: Candidate[], plot: PlotArea, placed: Box[], cost: (box: Box, enough: number) => number): LabelPlacement {
-  const inside = candidates.filter((candidate) => boxInside(candidate.box, plot));
-  const pool = inside.length > 0 ? inside : candidates;
-  let best: Candidate | null = null;
-  let bestScore = Infinity;
-  for (const candidate of pool) {
-    let overlaps = 0;
-    for (const box of placed) if (boxesOverlap(box, candidate.box)) overlaps += 1;
-    const fixed = overlaps * 1000 + candidate.bias;
-    if (fixed >= bestScore) continue;
-    // Half a line more than the difference: stopping there still leaves this candidate worse whatever the rounding.
-    const score = fixed + cost(candidate.box, bestScore - fixed + 0.5);
-    if (score < bestScore) {
-      bestScore = score;
-      best = candidate;
-    }
-  }
-  const { bias: _bias, ...placement } = best ?? candidates[0];
-  return placement;
-}
-
