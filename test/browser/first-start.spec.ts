@@ -72,6 +72,9 @@ test('the first calls go out from the small module loaded ahead of the window, a
   // tabs add their own files once the diagram is drawn).
   const named = await page.locator('head link[rel="modulepreload"]').evaluateAll((links) => links.map((link) => link.getAttribute('href')));
   expect(named.filter((href) => href?.startsWith('./'))).toEqual([scripts[0]!.replace(' async', '')]);
+  // And it asks Chromium to compile all of it while it streams in (V8's explicit compile hint, the file's first line).
+  const windowScript = await page.evaluate(async (src) => (await fetch(src)).text(), scripts[1]!);
+  expect(windowScript.split('\n')[0]).toBe('//# allFunctionsCalledOnLoad');
   for (const first of ['getProject {}', 'keptDrafts {}', 'listConcepts {}']) expect(asked).toContain(first);
   expect(asked.some((call) => call.startsWith('getVersion '))).toBe(true);
   expect(asked.some((call) => call.startsWith('listVersions '))).toBe(true);
