@@ -17,6 +17,14 @@ describe('escapeXml', () => {
     expect(doc.documentElement.textContent).toBe('Trainer <script>alert("x")</script> &  ]]> ✈');
     expect(doc.documentElement.getAttribute('a')).toBe(doc.documentElement.textContent);
   });
+
+  it('drops each forbidden character even where nothing else needs escaping, and leaves plain text as it is', () => {
+    // XML 1.0, section 2.2 (Char): tab, LF and CR are allowed; other C0 controls, lone surrogates, U+FFFE and U+FFFF are not.
+    for (const forbidden of ['\u0000', '\u0008', '\u000B', '\u001F', '\uD800', '\uDFFF', '\uFFFE', '\uFFFF']) expect(escapeXml(`a${forbidden}b`)).toBe('ab');
+    for (const allowed of ['\t', '\n', '\r', '\u007F', 'é', '✈', '\uD83D\uDE80']) expect(escapeXml(`a${allowed}b`)).toBe(`a${allowed}b`);
+    const path = 'M82.5,466.1L90.25,460.7L98,455.4';
+    expect(escapeXml(path)).toBe(path);
+  });
 });
 
 describe('shorten', () => {
