@@ -31,10 +31,14 @@ export interface SegmentGrid {
 }
 
 const cell = (value: number) => Math.floor(value / CELL);
-const key = (cx: number, cy: number) => `${cx},${cy}`;
+/**
+ * A cell's key: its column and row in one number. Two cells far apart (2^20 rows) could share a key; a
+ * lookup then only meets more segments, which the extent test below sets aside, never fewer.
+ */
+const key = (cx: number, cy: number) => cx * 1_048_576 + cy;
 
 export function segmentGrid(segments: readonly Segment[]): SegmentGrid {
-  const cells = new Map<string, number[]>();
+  const cells = new Map<number, number[]>();
   const everywhere: number[] = [];
   segments.forEach((s, index) => {
     const [cx0, cx1, cy0, cy1] = [cell(s.x0), cell(s.x1), cell(s.y0), cell(s.y1)];
