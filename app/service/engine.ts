@@ -89,12 +89,6 @@ function takeRecordedChecks(): void {
   for (const [demo, checked] of matchingDemoChecks(text, DEMO_CONCEPTS as readonly DemoConcept[])) checkedDemos.set(demo.concept as object, checked);
 }
 
-/** True when every demo concept's check is known without evaluating it (recorded by the build). */
-export function demoChecksKnown(): boolean {
-  takeRecordedChecks();
-  return (DEMO_CONCEPTS as readonly DemoConcept[]).every((demo) => demo.concept !== null && typeof demo.concept === 'object' && checkedDemos.has(demo.concept));
-}
-
 /** The text of the file the build keeps beside its single file: every demo checked and evaluated now. */
 export function freshDemoChecksText(): string {
   return demoChecksText(demoConcepts(), (demo) => checkAndEvaluate(demo.concept, `demo concept "${demo.title}"`));

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { demoChecksFile, demoChecksText, matchingDemoChecks, ownDemoChecksFile, readDemoChecks } from '../../app/service/demo-checks';
-import { checkAndEvaluate, demoConcepts, demoChecksKnown, type CheckedConcept, type DemoConcept } from '../../app/service/engine';
+import { checkAndEvaluate, demoConcepts, type CheckedConcept, type DemoConcept } from '../../app/service/engine';
 
 const demos = demoConcepts();
 const checkOf = (demo: DemoConcept): CheckedConcept => checkAndEvaluate(demo.concept, `demo concept "${demo.title}"`);
@@ -16,8 +16,6 @@ describe('the demo checks the build records beside the single file', () => {
     const bundle = join(tmpdir(), 'loftpoint-cli-ABC.cjs');
     expect(ownDemoChecksFile(pathToFileURL(bundle).href)).toBe(demoChecksFile(bundle));
     expect(demoChecksFile(bundle)).toBe(`${bundle}.demo-checks.json`);
-    // Run from the sources, nothing is recorded: every demo is evaluated as the project is made.
-    expect(demoChecksKnown()).toBe(false);
   });
 
   it('give back every demo\'s check as it was worked out', () => {
