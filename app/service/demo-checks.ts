@@ -13,7 +13,20 @@
  */
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import type { CheckedConcept, DemoConcept } from './engine';
+import type { EvaluationSummary } from './contract';
+
+/** A demo as the build records it: its title and its concept. */
+export interface RecordableDemo {
+  title: string;
+  concept: unknown;
+}
+
+/** A demo's check as recorded: what the service's check of a concept gives (app/service/engine.ts). */
+export interface DemoCheck {
+  name: string | undefined;
+  summary: EvaluationSummary;
+  warnings: string[];
+}
 
 /** The file of results beside the single-file build `bundle`. */
 export function demoChecksFile(bundle: string): string {
@@ -24,16 +37,16 @@ interface RecordedCheck {
   title: string;
   /** The concept as JSON text, exactly as the build saw it. */
   concept: string;
-  checked: CheckedConcept;
+  checked: DemoCheck;
 }
 
 /** The text of the results file: each demo's concept and its check, in order. */
-export function demoChecksText(demos: readonly DemoConcept[], check: (demo: DemoConcept) => CheckedConcept): string {
+export function demoChecksText<D extends RecordableDemo>(demos: readonly D[], check: (demo: D) => DemoCheck): string {
   const recorded: RecordedCheck[] = demos.map((demo) => ({ title: demo.title, concept: JSON.stringify(demo.concept), checked: check(demo) }));
   return `${JSON.stringify({ demoChecks: recorded })}\n`;
 }
 
-function isChecked(value: unknown): value is CheckedConcept {
+function isChecked(value: unknown): value is DemoCheck {
   if (!value || typeof value !== 'object') return false;
   const { name, summary, warnings } = value as Record<string, unknown>;
   return (name === undefined || typeof name === 'string') && !!summary && typeof summary === 'object' && Array.isArray(warnings) && warnings.every((w) => typeof w === 'string');
@@ -43,8 +56,8 @@ function isChecked(value: unknown): value is CheckedConcept {
  * The recorded checks in `text` that still belong to `demos` (same title and concept text), by
  * demo; an unreadable text gives none.
  */
-export function matchingDemoChecks(text: string, demos: readonly DemoConcept[]): Map<DemoConcept, CheckedConcept> {
-  const matched = new Map<DemoConcept, CheckedConcept>();
+export function matchingDemoChecks<D extends RecordableDemo>(text: string, demos: readonly D[]): Map<D, DemoCheck> {
+  const matched = new Map<D, DemoCheck>();
   let recorded: unknown;
   try {
     recorded = (JSON.parse(text) as { demoChecks?: unknown }).demoChecks;
