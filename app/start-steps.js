@@ -231,6 +231,6 @@ export function startBrowserMode(deps, args, start = spawn) {
     const status = deps.run(bin(deps.root, 'vite'), ['build', '--config', 'app/renderer/vite.config.ts', '--logLevel', 'error'], { env: { ...deps.env, VITE_CONFIG_NATIVE_IGNORE_WARNING: 'true' } });
     if (status !== 0) process.exit(status);
   }
-  // The server built ahead (out/cli), rebuilt by app/cli/browser-mode.js when a source is newer.
-  return start(process.execPath, [join(deps.root, 'app', 'cli', 'browser-mode.js'), ...args], { cwd: deps.root, stdio: 'inherit', env: deps.env });
+  // The server built ahead (out/cli), rebuilt by app/cli/browser-mode.cjs when a source is newer.
+  return start(process.execPath, [join(deps.root, 'app', 'cli', 'browser-mode.cjs'), ...args], { cwd: deps.root, stdio: 'inherit', env: deps.env });
 }

@@ -10,7 +10,7 @@
 // requires this before anything is built. CommonJS because an ES module
 // start costs about 9 ms of CPU more (Node's module loader), and `import` of
 // node:fs would read every export, loading the whole streams stack for
-// nothing. ES modules (build-cli.js, browser-mode.js) import it through
+// nothing. ES modules (build-cli.js) import it through
 // built-cli.js.
 'use strict';
 const { readFileSync, renameSync, rmSync, statSync, writeFileSync } = require('node:fs');

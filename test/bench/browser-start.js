@@ -1,5 +1,5 @@
 #!/usr/bin/env node
-// Browser mode from launch to the first diagram: `node app/cli/browser-mode.js`
+// Browser mode from launch to the first diagram: `node app/cli/browser-mode.cjs`
 // (what `npm start` runs without Electron) on a fresh project, its address
 // opened in Chromium, until the page shows a requirement's curve. Beside it,
 // interleaved run by run, a floor: a bare Node HTTP server started the same
@@ -158,7 +158,7 @@ try {
   const breakdown = [];
   const serve = (r) => {
     const project = join(folder, `start-${r}.loftpoint`);
-    return launchToDiagram(browser, [join(root, 'app/cli/browser-mode.js'), '--port', '0', '--project', project], { LOFTPOINT_DATA_DIR: join(folder, 'data') }, r === 'warm' ? {} : { driverSaw: modeSeen, breakdown, project });
+    return launchToDiagram(browser, [join(root, 'app/cli/browser-mode.cjs'), '--port', '0', '--project', project], { LOFTPOINT_DATA_DIR: join(folder, 'data') }, r === 'warm' ? {} : { driverSaw: modeSeen, breakdown, project });
   };
   const bare = () => launchToDiagram(browser, ['-e', FLOOR_SERVER], {}, { driverSaw: floorSeen });
   await serve('warm'); // a stale build is rebuilt here, outside the timing

@@ -116,8 +116,8 @@ describe('the Monte Carlo on several threads', () => {
   }, 180_000);
 });
 
-describe('browser mode from the build (app/cli/browser-mode.js)', () => {
-  const MODE = join(ROOT, 'app/cli/browser-mode.js');
+describe('browser mode from the build (app/cli/browser-mode.cjs, as `npm start` runs it)', () => {
+  const MODE = join(ROOT, 'app/cli/browser-mode.cjs');
 
   it('prints its address first, serves the page on 127.0.0.1 with a new demo project, and stops cleanly', async () => {
     const { spawn } = await import('node:child_process');
@@ -146,11 +146,13 @@ describe('browser mode from the build (app/cli/browser-mode.js)', () => {
     expect(stderr).toBe('');
   }, 120_000);
 
-  it('refuses a bad port with one line naming --port and exit status 2', () => {
-    const result = spawnSync(process.execPath, [MODE, '--port', 'eighty'], { encoding: 'utf8', env: { ...process.env, LOFTPOINT_DATA_DIR: join(dir, 'data') }, timeout: 120_000 });
-    expect(result.status).toBe(2);
-    expect(result.stdout).toBe('');
-    expect(result.stderr.trimEnd().split('\n')).toEqual([expect.stringMatching(/^loftpoint: .*--port.*whole number/)]);
+  it('refuses a bad port with one line naming --port and exit status 2 (also when started as browser-mode.js)', () => {
+    for (const start of [MODE, join(ROOT, 'app/cli/browser-mode.js')]) {
+      const result = spawnSync(process.execPath, [start, '--port', 'eighty'], { encoding: 'utf8', env: { ...process.env, LOFTPOINT_DATA_DIR: join(dir, 'data') }, timeout: 120_000 });
+      expect(result.status).toBe(2);
+      expect(result.stdout).toBe('');
+      expect(result.stderr.trimEnd().split('\n')).toEqual([expect.stringMatching(/^loftpoint: .*--port.*whole number/)]);
+    }
   }, 120_000);
 });
 
