@@ -8,7 +8,7 @@ import type { DesktopApi, ExportFileRequest, WindowCommand, WindowStateReport } 
 import { EXPORT_KINDS } from '../../../shared/desktop-api';
 import { PRINT_PDF_PATH } from '../../../shared/print-request';
 import { base64ToBytes } from '../export/base64';
-import { endEarlyRequests, takeEarlyRequest, TOKEN_HEADER, TOKEN_IN_FRAGMENT, TOKEN_KEY } from './early-requests';
+import { endEarlyRequests, postService, takeEarlyRequest, TOKEN_HEADER, TOKEN_IN_FRAGMENT, TOKEN_KEY } from './early-requests';
 
 export { TOKEN_HEADER };
 
@@ -42,16 +42,7 @@ export interface DraftMirror {
 
 /** One call over HTTP: the answer sent ahead for it when there is one (early-requests.ts), else a POST with the launch token. */
 function postCall(fetcher: typeof fetch, token: string, early: EarlyAnswers, method: string, body: string): Promise<Response> {
-  return (
-    early(method, body) ??
-    fetcher(`./api/${method}`, {
-      method: 'POST',
-      headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
-      body,
-      credentials: 'same-origin',
-      cache: 'no-store',
-    })
-  );
+  return early(method, body) ?? postService(fetcher, token, method, body);
 }
 
 export function httpDrafts(token: string, fetcher: typeof fetch = fetch, early: EarlyAnswers = takeEarlyRequest): DraftMirror {

@@ -45,6 +45,17 @@ export function tokenOf(location: Pick<Location, 'hash'>, storage: Pick<Storage,
   }
 }
 
+/** One service call over HTTP: a POST of the JSON body to ./api/METHOD with the launch token (the window's own calls too, client.ts). */
+export function postService(fetcher: typeof fetch, token: string, method: string, body: string): Promise<Response> {
+  return fetcher(`./api/${method}`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
+    body,
+    credentials: 'same-origin',
+    cache: 'no-store',
+  });
+}
+
 const key = (method: string, body: string): string => `${method} ${body}`;
 
 /** Answers sent ahead, by method and body, until the window takes them. */
@@ -92,13 +103,7 @@ export function sendEarlyRequests(env: EarlyEnvironment): boolean {
     const body = JSON.stringify(request);
     const k = key(method, body);
     if (!open || asked.has(k) || sent.has(k)) return undefined;
-    const answer = env.fetch(`./api/${method}`, {
-      method: 'POST',
-      headers: { 'Content-Type': 'application/json', [TOKEN_HEADER]: token },
-      body,
-      credentials: 'same-origin',
-      cache: 'no-store',
-    });
+    const answer = postService(env.fetch, token, method, body);
     // The window may never take it (it had a draft, or its start went another way): never an unhandled rejection.
     answer.catch(() => {});
     sent.set(k, answer);
