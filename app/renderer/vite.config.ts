@@ -60,7 +60,7 @@ function earlyRequests(): Plugin {
 }
 
 /** V8's explicit compile hint: compile every function of this file eagerly, while it streams in. */
-export const COMPILE_ALL_ON_LOAD = '//# allFunctionsCalledOnLoad';
+const COMPILE_ALL_ON_LOAD = '//# allFunctionsCalledOnLoad';
 
 /**
  * The window's start in one module script: every module the page imports statically from its entry
