@@ -12,7 +12,6 @@ import type { Aircraft } from '../aircraft';
 import type { BoundaryOf } from '../boundary';
 import { flightCondition, type FlightCondition } from '../constraints/flight-condition';
 import { quantityField } from '../concept/quantity-field';
-import { fallingRoot } from '../numeric/bracket-root';
 import { FOOT_M, G0 } from '../units/factors';
 import { formatQuantity } from '../units/display';
 import type { RequirementCommon } from './common';
@@ -58,33 +57,77 @@ export function balancedFieldTerms(r: BalancedFieldLengthRequirement, c: FlightC
 }
 
 /**
- * balancedFieldTerms at one wing loading w as a function of x alone: what does not depend on x
- * (stall speed, C_L2, the drag term at V2, U, gamma_min, the ground and constant terms) is worked
- * out once, so a root search over x repeats only the few operations that take x.
+ * What the terms at one wing loading w are made of: the climb gradient at V2 and the mean thrust of
+ * the run are linear in x, and the rest does not depend on x (stall speed, C_L2, the drag term at V2,
+ * U, gamma_min, the ground and constant terms), so it is worked out once per wing loading.
  */
-export function balancedFieldTermsAt(r: BalancedFieldLengthRequirement, c: FlightCondition, engines: number, w: number): (x: number) => BalancedFieldTerms {
+interface FieldCoefficients {
+  /** gamma_2 = climbPerX x - dragAtV2. */
+  climbPerX: number;
+  dragAtV2: number;
+  /** T_av/W = runPerX x. */
+  runPerX: number;
+  u: number;
+  minimumGradient: number;
+  /** 0.863 (beta w / (rho g0 C_L2) + h_obs). */
+  groundTerm: number;
+  /** 655 ft / sqrt(sigma). */
+  constantTerm: number;
+}
+
+function fieldCoefficients(r: BalancedFieldLengthRequirement, c: FlightCondition, engines: number, w: number): FieldCoefficients {
   const { polar, densityKgM3: rho } = c;
   const weightLoading = c.beta * w;
   const vs = stallSpeed(weightLoading, rho, polar.clMax);
   const v2 = r.v2SpeedFactor * vs;
   const cl2 = polar.clMax / (r.v2SpeedFactor * r.v2SpeedFactor);
   const running = (engines - 1) / engines;
-  const dragAtV2 = dragCoefficient(polar, cl2) / cl2;
   const runSpeed = 0.7 * LIFTOFF_SPEED_FACTOR * vs;
-  const u = 0.01 * polar.clMax + 0.02;
-  const minimumGradient = minimumSecondSegmentGradient(engines);
-  const groundTerm = weightLoading / (rho * G0 * cl2) + r.obstacleHeightM;
-  const constantTerm = CONSTANT_TERM_M / Math.sqrt(rho / RHO0);
-  return (x: number): BalancedFieldTerms => {
-    const thrustAtV2 = c.propeller ? (c.propellerEfficiency * x) / v2 : x;
-    const climbGradient = running * thrustAtV2 - dragAtV2;
-    const averageThrustToWeight = c.propeller ? (c.propellerEfficiency * x) / runSpeed : r.averageThrustFraction * x;
-    const dG = climbGradient - minimumGradient;
-    const excess = averageThrustToWeight - u;
-    // With a climb (gamma_2 > 0) and gamma_min at most 0.03, 1 + 2.3 dG stays above 0.93: the factor never changes sign.
-    const lengthM = climbGradient > 0 && excess > 0 ? (0.863 / (1 + 2.3 * dG)) * groundTerm * (1 / excess + 2.7) + constantTerm : Infinity;
-    return { climbGradient, averageThrustToWeight, u, lengthM };
+  return {
+    climbPerX: running * (c.propeller ? c.propellerEfficiency / v2 : 1),
+    dragAtV2: dragCoefficient(polar, cl2) / cl2,
+    runPerX: c.propeller ? c.propellerEfficiency / runSpeed : r.averageThrustFraction,
+    u: 0.01 * polar.clMax + 0.02,
+    minimumGradient: minimumSecondSegmentGradient(engines),
+    groundTerm: 0.863 * (weightLoading / (rho * G0 * cl2) + r.obstacleHeightM),
+    constantTerm: CONSTANT_TERM_M / Math.sqrt(rho / RHO0),
   };
+}
+
+/** balancedFieldTerms at one wing loading w as a function of x alone. */
+export function balancedFieldTermsAt(r: BalancedFieldLengthRequirement, c: FlightCondition, engines: number, w: number): (x: number) => BalancedFieldTerms {
+  const k = fieldCoefficients(r, c, engines, w);
+  return (x: number): BalancedFieldTerms => {
+    const climbGradient = k.climbPerX * x - k.dragAtV2;
+    const averageThrustToWeight = k.runPerX * x;
+    const dG = climbGradient - k.minimumGradient;
+    const excess = averageThrustToWeight - k.u;
+    // With a climb (gamma_2 > 0) and gamma_min at most 0.03, 1 + 2.3 dG stays above 0.93: the factor never changes sign.
+    const lengthM = climbGradient > 0 && excess > 0 ? (k.groundTerm / (1 + 2.3 * dG)) * (1 / excess + 2.7) + k.constantTerm : Infinity;
+    return { climbGradient, averageThrustToWeight, u: k.u, lengthM };
+  };
+}
+
+/**
+ * The least x (T/W, or P/W in m/s) whose balanced field length is `distanceM`, in closed form. Where
+ * the aircraft climbs after the failure (gamma_2 > 0) and the run has thrust to spare (e = T_av/W - U
+ * > 0), the length falls as x grows, and BFL = D is, with h = 1 + 2.3 dG = p + q e,
+ *   (D - K) q e^2 + ((D - K) p - 2.7 G) e - G = 0   (G the ground term with 0.863, K the constant term),
+ * a quadratic with one positive root. Where that root does not climb, the least x that climbs already
+ * gives a shorter field: the climb sets x. NaN where no x gives D (D at or below K).
+ */
+export function balancedFieldLoading(r: BalancedFieldLengthRequirement, c: FlightCondition, engines: number, w: number): number {
+  const k = fieldCoefficients(r, c, engines, w);
+  const spare = r.distanceM - k.constantTerm;
+  if (!(spare > 0)) return NaN;
+  const q = (2.3 * k.climbPerX) / k.runPerX;
+  const p = 1 + 2.3 * ((k.climbPerX * k.u) / k.runPerX - k.dragAtV2 - k.minimumGradient);
+  const a = spare * q;
+  const b = spare * p - 2.7 * k.groundTerm;
+  const root = Math.sqrt(b * b + 4 * a * k.groundTerm);
+  // The positive root, in the form that does not cancel.
+  const e = b >= 0 ? (2 * k.groundTerm) / (b + root) : (root - b) / (2 * a);
+  return Math.max((e + k.u) / k.runPerX, k.dragAtV2 / k.climbPerX);
 }
 
 /** The terms at wing loading w with the sea-level loading given (T_SL/W_TO or P_SL/W_TO). */
@@ -102,10 +145,10 @@ export function balancedFieldLengthBoundary(r: BalancedFieldLengthRequirement, a
     kind: r.kind,
     required(w: number): number {
       if (!(w > 0) || !(c.alpha > 0) || !(engines >= 2)) return NaN;
-      const scale = c.propeller ? stallSpeed(c.beta * w, c.densityKgM3, c.polar.clMax) / c.propellerEfficiency : 1;
-      const terms = balancedFieldTermsAt(r, c, engines, w);
-      const x = fallingRoot((t) => terms(t).lengthM - r.distanceM, 1e-6 * scale, 0.3 * scale, 50 * scale);
-      return (c.beta / c.alpha) * x;
+      // As for the take-off distance: a loading above 50 (T/W), or 50 V_s/eta_p (P/W), counts as out of reach.
+      const most = c.propeller ? (50 * stallSpeed(c.beta * w, c.densityKgM3, c.polar.clMax)) / c.propellerEfficiency : 50;
+      const x = balancedFieldLoading(r, c, engines, w);
+      return x <= most ? (c.beta / c.alpha) * x : NaN;
     },
     speedAt: (w: number): number => (w > 0 ? r.v2SpeedFactor * stallSpeed(c.beta * w, c.densityKgM3, c.polar.clMax) : NaN),
   };
@@ -165,11 +208,12 @@ A curve for multi-engine aircraft: the sea-level rated thrust (or power) per tak
     BFL = 0.863 / (1 + 2.3 dG) (beta w / (rho g0 C_L2) + h_obs) (1 / (T_av/W - U) + 2.7) + 655 ft / sqrt(sigma)
     dG = gamma_2 - gamma_min,   gamma_2 = (N - 1)/N T/W - C_D/C_L at V2,   C_L2 = C_Lmax,TO / k_2^2
     U = 0.01 C_Lmax,TO + 0.02,   T_av = 0.75 (5 + BPR)/(4 + BPR) T (jets)
-    T_SL/W_TO = (beta/alpha) T/W, solved for BFL = the distance by a bracketing root search
+    T_SL/W_TO = (beta/alpha) T/W, solved for BFL = the distance in closed form: a quadratic in the excess e = T_av/W - U
 
 - gamma_2: the one-engine-out climb gradient at V2 = k_2 V_s,TO (k_2 1.2 by default), from the configuration's polar, the lapse at the field and the engine count N; gamma_min 0.024, 0.027 and 0.030 for two, three and four or more engines (14 CFR 25.121(b)).
 - h_obs: 35 ft by default (14 CFR 25.113). T_av/T: 0.833 by default (BPR 5 in Raymer's formula, from memory); propeller aircraft take T_av = eta_p P / (0.7 V_LOF), V_LOF = 1.1 V_s,TO, eta_p 0.55 by default, and the same efficiency at V2.
 - The climb uses the take-off configuration's polar (gear down errs on the long side). Where the aircraft cannot climb after the failure (gamma_2 <= 0) no loading gives a field length and the curve is undefined there. Where the least loading that climbs after the failure already gives a shorter field length (a long field), the curve is that loading: the climb, not the distance, sets it.
+- A field at or below the constant term 655 ft / sqrt(sigma) has no loading, nor one needing more than T/W 50 (for propellers P/W 50 V_s,TO / eta_p, in m/s): the curve is undefined there, as for the take-off distance.
 - A single-engine aircraft has no balanced field length: the concept is refused, naming the field.
 - Source: Torenbeek, *Synthesis of Subsonic Airplane Design*, as given by Raymer, *Aircraft Design: A Conceptual Approach*, ch. 17 (eq. 17.111, from memory).`,
 });

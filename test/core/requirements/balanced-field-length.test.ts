@@ -75,6 +75,55 @@ describe('balanced field length (Torenbeek, as given by Raymer)', () => {
     assertRelative(balancedFieldAt(balancedField(1500), ac, 3500, y).lengthM, 1500, 1e-6);
   });
 
+  it('gives the distance it was solved for wherever the distance sets the loading (jets and propellers, 2 to 4 engines)', () => {
+    // The curve's loading put back into the formula as printed (balancedFieldAt) gives the distance again,
+    // and a loading 0.1 % lower gives a longer field: it is the least loading for that distance.
+    const prop = (engines: number) =>
+      aircraft({ kind: 'turboprop', engines, aspectRatio: 9, increments: { takeoff: { cd0Increment: 0.02, oswaldEfficiency: 0.76, clMax: 1.9 } } });
+    let checked = 0;
+    for (const ac of [twin(2), twin(3), twin(4), prop(2), prop(4)]) {
+      for (const d of [900, 1200, 1600, 2200]) {
+        for (const w of [1500, 2500, 3500, 5000]) {
+          const r = balancedField(d);
+          const y = curveOf(balancedFieldLengthBoundary(r, ac)).required(w);
+          const at = balancedFieldAt(r, ac, w, y);
+          if (Math.abs(at.climbGradient) < 1e-9) continue; // the climb sets this one (next test)
+          assertRelative(at.lengthM, d, 1e-9);
+          expect(balancedFieldAt(r, ac, w, y * 0.999).lengthM).toBeGreaterThan(d);
+          checked++;
+        }
+      }
+    }
+    expect(checked).toBeGreaterThan(40);
+  });
+
+  it('on a long field, is the least loading that climbs after the failure: gamma_2 = 0 at V2', () => {
+    // gamma_2 = (N - 1)/N T/W - C_D/C_L at V2 (the methods' definition); at sea level ISA alpha = beta = 1 for
+    // the jet, so the curve is T/W = N/(N - 1) C_D/C_L at C_L2 = C_Lmax/1.2^2, and the field there is shorter.
+    for (const engines of [2, 4]) {
+      const ac = twin(engines);
+      const polar = polarOf(ac, 'takeoff') as Polar;
+      const cl2 = 1.85 / 1.44;
+      const climbs = (engines / (engines - 1)) * (dragCoefficient(polar, cl2) / cl2);
+      const r = balancedField(6000);
+      const y = curveOf(balancedFieldLengthBoundary(r, ac)).required(3500);
+      assertRelative(y, climbs, 1e-12);
+      expect(balancedFieldAt(r, ac, 3500, y * (1 + 1e-9)).lengthM).toBeLessThan(6000);
+    }
+  });
+
+  it('has no loading for a field at or below the 655 ft constant term, nor one needing T/W above 50', () => {
+    // 655 ft = 199.64 m at sea level (Torenbeek's constant term): no thrust makes the field shorter.
+    const ac = twin();
+    const curve = (d: number) => curveOf(balancedFieldLengthBoundary(balancedField(d), ac));
+    expect(curve(199).required(3500)).toBeNaN();
+    expect(curve(199.6).required(3500)).toBeNaN();
+    // Just above it the loading is finite but beyond any aircraft; the curve leaves it out (as the take-off distance does).
+    expect(curve(200).required(3500)).toBeNaN();
+    expect(curve(230).required(500)).toBeGreaterThan(1);
+    expect(curve(230).required(500)).toBeLessThan(50);
+  });
+
   it('demands more when higher, hotter, shorter or heavier', () => {
     const ac = twin();
     const at = (extra: Parameters<typeof balancedField>[1], d = 1500, w = 3500) => curveOf(balancedFieldLengthBoundary(balancedField(d, extra), ac)).required(w);
