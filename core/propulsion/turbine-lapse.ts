@@ -24,7 +24,9 @@ export interface FlightAir {
 /** theta0 = theta (1 + 0.2 M^2), delta0 = delta (1 + 0.2 M^2)^3.5: total temperature and pressure ratios, gamma = 1.4 (isentropic flow). */
 export function totalRatios(air: FlightAir): { theta0: number; delta0: number } {
   const stagnation = 1 + 0.2 * air.mach * air.mach;
-  return { theta0: (air.temperatureK / T0) * stagnation, delta0: (air.pressurePa / P0) * Math.pow(stagnation, 3.5) };
+  // stagnation^3.5 as s^3 sqrt(s): the same to a unit in the last place, several times cheaper than Math.pow.
+  const cubed = stagnation * stagnation * stagnation;
+  return { theta0: (air.temperatureK / T0) * stagnation, delta0: (air.pressurePa / P0) * cubed * Math.sqrt(stagnation) };
 }
 
 /** alpha of a model at a flight condition and throttle ratio TR; never below 0. */
