@@ -12,6 +12,7 @@ import type { Aircraft } from '../aircraft';
 import type { BoundaryOf } from '../boundary';
 import { flightCondition, type FlightCondition } from '../constraints/flight-condition';
 import { quantityField } from '../concept/quantity-field';
+import { largerRoot } from '../numeric/quadratic';
 import { FOOT_M, G0 } from '../units/factors';
 import { formatQuantity } from '../units/display';
 import type { RequirementCommon } from './common';
@@ -122,11 +123,7 @@ export function balancedFieldLoading(r: BalancedFieldLengthRequirement, c: Fligh
   if (!(spare > 0)) return NaN;
   const q = (2.3 * k.climbPerX) / k.runPerX;
   const p = 1 + 2.3 * ((k.climbPerX * k.u) / k.runPerX - k.dragAtV2 - k.minimumGradient);
-  const a = spare * q;
-  const b = spare * p - 2.7 * k.groundTerm;
-  const root = Math.sqrt(b * b + 4 * a * k.groundTerm);
-  // The positive root, in the form that does not cancel.
-  const e = b >= 0 ? (2 * k.groundTerm) / (b + root) : (root - b) / (2 * a);
+  const e = largerRoot(spare * q, spare * p - 2.7 * k.groundTerm, -k.groundTerm);
   return Math.max((e + k.u) / k.runPerX, k.dragAtV2 / k.climbPerX);
 }
 
