@@ -26,6 +26,11 @@ export interface ContourSeries {
   rings: XY[][];
   /** [wing loading, least loading at the level or null], display units. */
   frontier: Array<[number, number | null]>;
+  /**
+   * Half a row above the map's last row, display units: a ring point above it lies in the padding
+   * beyond the map, where the chance is taken as the last row's (more power can only raise it).
+   */
+  beyondTop?: number;
 }
 
 /**
@@ -77,7 +82,7 @@ export function probabilityContours(
       toDisplay(map.wingLoadings[i], 'wingLoading', system),
       Number.isFinite(y) ? toDisplay(y, axis, system) : null,
     ]);
-    return { level, rings, frontier };
+    return { level, rings, frontier, beyondTop: toDisplay(y1 + dy / 2, axis, system) };
   });
 }
 

@@ -88,13 +88,18 @@ export function bandShapes(bands: readonly BandSeries[], scales: ChartScales, vi
   return shapes;
 }
 
-function ringPath(rings: readonly XY[][], scales: ChartScales, view: LoadingView): string {
+/**
+ * A contour's rings as a path. In power loading, where W/P runs down to 0 (power without limit), a
+ * ring's run beyond the map's last row is drawn at W/P = 0: above that row the chance is taken as the
+ * row's own, which more power can only raise, so the region drawn is never larger than the true one.
+ */
+function ringPath(rings: readonly XY[][], scales: ChartScales, view: LoadingView, beyondTop = Infinity): string {
   let d = '';
   for (const ring of rings) {
     if (ring.length < 3) continue;
     const points: string[] = [];
     for (const [x, y] of ring) {
-      const shown = plotted(y, view);
+      const shown = view.powerLoading && y > beyondTop ? 0 : plotted(y, view);
       if (shown === null) continue;
       points.push(`${f(scales.x(x))},${f(scales.y(clampToView(shown, scales.y.domain())))}`);
     }
@@ -106,7 +111,7 @@ function ringPath(rings: readonly XY[][], scales: ChartScales, view: LoadingView
 /** Each contour as closed outlines, dashed by level as in the report. */
 export function contourShapes(contours: readonly ContourSeries[], scales: ChartScales, view: LoadingView): ContourShape[] {
   return contours.flatMap((contour, i) => {
-    const d = ringPath(contour.rings, scales, view);
+    const d = ringPath(contour.rings, scales, view, contour.beyondTop);
     return d ? [{ level: contour.level, d, ...contourStyle(i) }] : [];
   });
 }
@@ -115,7 +120,9 @@ export function contourShapes(contours: readonly ContourSeries[], scales: ChartS
  * The part of the plot the probability map covers, in pixels: the contours
  * are clipped to it, so the outline a contour takes along the map's edge
  * (where the map simply stops) is never drawn as if it were a contour.
- * `wingLoadings` and `loadings` are the map's ends in display units.
+ * `wingLoadings` and `loadings` are the map's ends in display units. In
+ * power loading it reaches down to W/P = 0, where the contours continue
+ * (ringPath).
  */
 export function mapBox(
   wingLoadings: readonly [number, number],
@@ -132,7 +139,7 @@ export function mapBox(
   const left = Math.max(plot.left, Math.min(...xs));
   const right = Math.min(plot.right, Math.max(...xs));
   const top = Math.max(plot.top, Math.min(...ys));
-  const bottom = Math.min(plot.bottom, Math.max(...ys));
+  const bottom = view.powerLoading ? plot.bottom : Math.min(plot.bottom, Math.max(...ys));
   return { x: left, y: top, width: Math.max(0, right - left), height: Math.max(0, bottom - top) };
 }
 

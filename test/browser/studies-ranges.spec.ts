@@ -145,11 +145,21 @@ test('bands and contours follow the unit system and the power-loading view, and 
   await window.expectNoNaN();
   await window.shot('twin-us');
 
-  // Power loading W/P: bands and contours turned over with the axis.
+  // Power loading W/P: bands and contours turned over with the axis, the contours running on down to W/P = 0
+  // (the map's rows reach 1/40 of the view above it) instead of stopping where the P/W view's top would be.
   await window.byTest('axis-wp').click();
   await expect(bands).toHaveCount(bandCount);
   await expect(contours).toHaveCount(contourCount);
   await window.expectNoNaN();
+  const reach = await window.page.evaluate(() => {
+    const frame = document.querySelector('[data-testid="diagram"] [data-role="frame"]') ?? document.querySelector('[data-role="frame"]');
+    const bottom = Number(frame?.getAttribute('y')) + Number(frame?.getAttribute('height'));
+    const ys = [...document.querySelectorAll('[data-testid="contour"]')].flatMap((path) =>
+      [...(path.getAttribute('d') ?? '').matchAll(/(-?[\d.]+),(-?[\d.]+)/g)].map((m) => Number(m[2])),
+    );
+    return { bottom, lowest: Math.max(...ys) };
+  });
+  expect(Math.abs(reach.lowest - reach.bottom)).toBeLessThan(1);
   await window.shot('twin-power-loading');
 
   // Another concept shows its own bands but not the twin's contours; coming back brings them again.

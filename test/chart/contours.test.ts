@@ -47,6 +47,10 @@ describe('probabilityContours', () => {
     expect(Math.max(...xs)).toBeGreaterThan(30);
     expect(Math.min(...ys)).toBeLessThan(0);
     expect(Math.max(...ys)).toBeGreaterThan(2);
+    // The run above the last row lies beyond half a row over it (2.5), where power loading draws it at W/P = 0.
+    expect(all.beyondTop).toBe(2.5);
+    expect(Math.max(...ys)).toBeGreaterThan(all.beyondTop!);
+    expect(ys.filter((y) => y > 2 && y <= 2.5)).toEqual([]);
   });
 
   it('has no rings for a level the map never reaches', () => {

@@ -128,6 +128,44 @@ describe('contours in pixels', () => {
   });
 });
 
+describe('contours past the top of the map', () => {
+  // A 90 % region from W/S 300 to 600 whose ring runs on above the map's last row (P/W 20, half a row
+  // 20.5), as d3 traces it through the padding that copies the last row.
+  const open: ContourSeries = {
+    level: 0.9,
+    rings: [
+      [
+        [300, 10],
+        [600, 10],
+        [600, 21.5],
+        [300, 21.5],
+      ],
+    ],
+    frontier: [],
+    beyondTop: 20.5,
+  };
+
+  it('in power loading runs down to W/P = 0: above the map the chance is taken as its last row', () => {
+    const s = scales([0, 200]);
+    const [shape] = contourShapes([open], s, { powerLoading: true, factor: 1000 });
+    const drawn = points(shape.d).map(([px, py]) => [s.x.invert(px), s.y.invert(py)].map((v) => Math.round(v * 10) / 10));
+    // W/P = 1000 / (10 W/N) = 100 N/kW along the bottom of the region; the run above the map at W/P 0.
+    expect(drawn).toEqual([
+      [300, 100],
+      [600, 100],
+      [600, 0],
+      [300, 0],
+    ]);
+  });
+
+  it('in power-to-weight stays where d3 put it (the clip to the map hides the padding)', () => {
+    const s = scales();
+    const [shape] = contourShapes([open], s, { powerLoading: false });
+    const drawn = points(shape.d).map(([px, py]) => [s.x.invert(px), s.y.invert(py)].map((v) => Math.round(v * 10) / 10));
+    expect(drawn[2]).toEqual([600, 21.5]);
+  });
+});
+
 describe('the part of the plot a probability map covers', () => {
   it('is the map itself where it lies inside the plot', () => {
     // x = 100 + 600 W/S / 1200 and y = 420 - 400 P/W / 30 (linear scales).
@@ -138,12 +176,13 @@ describe('the part of the plot a probability map covers', () => {
     expect(box.y + box.height).toBe(420);
   });
 
-  it('in power loading reaches from the top of the plot down to W/P = k / (highest P/W of the map)', () => {
-    // P/W up to 25 W/N is W/P down to 1000/25 = 40 N/kW (power loading is the inverse of power-to-weight).
+  it('in power loading reaches from the top of the plot down to W/P = 0, where the contours continue past the map', () => {
+    // The map's P/W up to 25 W/N ends at W/P = 1000/25 = 40 N/kW (power loading is the inverse of
+    // power-to-weight); below that the contours run on to W/P = 0 (ringPath), so the clip does too.
     const s = scales([0, 200]);
     const box = mapBox([0, 1200], [0, 25], s, { powerLoading: true, factor: 1000 });
     expect(box.y).toBe(s.plot.top);
-    expect(s.y.invert(box.y + box.height)).toBeCloseTo(40, 9);
+    expect(box.y + box.height).toBe(s.plot.bottom);
     expect(box.width).toBe(s.plot.width);
   });
 });

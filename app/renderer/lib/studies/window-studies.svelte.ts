@@ -92,7 +92,7 @@ export class WindowStudies {
   run(system: UnitSystem): void {
     const current = this.#workspace.current;
     if (!current || this.blocked) return;
-    const grid = diagramGrid(current.evaluation, { system });
+    const grid = diagramGrid(current.evaluation, { system, powerLoading: true });
     const document = this.#workspace.document;
     this.probability.run(document, grid, { concept: this.#conceptName(), key: studyKey(document), pointKey: pointKey(document) });
   }
