@@ -22,7 +22,9 @@ export type EditorValue =
   | { type: 'percent' }
   /** true or false; the file takes a JSON boolean. */
   | { type: 'switch' }
-  | { type: 'configuration' };
+  | { type: 'configuration' }
+  /** One of a fixed list of words; the file takes the word (`value`), the editor shows its title. */
+  | { type: 'choice'; choices: ReadonlyArray<{ value: string; title: string }> };
 
 export interface EditorField {
   key: string;

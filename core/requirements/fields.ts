@@ -3,8 +3,9 @@
  * editor's value kinds, and number text for summaries.
  */
 import * as z from 'zod';
+import { RUNWAY_SURFACES, RUNWAY_SURFACE_WORDS } from '../assumptions/study-case';
 import { quantityField, ratioField } from '../concept/quantity-field';
-import type { EditorValue } from './descriptor';
+import type { EditorField, EditorValue } from './descriptor';
 
 export const fraction = z.number().gt(0).lte(1);
 /** A fraction of the requirement's common fields: 0.75 or "75 %". */
@@ -22,6 +23,16 @@ export const trueSpeedValue = (): EditorValue => ({ type: 'quantity', dimension:
 export const rateValue = (): EditorValue => ({ type: 'quantity', dimension: 'speed', units: { si: 'm/s', us: 'ft/min' } });
 export const lengthValue = (): EditorValue => ({ type: 'quantity', dimension: 'length', units: { si: 'm', us: 'ft' } });
 export const numberValue = (integer = false): EditorValue => ({ type: 'number', integer });
+
+/** The surface of a take-off run: only the studies read it, to pick the rolling-friction band that is typical. */
+export const runwaySurfaceField: EditorField = {
+  key: 'runwaySurface',
+  title: 'Runway surface',
+  value: { type: 'choice', choices: RUNWAY_SURFACES.map((value) => ({ value, title: RUNWAY_SURFACE_WORDS[value] })) },
+  defaultText: 'not stated',
+  advanced: true,
+  help: 'Only the studies read it: it picks the typical band of rolling friction.',
+};
 
 export function plain(value: number, digits = 2): string {
   return Number.isFinite(value) ? String(Number(value.toFixed(digits))) : '—';

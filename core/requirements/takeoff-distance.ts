@@ -18,7 +18,7 @@ import { FOOT_M, G0 } from '../units/factors';
 import { formatQuantity } from '../units/display';
 import type { RequirementCommon } from './common';
 import { defineRequirement } from './descriptor';
-import { lengthValue, mark, numberValue, plain, speedFactor } from './fields';
+import { lengthValue, mark, numberValue, plain, runwaySurfaceField, speedFactor } from './fields';
 import type { RunwaySurface } from '../assumptions/study-case';
 
 export interface TakeoffDistanceRequirement extends RequirementCommon {
@@ -155,6 +155,7 @@ export const takeoffDistance = defineRequirement<'takeoff-distance', TakeoffDist
     { key: 'distance', title: 'Take-off distance', value: lengthValue(), required: true },
     { key: 'obstacleHeight', title: 'Obstacle height', value: lengthValue(), defaultText: '50 ft' },
     { key: 'rollingFriction', title: 'Rolling friction', value: numberValue(), defaultText: '0.04', advanced: true, typical: mark(ROLLING_FRICTION) },
+    runwaySurfaceField,
     { key: 'clGroundRun', title: 'Lift coefficient in the ground run', value: numberValue(), defaultText: '0.5', advanced: true, typical: mark(CL_GROUND_RUN) },
     { key: 'liftoffSpeedFactor', title: 'Lift-off speed / stall speed', value: numberValue(), defaultText: '1.1', advanced: true },
     { key: 'rotationTime', title: 'Rotation time', value: { type: 'quantity', dimension: 'time', units: { si: 's', us: 's' } }, defaultText: '3 s', advanced: true },

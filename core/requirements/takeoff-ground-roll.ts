@@ -12,7 +12,7 @@ import { quantityField } from '../concept/quantity-field';
 import { formatQuantity } from '../units/display';
 import { messageNumber } from '../units/message-number';
 import { defineRequirement } from './descriptor';
-import { lengthValue, mark, numberValue, plain, speedFactor } from './fields';
+import { lengthValue, mark, numberValue, plain, runwaySurfaceField, speedFactor } from './fields';
 
 export type { TakeoffGroundRollRequirement };
 
@@ -68,6 +68,7 @@ export const takeoffGroundRoll = defineRequirement<'takeoff-ground-roll', Takeof
   editorFields: [
     { key: 'distance', title: 'Ground roll', value: lengthValue(), required: true },
     { key: 'rollingFriction', title: 'Rolling friction', value: numberValue(), defaultText: '0.04', advanced: true, typical: mark(ROLLING_FRICTION) },
+    runwaySurfaceField,
     { key: 'clGroundRun', title: 'Lift coefficient in the ground run', value: numberValue(), defaultText: '0.5', advanced: true, typical: mark(CL_GROUND_RUN) },
     { key: 'liftoffSpeedFactor', title: 'Lift-off speed / stall speed', value: numberValue(), defaultText: '1.1', advanced: true },
   ],

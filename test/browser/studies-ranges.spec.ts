@@ -199,3 +199,32 @@ test('removing a requirement takes its ranges with it, and undo brings both back
   await expect(window.byTest('concept-issues')).toHaveCount(0);
   await window.expectNoNaN();
 });
+
+test('the aircraft class and a runway surface are chosen in the window, and the typical bands follow them', async ({ window }) => {
+  await window.selectConcept('LP-2 two-seat trainer');
+  // The trainer states a light aircraft and a grass strip; its typical aspect ratio is then 6-8 (core/methods.md section 9).
+  await window.byTest('tab-assumptions').click();
+  const aircraftClass = window.page.locator('#field-aircraft-class');
+  await expect(aircraftClass).toHaveValue('light-aircraft');
+  await aircraftClass.selectOption('transport');
+  await window.byTest('tab-ranges').click();
+  const aspect = window.byTest('range-aircraft_aero_aspectRatio');
+  await expect(aspect.getByTestId('range-source')).toContainText('aircraft class transport');
+  await window.byTest('fill-typical').click();
+  // Transports: aspect ratio about 10, taken as 9-11 (common practice), widened down to the trainer's own 7.4.
+  await expect(aspect.getByTestId('range-low')).toHaveValue('7.4');
+  await expect(aspect.getByTestId('range-high')).toHaveValue('11');
+
+  // The take-off run's surface, under More: soft ground instead of grass moves the rolling-friction band.
+  const friction = window.byTest('range-requirements_takeoff-grass_rollingFriction');
+  await expect(friction.getByTestId('range-source')).toContainText('runway surface grass strip');
+  await window.byTest('tab-requirements').click();
+  const card = await window.openRequirement('takeoff-grass');
+  await card.locator('details').first().locator('summary').click();
+  await expect(card.getByLabel('Runway surface')).toHaveValue('grass');
+  await card.getByLabel('Runway surface').selectOption('soft');
+  await window.byTest('tab-ranges').click();
+  await expect(friction.getByTestId('range-source')).toContainText('runway surface soft ground');
+  await window.shot('case-fields');
+  await window.expectNoNaN();
+});

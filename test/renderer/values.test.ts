@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { requirementFieldSpecs, type FieldSpec } from '../../app/renderer/lib/concept/fields';
+import { AIRCRAFT_FIELDS, requirementFieldSpecs, type FieldSpec } from '../../app/renderer/lib/concept/fields';
 import { convertedText, displayText, plainNumber, prettyUnit, readInput, storedSi } from '../../app/renderer/lib/concept/values';
 import { REQUIREMENT_KINDS, parseConcept, DEMO_CONCEPTS } from '../../core';
 import { requirementFields } from '../../core/concept/requirement-schema';
@@ -57,13 +57,42 @@ describe('readInput', () => {
     expect(readInput('', engines, 'si')).toEqual({ ok: true, value: undefined });
   });
 
+  it('reads a choice only as one of its words, and shows the stored word', () => {
+    const surface = spec('takeoff-distance', 'runwaySurface');
+    expect(readInput('grass', surface, 'si')).toEqual({ ok: true, value: 'grass' });
+    expect(readInput('', surface, 'si')).toEqual({ ok: true, value: undefined });
+    expect(readInput('gravel', surface, 'si')).toEqual({ ok: false, message: '"gravel" is not one of paved, grass, soft' });
+    expect(displayText('soft', surface, 'us')).toBe('soft');
+    expect(fieldUnitless(surface)).toBe(true);
+  });
+
   it('writes units the concept file accepts', () => {
     expect(prettyUnit('N/m^2')).toBe('N/m²');
     expect(prettyUnit('degF')).toBe('°F');
   });
 });
 
+function fieldUnitless(field: FieldSpec): boolean {
+  return storedSi('grass', field) === null;
+}
+
 describe('field specs', () => {
+  it('offer as choices exactly the words the concept file accepts (aircraft class, runway surface)', () => {
+    const demo = DEMO_CONCEPTS.find((d) => d.slug === 'trainer')!.concept;
+    const aircraftClass = AIRCRAFT_FIELDS.find((field) => field.key === 'class')!;
+    const surface = spec('takeoff-ground-roll', 'runwaySurface');
+    for (const [field, place] of [
+      [aircraftClass, (value: string) => ({ ...demo, aircraft: { ...demo.aircraft, class: value } })],
+      [surface, (value: string) => ({ ...demo, requirements: demo.requirements.map((r) => (r.kind === 'takeoff-ground-roll' ? { ...r, runwaySurface: value } : r)) })],
+    ] as const) {
+      if (field.value.type !== 'choice') throw new Error(`${field.key} is not a choice`);
+      expect(field.value.choices.length).toBeGreaterThan(1);
+      for (const choice of field.value.choices) expect(parseConcept(place(choice.value)).ok, `${field.key} ${choice.value}`).toBe(true);
+      expect(parseConcept(place('gravel')).ok).toBe(false);
+    }
+    expect(demo.requirements.some((r) => r.kind === 'takeoff-ground-roll')).toBe(true);
+  });
+
   it('offer only fields the concept file knows, for every kind', () => {
     for (const kind of REQUIREMENT_KINDS) {
       const known = requirementFields(kind);
@@ -82,7 +111,7 @@ describe('field specs', () => {
             const read = readInput(shown, field, system);
             expect(read.ok, `${demo.slug} ${requirement.id}.${field.key} ${system}`).toBe(true);
             if (!read.ok) continue;
-            if (field.value.type === 'switch') expect(read.value).toBe(raw);
+            if (field.value.type === 'switch' || field.value.type === 'choice') expect(read.value).toBe(raw);
             else expect(storedSi(read.value, field)! / storedSi(raw, field)!).toBeCloseTo(1, 4);
           }
         }

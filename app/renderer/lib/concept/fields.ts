@@ -7,6 +7,7 @@
  */
 import type { RequirementKind } from '../../../../core';
 import { configurationRole } from '../../../../core/assumptions/configuration-role';
+import { AIRCRAFT_CLASSES, AIRCRAFT_CLASS_WORDS } from '../../../../core/assumptions/study-case';
 import { ASPECT_RATIO, CD0_CLEAN, CD0_INCREMENT, CLMAX, OSWALD } from '../../../../core/assumptions/typical-ranges';
 import { PROPULSION_DESCRIPTORS } from '../../../../core/propulsion/kinds';
 import { findRequirementKind, REQUIREMENT_DESCRIPTORS, type EditorField, type EditorValue } from '../../../../core/requirements';
@@ -76,6 +77,13 @@ export function configurationFieldSpecs(name: string): FieldSpec[] {
 
 export const AIRCRAFT_FIELDS: FieldSpec[] = [
   { key: 'takeoffMass', title: 'Take-off mass', value: { type: 'quantity', dimension: 'mass', units: { si: 'kg', us: 'lb' } }, required: true },
+  {
+    key: 'class',
+    title: 'Aircraft class',
+    value: { type: 'choice', choices: AIRCRAFT_CLASSES.map((value) => ({ value, title: AIRCRAFT_CLASS_WORDS[value] })) },
+    defaultText: 'not stated',
+    help: 'Only the studies read it: it picks the typical bands of clean CD0 and aspect ratio.',
+  },
 ];
 
 export const AERO_FIELDS: FieldSpec[] = [

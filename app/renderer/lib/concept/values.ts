@@ -56,6 +56,7 @@ export function storedSi(raw: unknown, spec: FieldSpec): number | null {
 export function displayText(raw: unknown, spec: FieldSpec, system: UnitSystem): string {
   if (raw === undefined || raw === null) return '';
   if (spec.value.type === 'configuration') return typeof raw === 'string' ? raw : '';
+  if (spec.value.type === 'choice') return typeof raw === 'string' ? raw : String(raw);
   if (spec.value.type === 'switch') return raw === true ? 'yes' : raw === false ? 'no' : String(raw);
   const si = storedSi(raw, spec);
   if (si === null) return typeof raw === 'string' ? raw : String(raw);
@@ -101,6 +102,12 @@ export function readInput(text: string, spec: FieldSpec, system: UnitSystem): Re
   switch (spec.value.type) {
     case 'configuration':
       return { ok: true, value: trimmed };
+    case 'choice': {
+      const { choices } = spec.value;
+      return choices.some((choice) => choice.value === trimmed)
+        ? { ok: true, value: trimmed }
+        : { ok: false, message: `"${trimmed}" is not one of ${choices.map((choice) => choice.value).join(', ')}` };
+    }
     case 'switch': {
       const word = trimmed.toLowerCase();
       if (['yes', 'on', 'true'].includes(word)) return { ok: true, value: true };
