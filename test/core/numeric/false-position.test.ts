@@ -1,0 +1,70 @@
+import { describe, expect, it } from 'vitest';
+import { fallingRoot } from '../../../core/numeric/bracket-root';
+import { smoothFallingRoot } from '../../../core/numeric/false-position';
+import { assertRelative } from '../helpers/asserts';
+
+// Check values are hand derivations: the roots of simple falling functions whose zero is known in
+// closed form, and the same crossing as the bisection of bracket-root.ts.
+const counted = (f: (x: number) => number) => {
+  let calls = 0;
+  return { f: (x: number) => (calls++, f(x)), calls: () => calls };
+};
+
+describe('smoothFallingRoot (Illinois false position)', () => {
+  it('finds sqrt(2) as the zero of 2 - x^2 to the stated 1e-10 relative width, in fewer evaluations than bisection', () => {
+    // 2 - x^2 = 0 at x = sqrt 2 = 1.41421356237... (hand derivation)
+    const a = counted((v) => 2 - v * v);
+    assertRelative(smoothFallingRoot(a.f, 0.1, 0.3, 100), Math.SQRT2, 2e-10, 'root');
+    const b = counted((v) => 2 - v * v);
+    fallingRoot(b.f, 0.1, 0.3, 100);
+    expect(a.calls()).toBeLessThan(b.calls() / 2);
+  });
+
+  it('finds the zero of a convex falling function, where plain false position keeps one end (10/x - 3 at 10/3)', () => {
+    // 10/x - 3 = 0 at x = 10/3 (hand derivation). Plain false position would move only the low end and
+    // never meet the width; the Illinois halving makes both ends close in.
+    const a = counted((v) => 10 / v - 3);
+    assertRelative(smoothFallingRoot(a.f, 0.5, 1, 100), 10 / 3, 1e-10, 'root');
+    expect(a.calls()).toBeLessThan(20);
+  });
+
+  it('widens the upper bracket by doubling until the function is negative', () => {
+    // 1000 - x is zero at 1000, far right of the first bracket end 1 (hand derivation).
+    assertRelative(smoothFallingRoot((v) => 1000 - v, 0.5, 1, 1e6), 1000, 1e-9, 'root');
+  });
+
+  it('stops the widening at maxHigh: NaN when the zero lies beyond it, found when between the last doubling and maxHigh', () => {
+    expect(smoothFallingRoot((v) => 3 - v, 0.5, 1, 2.5)).toBeNaN();
+    assertRelative(smoothFallingRoot((v) => 2.4 - v, 0.5, 1, 2.5), 2.4, 1e-9, 'root');
+  });
+
+  it('bisects where the not-yet-reached side is not a number: Infinity or NaN below the crossing', () => {
+    // Infinity below 1 (no solution there, as a run that never accelerates), then 1/x - 0.5, zero at 2.
+    assertRelative(smoothFallingRoot((v) => (v < 1 ? Infinity : 1 / v - 0.5), 0.01, 0.3, 100), 2, 1e-10, 'root');
+    // NaN below 1.5, -1 from 1.5 on: the crossing is x = 1.5.
+    assertRelative(smoothFallingRoot((v) => (v < 1.5 ? NaN : -1), 0.25, 0.5, 8), 1.5, 1e-9, 'root');
+  });
+
+  it('counts zero as reached: the first x where a clipped function is zero', () => {
+    // max(0, 1 - x) is positive below 1 and zero from 1 on: the crossing is x = 1.
+    assertRelative(smoothFallingRoot((v) => Math.max(0, 1 - v), 0.25, 0.5, 8), 1, 1e-9, 'root');
+  });
+
+  it('is NaN when already non-positive at the low end, or for an empty bracket', () => {
+    expect(smoothFallingRoot((v) => 1 - v, 2, 4, 8)).toBeNaN();
+    expect(smoothFallingRoot((v) => 1 - v, 1, 4, 8)).toBeNaN();
+    expect(smoothFallingRoot((v) => 5 - v, 2, 2, 8)).toBeNaN();
+    expect(smoothFallingRoot((v) => 5 - v, 3, 2, 8)).toBeNaN();
+  });
+
+  it('agrees with bisection to 1e-9 on falling exponentials, logarithms and powers', () => {
+    // e^-x - a (zero at -ln a), b - ln x (zero at e^b), c / x^3 - 1 (zero at c^(1/3)): hand derivations.
+    for (const a of [0.9, 0.5, 0.1, 1e-3]) assertRelative(smoothFallingRoot((v) => Math.exp(-v) - a, 1e-3, 0.3, 100), -Math.log(a), 1e-9, `e^-x = ${a}`);
+    for (const b of [0.5, 1, 3]) assertRelative(smoothFallingRoot((v) => b - Math.log(v), 0.5, 1, 1e3), Math.exp(b), 1e-9, `ln x = ${b}`);
+    for (const c of [2, 50, 1e4]) {
+      const f = (v: number) => c / v ** 3 - 1;
+      assertRelative(smoothFallingRoot(f, 0.1, 0.3, 1e3), Math.cbrt(c), 1e-9, `x^3 = ${c}`);
+      assertRelative(smoothFallingRoot(f, 0.1, 0.3, 1e3), fallingRoot(f, 0.1, 0.3, 1e3), 1e-9, `bisection, x^3 = ${c}`);
+    }
+  });
+});
