@@ -13,7 +13,7 @@ import type { BoundaryOf } from '../boundary';
 import { flightCondition, type FlightCondition } from '../constraints/flight-condition';
 import { rollDistance } from '../constraints/roll-distance';
 import { quantityField } from '../concept/quantity-field';
-import { fallingRoot } from '../numeric/bracket-root';
+import { smoothFallingRoot } from '../numeric/false-position';
 import { FOOT_M, G0 } from '../units/factors';
 import { formatQuantity } from '../units/display';
 import type { RequirementCommon } from './common';
@@ -49,49 +49,57 @@ export interface TakeoffSegments {
 }
 
 /**
- * The four segments [m] at wing loading w [Pa] with x the loading at the
- * field (T/W of the actual weight for jets, P/W [m/s] for propellers).
- * Infinity in a segment that is never completed (no climb, no acceleration).
+ * The four segments [m] at wing loading w [Pa] as a function of x, the
+ * loading at the field (T/W of the actual weight for jets, P/W [m/s] for
+ * propellers). What does not depend on x (the speeds, the ground-run and
+ * transition lift and drag, the arc's radius) is worked out once per wing
+ * loading. Infinity in a segment that is never completed (no climb, no
+ * acceleration).
  */
-function segmentsAt(r: TakeoffDistanceRequirement, c: FlightCondition, w: number, x: number): TakeoffSegments {
+function segmentsAtLoading(r: TakeoffDistanceRequirement, c: FlightCondition, w: number): (x: number) => TakeoffSegments {
   const { polar, densityKgM3: rho } = c;
   const weightLoading = c.beta * w;
   const vs = stallSpeed(weightLoading, rho, polar.clMax);
   const vLof = r.liftoffSpeedFactor * vs;
-  const thrustAt = (v: number, eta = c.propellerEfficiency): number => (c.propeller ? (eta * x) / v : x);
+  const thrustAt = (x: number, v: number, eta = c.propellerEfficiency): number => (c.propeller ? (eta * x) / v : x);
   const clg = r.clGroundRun;
-  const groundRoll = rollDistance({
-    thrustToWeight: thrustAt(MEAN_ROLL_SPEED_FRACTION * vLof),
-    friction: r.rollingFriction,
-    densityKgM3: rho,
-    wingLoadingPa: weightLoading,
-    liftCoefficient: clg,
-    dragCoefficient: dragCoefficient(polar, clg),
-    startSpeed: 0,
-    endSpeed: vLof,
-  });
+  const groundDrag = dragCoefficient(polar, clg);
   const rotation = r.rotationTimeS * vLof;
   // Transition arc at V_TR = 1.15 V_s, n = 1.2: R = V_TR^2 / (g0 (n - 1)); climb angle from excess thrust at V_TR.
   const vTr = TRANSITION_SPEED_FACTOR * vs;
   const radius = (vTr * vTr) / (G0 * (TRANSITION_LOAD_FACTOR - 1));
   const clTr = polar.clMax / (TRANSITION_SPEED_FACTOR * TRANSITION_SPEED_FACTOR);
-  const sinGamma = Math.min(1, thrustAt(vTr, r.climbPropellerEfficiency) - dragCoefficient(polar, clTr) / clTr);
-  if (!(sinGamma > 0)) return { groundRoll, rotation, transition: Infinity, climb: Infinity };
-  const cosGamma = Math.sqrt(1 - sinGamma * sinGamma);
+  const dragOverLiftTr = dragCoefficient(polar, clTr) / clTr;
   const h = r.obstacleHeightM;
-  const transitionHeight = radius * (1 - cosGamma);
-  if (transitionHeight >= h) {
-    return { groundRoll, rotation, transition: Math.sqrt(radius * radius - (radius - h) * (radius - h)), climb: 0 };
-  }
-  return { groundRoll, rotation, transition: radius * sinGamma, climb: ((h - transitionHeight) * cosGamma) / sinGamma };
+  return (x: number): TakeoffSegments => {
+    const groundRoll = rollDistance({
+      thrustToWeight: thrustAt(x, MEAN_ROLL_SPEED_FRACTION * vLof),
+      friction: r.rollingFriction,
+      densityKgM3: rho,
+      wingLoadingPa: weightLoading,
+      liftCoefficient: clg,
+      dragCoefficient: groundDrag,
+      startSpeed: 0,
+      endSpeed: vLof,
+    });
+    const sinGamma = Math.min(1, thrustAt(x, vTr, r.climbPropellerEfficiency) - dragOverLiftTr);
+    if (!(sinGamma > 0)) return { groundRoll, rotation, transition: Infinity, climb: Infinity };
+    const cosGamma = Math.sqrt(1 - sinGamma * sinGamma);
+    const transitionHeight = radius * (1 - cosGamma);
+    if (transitionHeight >= h) {
+      return { groundRoll, rotation, transition: Math.sqrt(radius * radius - (radius - h) * (radius - h)), climb: 0 };
+    }
+    return { groundRoll, rotation, transition: radius * sinGamma, climb: ((h - transitionHeight) * cosGamma) / sinGamma };
+  };
 }
 
 const total = (s: TakeoffSegments): number => s.groundRoll + s.rotation + s.transition + s.climb;
 
-/** Field loading x (see segmentsAt) that takes off over the obstacle in the distance; NaN where none up to a T/W of 50 does. */
+/** Field loading x (see segmentsAtLoading) that takes off over the obstacle in the distance; NaN where none up to a T/W of 50 does. */
 function fieldLoadingRequired(r: TakeoffDistanceRequirement, c: FlightCondition, w: number): number {
   const scale = c.propeller ? stallSpeed(c.beta * w, c.densityKgM3, c.polar.clMax) / c.propellerEfficiency : 1;
-  return fallingRoot((x) => total(segmentsAt(r, c, w, x)) - r.distanceM, 1e-6 * scale, 0.3 * scale, 50 * scale);
+  const segments = segmentsAtLoading(r, c, w);
+  return smoothFallingRoot((x) => total(segments(x)) - r.distanceM, 1e-6 * scale, 0.3 * scale, 50 * scale);
 }
 
 /** T_SL/W_TO (or P_SL/W_TO) = (beta/alpha) x, x solving S_G + S_R + S_TR + S_C = S_TO. */
@@ -112,7 +120,7 @@ export function takeoffDistanceBoundary(r: TakeoffDistanceRequirement, aircraft:
 /** The segments [m] at wing loading w with the given sea-level loading (T_SL/W_TO or P_SL/W_TO). */
 export function takeoffDistanceSegments(r: TakeoffDistanceRequirement, aircraft: Aircraft, w: number, loading: number): TakeoffSegments {
   const c = flightCondition(r, aircraft);
-  return segmentsAt(r, c, w, (loading * c.alpha) / c.beta);
+  return segmentsAtLoading(r, c, w)((loading * c.alpha) / c.beta);
 }
 
 const shape = {
@@ -174,7 +182,7 @@ export const takeoffDistance = defineRequirement<'takeoff-distance', TakeoffDist
   templates: [],
   methods: `### Take-off distance (\`takeoff-distance\`)
 
-A curve: the sea-level rated thrust (or power) per take-off weight with which all engines take the aircraft from rest over an obstacle of height h_obs within the distance S_TO. The distance is the sum of four segments, and the loading is found by a bracketing root search (bisection) on that sum.
+A curve: the sea-level rated thrust (or power) per take-off weight with which all engines take the aircraft from rest over an obstacle of height h_obs within the distance S_TO. The distance is the sum of four segments, and the loading is found by a bracketing root search on that sum (false position, Illinois variant, to a relative width of 1e-10).
 
     S_TO = S_G + S_R + S_TR + S_C
     S_G  = ln[(K_T + K_A V_LOF^2) / K_T] / (2 g0 K_A),   K_T = T/W - mu,   K_A = rho (mu C_L,g - C_D,g) / (2 beta w)
