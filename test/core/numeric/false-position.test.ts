@@ -73,7 +73,9 @@ describe('smoothFallingRoot (Illinois false position)', () => {
   });
 
   it('takes the first x where the function is zero or less, across a flat zero before it falls below', () => {
-    // 1 - x up to 1, then 0 up to 2, then -1: zero is reached at x = 1 (hand derivation), not 2.
+    // 1 - x up to 1, then 0 up to 2, then -1: zero is reached at x = 1 (hand derivation), not 2. From the
+    // bracket [0.25, 3] the first chord lands in the flat part, at 1.43.
+    assertRelative(smoothFallingRoot((v) => (v < 1 ? 1 - v : v < 2 ? 0 : -1), 0.25, 3, 8), 1, 1e-9, 'root');
     assertRelative(smoothFallingRoot((v) => (v < 1 ? 1 - v : v < 2 ? 0 : -1), 0.25, 0.5, 8), 1, 1e-9, 'root');
   });
 
