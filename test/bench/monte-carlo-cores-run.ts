@@ -14,6 +14,7 @@ import { DEMO_CONCEPTS, evaluateDesign, parseConcept } from '../../core';
 import type { StudyInput } from '../../app/report/studies';
 
 const RUNS = Number(process.env.RUNS ?? 7);
+const SAMPLES = Number(process.env.MC_SAMPLES ?? 10000);
 const { reportProbabilityMap, monteCarloWorkers } = await import('../../app/cli/monte-carlo-workers');
 type ThreadTiming = import('../../app/cli/monte-carlo-workers').ThreadTiming;
 
@@ -38,7 +39,7 @@ async function measure(slug: string): Promise<{ slug: string; oneThread: number;
   const demo = DEMO_CONCEPTS.find((d) => d.slug === slug)!;
   const parsed = parseConcept(demo.concept);
   if (!parsed.ok) throw new Error(`the ${slug} demo does not parse`);
-  const input: StudyInput = { design: parsed.design, concept: demo.concept, evaluation: evaluateDesign(parsed.design), system: 'si', options: { samples: Number(process.env.MC_SAMPLES ?? 10000), seed: 20261202 } };
+  const input: StudyInput = { design: parsed.design, concept: demo.concept, evaluation: evaluateDesign(parsed.design), system: 'si', options: { samples: SAMPLES, seed: 20261202 } };
 
   const reference = (await reportProbabilityMap(input, 1)).map!; // warm-up, and the one-thread map
   const times: Record<number, number[]> = { 1: [], 2: [] };
@@ -97,7 +98,7 @@ async function measure(slug: string): Promise<{ slug: string; oneThread: number;
   }
   const one = stats(times[1]);
   const two = stats(times[2]);
-  console.log(`Monte Carlo, ${input.options.samples.toLocaleString('en-US')} samples, ${slug} demo, typical ranges; wall time, median (10th-90th percentile) of ${RUNS} interleaved runs`);
+  console.log(`Monte Carlo, ${SAMPLES.toLocaleString('en-US')} samples, ${slug} demo, typical ranges; wall time, median (10th-90th percentile) of ${RUNS} interleaved runs`);
   console.log(`  cores ${availableParallelism()}; load average ${loadavg().map((x) => x.toFixed(2)).join(' ')}; threads chosen for this load: ${monteCarloWorkers()}`);
   console.log(`  1 thread    wall ${fmt(one)}   CPU ${fmt(stats(cpu[1]))}`);
   console.log(`  2 threads   wall ${fmt(two)}   CPU ${fmt(stats(cpu[2]))}   speed-up ${(one.median / two.median).toFixed(2)}x`);
