@@ -6,11 +6,11 @@
  * result is checked as a concept before anything is written.
  */
 import type { Command } from 'commander';
-import { readFileSync } from 'node:fs';
 import { PRELIMINARY_CAUTION } from '../../core/caution';
 import { addConfiguration, removeConfiguration, renameConfiguration, type ConfigurationEdit } from '../../core/concept/configurations';
 import { parseConcept, type ConceptDocument } from '../../core/concept';
 import { InputError } from './errors';
+import { inputName, readInputText } from './input-text';
 import type { CliIO, SetExitCode } from './io';
 import { checkOutputTarget, oneLine, writeWhole, type OutputTarget } from './output-file';
 
@@ -20,21 +20,15 @@ interface OutOptions {
 }
 
 function readConcept(file: string): ConceptDocument {
-  let text: string;
-  try {
-    text = readFileSync(file, 'utf8');
-  } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code;
-    throw new InputError(code === 'ENOENT' ? 'no such file' : `cannot read the file (${code ?? String(error)})`, file);
-  }
+  const text = readInputText(file);
   let document: unknown;
   try {
     document = JSON.parse(text);
   } catch (error) {
-    throw new InputError(`is not valid JSON (${oneLine((error as Error).message)})`, file);
+    throw new InputError(`is not valid JSON (${oneLine((error as Error).message)})`, inputName(file));
   }
   const parsed = parseConcept(document);
-  if (!parsed.ok) throw new InputError(`${oneLine(parsed.issues[0]?.message ?? 'is not a valid concept')}; fix it before editing`, file, parsed.issues[0]?.path || undefined);
+  if (!parsed.ok) throw new InputError(`${oneLine(parsed.issues[0]?.message ?? 'is not a valid concept')}; fix it before editing`, inputName(file), parsed.issues[0]?.path || undefined);
   return document as ConceptDocument;
 }
 
@@ -47,11 +41,11 @@ function number(value: string | undefined, flag: string): number | undefined {
 
 /** Prints or writes the edited concept; `done` says what was done, for the readable line after writing. */
 function finish(io: CliIO, file: string, edit: ConfigurationEdit, options: OutOptions, done: string): void {
-  if (!edit.ok) throw new InputError(edit.message, file, edit.path);
+  if (!edit.ok) throw new InputError(edit.message, inputName(file), edit.path);
   const checked = parseConcept(edit.concept);
   if (!checked.ok) {
     const first = checked.issues[0];
-    throw new InputError(`the edited concept would not be valid: ${oneLine(first?.message ?? 'unknown problem')}; nothing was written`, file, first?.path || undefined);
+    throw new InputError(`the edited concept would not be valid: ${oneLine(first?.message ?? 'unknown problem')}; nothing was written`, inputName(file), first?.path || undefined);
   }
   const text = `${JSON.stringify(edit.concept, null, 2)}\n`;
   if (options.out === undefined) {
@@ -66,7 +60,7 @@ function finish(io: CliIO, file: string, edit: ConfigurationEdit, options: OutOp
 export function registerConcept(program: Command, io: CliIO, _setExitCode: SetExitCode): void {
   const concept = program
     .command('concept')
-    .description('Edit a concept JSON file: add, rename or remove an aerodynamic configuration (prints the edited concept, or --out FILE).');
+    .description('Edit a concept JSON file (or - for standard input): add, rename or remove an aerodynamic configuration (prints the edited concept, or --out FILE).');
   const out = (command: Command) =>
     command
       .option('--out <file>', 'write the edited concept to this new file instead of printing it (never the input file)')
@@ -76,7 +70,7 @@ export function registerConcept(program: Command, io: CliIO, _setExitCode: SetEx
     concept
       .command('add-configuration')
       .description('Add a configuration (e.g. engine-out); values not given are clean\'s, the CD0 increment 0.')
-      .argument('<file>', 'the concept JSON file')
+      .argument('<file>', 'the concept JSON file (- reads it from standard input)')
       .argument('<name>', 'the new configuration\'s name')
       .option('--cd0-increment <x>', 'zero-lift drag added to clean\'s CD0 (flaps, gear, windmilling)')
       .option('--oswald <e>', 'Oswald efficiency e')
@@ -94,7 +88,7 @@ export function registerConcept(program: Command, io: CliIO, _setExitCode: SetEx
     concept
       .command('rename-configuration')
       .description('Rename a configuration; requirements flown in it and ranges on its fields follow.')
-      .argument('<file>', 'the concept JSON file')
+      .argument('<file>', 'the concept JSON file (- reads it from standard input)')
       .argument('<from>', 'the configuration\'s name now')
       .argument('<to>', 'its new name'),
   ).action((file: string, from: string, to: string, options: OutOptions) => {
@@ -105,7 +99,7 @@ export function registerConcept(program: Command, io: CliIO, _setExitCode: SetEx
     concept
       .command('remove-configuration')
       .description('Remove a configuration no requirement or range uses (clean stays).')
-      .argument('<file>', 'the concept JSON file')
+      .argument('<file>', 'the concept JSON file (- reads it from standard input)')
       .argument('<name>', 'the configuration to remove'),
   ).action((file: string, name: string, options: OutOptions) => {
     finish(io, file, removeConfiguration(readConcept(file), name), options, `Removed configuration "${name}"`);

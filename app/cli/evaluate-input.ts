@@ -3,10 +3,11 @@
  * version of a project file. Every way the input can be wrong becomes an
  * InputError that names the file, the field and what to change.
  */
-import { closeSync, openSync, readFileSync, readSync, statSync } from 'node:fs';
+import { closeSync, openSync, readSync, statSync } from 'node:fs';
 import { parseConceptText } from '../../core/concept/parse';
 import type { ConceptIssue, ConceptJson, Design, WarningJson } from '../../core';
 import { InputError } from './errors';
+import { STANDARD_INPUT, inputFileError, inputName, readInputText } from './input-text';
 import { oneLine } from './output-file';
 import { parseVersionRef, type VersionName } from '../service/version-ref';
 
@@ -38,12 +39,12 @@ const SQLITE_HEADER = 'SQLite format 3\0';
 
 /** Read FILE (and `--version`) into a resolved design, or throw InputError. */
 export async function readEvaluateInput(file: string, version: string | undefined): Promise<EvaluateInput> {
-  const kind = fileKind(file);
+  const kind = file === STANDARD_INPUT ? 'concept' : fileKind(file);
   if (kind === 'project') return readProjectVersion(file, version);
   if (version !== undefined) {
-    throw new InputError('applies only to project files; this is a concept JSON file (drop --version, or name a project file)', file, '--version');
+    throw new InputError('applies only to project files; this is a concept JSON file (drop --version, or name a project file)', inputName(file), '--version');
   }
-  return conceptFrom(file, file, readText(file));
+  return conceptFrom(inputName(file), inputName(file), readInputText(file));
 }
 
 function fileKind(file: string): 'concept' | 'project' {
@@ -51,7 +52,7 @@ function fileKind(file: string): 'concept' | 'project' {
   try {
     stats = statSync(file);
   } catch (error) {
-    throw fileError(error, file);
+    throw inputFileError(error, file);
   }
   if (stats.isDirectory()) throw new InputError('is a folder; name a concept JSON file or a project file', file);
   if (!stats.isFile()) throw new InputError('is not a regular file; name a concept JSON file or a project file', file);
@@ -62,32 +63,9 @@ function fileKind(file: string): 'concept' | 'project' {
     const read = readSync(fd, header, 0, 16, 0);
     return read === 16 && header.toString('latin1') === SQLITE_HEADER ? 'project' : 'concept';
   } catch (error) {
-    throw fileError(error, file);
+    throw inputFileError(error, file);
   } finally {
     if (fd !== undefined) closeSync(fd);
-  }
-}
-
-function readText(file: string): string {
-  try {
-    return readFileSync(file, 'utf8').replace(/^\uFEFF/, '');
-  } catch (error) {
-    throw fileError(error, file);
-  }
-}
-
-function fileError(error: unknown, file: string): InputError {
-  const code = (error as NodeJS.ErrnoException | undefined)?.code;
-  switch (code) {
-    case 'ENOENT':
-      return new InputError('no such file', file);
-    case 'EACCES':
-    case 'EPERM':
-      return new InputError('cannot be read (permission denied)', file);
-    case 'EISDIR':
-      return new InputError('is a folder; name a concept JSON file or a project file', file);
-    default:
-      return new InputError(`cannot be read (${code ?? (error instanceof Error ? error.message : String(error))})`, file);
   }
 }
 

@@ -34,7 +34,7 @@ export function registerEvaluate(program: Command, io: CliIO, setExitCode: SetEx
       'Evaluate a concept: which requirements bind, by how much, the optimum, the design point, ' +
         'wing area and installed power or thrust. Preliminary sizing only.',
     )
-    .argument('<file>', 'a concept JSON file, or a project file with --version')
+    .argument('<file>', 'a concept JSON file (- reads it from standard input), or a project file with --version')
     .option('--version <n>', 'the stored version to evaluate (project files only): the project-wide number N, or CONCEPT@N for that concept\'s N-th version')
     .option('--json', 'print the evaluation as JSON (always SI units)')
     .option('--csv', 'print the sampled boundaries as CSV')

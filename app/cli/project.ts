@@ -11,6 +11,7 @@ import { basename, extname } from 'node:path';
 import { PRELIMINARY_CAUTION } from '../../core/caution';
 import type { ProjectService, ServiceError, UnitSystem } from '../service';
 import { EXIT_FAILURE, InputError } from './errors';
+import { STANDARD_INPUT, inputName, readInputText } from './input-text';
 import { conceptVersionNumber, parseVersionRef } from '../service/version-ref';
 import type { CliIO } from './io';
 import type { SetExitCode } from './io';
@@ -39,14 +40,6 @@ function unitsOption(value: string | undefined): UnitSystem | undefined {
   return value;
 }
 
-function readText(file: string): string {
-  try {
-    return readFileSync(file, 'utf8');
-  } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code;
-    throw new InputError(code === 'ENOENT' ? 'no such file' : `cannot read the file (${code ?? String(error)})`, file);
-  }
-}
 
 class ReportedFailure extends Error {}
 
@@ -134,17 +127,17 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .command('save')
     .description('Save a concept as a new version; prints only the new version number.')
     .argument('<file>', 'the project file')
-    .argument('<concept>', 'the concept JSON file')
+    .argument('<concept>', 'the concept JSON file (- reads it from standard input)')
     .requiredOption('--note <text>', 'why this version exists (plain text or Markdown)')
     .option('--concept <name>', 'the concept (design alternative) to save into; created when new')
     .option('--parent <version>', 'the version this one was edited from, N or CONCEPT@N (default: the newest of its concept)')
     .option('--author <name>', 'author (default: $LOFTPOINT_AUTHOR or your user name)')
     .action((file: string, conceptFile: string, options: { note: string; concept?: string; parent?: string; author?: string }) =>
       run(io, setExitCode, (service) => {
-        const conceptText = readText(conceptFile);
+        const conceptText = readInputText(conceptFile);
         service.openProject({ file });
         const parent = options.parent === undefined ? undefined : versionNumber(service, options.parent, '--parent');
-        const saved = refusingInvalidConcept(conceptFile, 'saved', () =>
+        const saved = refusingInvalidConcept(inputName(conceptFile), 'saved', () =>
           service.saveVersion({
             conceptText,
             note: options.note,
@@ -153,7 +146,7 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
             ...(options.author !== undefined ? { author: options.author } : {}),
           }),
         );
-        for (const warning of saved.warnings) io.err(`loftpoint: warning: ${conceptFile}: ${warning}\n`);
+        for (const warning of saved.warnings) io.err(`loftpoint: warning: ${inputName(conceptFile)}: ${warning}\n`);
         io.out(`${saved.version.number}\n`);
       })(),
     );
@@ -202,13 +195,13 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
     .command('import-concept')
     .description('Add a concept JSON file to the project as a new concept (design alternative); prints only its first version number.')
     .argument('<file>', 'the project file')
-    .argument('<concept>', 'the concept JSON file (checked field by field; nothing is saved if it is not valid)')
+    .argument('<concept>', 'the concept JSON file, - for standard input (checked field by field; nothing is saved if it is not valid)')
     .option('--name <name>', 'the new concept\'s name in the project (default: the concept\'s own name); refused when taken')
     .option('--note <text>', 'why this alternative exists (default: "Imported from FILE.")')
     .option('--author <name>', 'author (default: $LOFTPOINT_AUTHOR or your user name)')
     .action((file: string, conceptFile: string, options: { name?: string; note?: string; author?: string }) =>
       run(io, setExitCode, (service) => {
-        const conceptText = readText(conceptFile);
+        const conceptText = readInputText(conceptFile);
         let ownName: unknown;
         try {
           ownName = (JSON.parse(conceptText) as { name?: unknown } | null)?.name;
@@ -216,19 +209,20 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
           ownName = undefined; // the save below reports the JSON error with its place
         }
         service.openProject({ file });
-        const name = (options.name ?? (typeof ownName === 'string' && ownName.trim() !== '' ? ownName : basename(conceptFile, extname(conceptFile)))).trim();
+        const fileName = conceptFile === STANDARD_INPUT ? 'piped concept' : basename(conceptFile, extname(conceptFile));
+        const name = (options.name ?? (typeof ownName === 'string' && ownName.trim() !== '' ? ownName : fileName)).trim();
         if (service.listConcepts({}).some((concept) => concept.name === name)) {
           throw new InputError(`a concept "${name}" already exists in ${file}; choose another with --name (or add a version to it with: loftpoint project save)`, undefined, '--name');
         }
-        const saved = refusingInvalidConcept(conceptFile, 'imported', () =>
+        const saved = refusingInvalidConcept(inputName(conceptFile), 'imported', () =>
           service.importConcept({
             conceptText,
             name,
-            note: options.note ?? `Imported from ${basename(conceptFile)}.`,
+            note: options.note ?? `Imported from ${conceptFile === STANDARD_INPUT ? 'standard input' : basename(conceptFile)}.`,
             ...(options.author !== undefined ? { author: options.author } : {}),
           }),
         );
-        for (const warning of saved.warnings) io.err(`loftpoint: warning: ${conceptFile}: ${warning}\n`);
+        for (const warning of saved.warnings) io.err(`loftpoint: warning: ${inputName(conceptFile)}: ${warning}\n`);
         io.out(`${saved.version.number}\n`);
       })(),
     );
@@ -306,16 +300,16 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
   project
     .command('import')
     .description('Create a new project file from an export (never overwrites).')
-    .argument('<export>', 'a project or version export (JSON)')
+    .argument('<export>', 'a project or version export (JSON; - for standard input)')
     .argument('<file>', 'the new project file')
     .action((exportFile: string, file: string) =>
       run(io, setExitCode, (service) => {
         let document: unknown;
         try {
-          document = JSON.parse(readText(exportFile));
+          document = JSON.parse(readInputText(exportFile));
         } catch (error) {
           if (error instanceof InputError) throw error;
-          throw new InputError(`is not valid JSON (${(error as Error).message})`, exportFile);
+          throw new InputError(`is not valid JSON (${(error as Error).message})`, inputName(exportFile));
         }
         const info = service.importProject({ file, document });
         io.out(`Imported ${info.versionCount} versions of ${info.conceptCount} concepts into ${info.file}.\n${PRELIMINARY_CAUTION}\n`);

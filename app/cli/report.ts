@@ -48,7 +48,7 @@ export function registerReport(program: Command, io: CliIO, setExitCode: SetExit
         'The extension of --out picks the output: .html, .pdf, .svg or .png (the diagram), .csv (the boundaries).\n' +
         'Preliminary sizing only.',
     )
-    .argument('<file>', 'a concept JSON file, or a project file with --version')
+    .argument('<file>', 'a concept JSON file (- reads it from standard input), or a project file with --version')
     .option('--version <n>', 'the stored version to report (project files only): the project-wide number N, or CONCEPT@N for that concept\'s N-th version')
     .option('--out <path>', 'the file to write: .html, .pdf, .svg, .png or .csv (replaces only an earlier Loftpoint output)')
     .option('--force', 'replace an existing --out file even if Loftpoint did not write it (never a read-only one)')
