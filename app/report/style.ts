@@ -54,6 +54,9 @@ td .label { display: block; color: #52606d; font-size: 7.8pt; }
 td.small { font-size: 7.3pt; color: #3e4c59; min-width: 38%; }
 td.bad, span.bad { color: #9b2c2c; font-weight: 600; }
 td.binds { font-weight: 600; }
+/* The requirements table: the label and values take the room, numeric headings wrap over their columns. */
+table.requirements th.num { white-space: normal; width: 9%; }
+table.requirements td:nth-child(2) { width: 44%; }
 table.facts { width: auto; min-width: 55%; }
 table.narrow { width: auto; min-width: 55%; }
 table.costs tbody tr:nth-child(odd) td { border-bottom: none; }
