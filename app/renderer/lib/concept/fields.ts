@@ -79,10 +79,10 @@ export const AIRCRAFT_FIELDS: FieldSpec[] = [
   { key: 'takeoffMass', title: 'Take-off mass', value: { type: 'quantity', dimension: 'mass', units: { si: 'kg', us: 'lb' } }, required: true },
   {
     key: 'class',
-    title: 'Aircraft class',
+    title: 'Class for typical ranges',
     value: { type: 'choice', choices: AIRCRAFT_CLASSES.map((value) => ({ value, title: AIRCRAFT_CLASS_WORDS[value] })) },
     defaultText: 'not stated',
-    help: 'Only the studies read it: it picks the typical bands of clean CD0 and aspect ratio.',
+    help: "Only the studies read it: it picks the typical bands of clean CD0 and aspect ratio. The mission's aircraft class (the empty-mass regression) is set apart, under Mission.",
   },
 ];
 
