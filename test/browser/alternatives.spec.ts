@@ -73,3 +73,15 @@ test("a version compared with another concept's version", async ({ window, page 
   await page.screenshot({ path: `${SHOTS}/compare-across-concepts.png` });
   await window.byTest('back-to-draft').click();
 });
+
+test('comparing across concepts names versions by their number within their concept, as the version list does', async ({ window }) => {
+  // The business jet is the project's third version but its concept's first: v1, as the list shows it.
+  await window.selectConcept('LP-60 light business jet');
+  await window.byTest('tab-history').click();
+  await expect(window.byTest('version-list').getByTestId('version-number').first()).toHaveText('v1');
+  await expect(window.page.locator('label[for="compare-with"]')).toHaveText('Compare v1 with');
+  // The twin is the project's second version and its concept's first.
+  const twin = window.byTest('compare-with').locator('optgroup[label="LP-19 utility twin"] option').first();
+  await expect(twin).toHaveText(/^v1 · LP-19 utility twin/);
+  expect(Number(await twin.getAttribute('value'))).toBeGreaterThan(1);
+});
