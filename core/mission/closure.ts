@@ -5,7 +5,7 @@
  * memory), solved for m_0 with the project's bracketing root finder.
  */
 import type { Aircraft } from '../aircraft';
-import { fallingRoot } from '../numeric/bracket-root';
+import { smoothFallingRoot } from '../numeric/false-position';
 import { formatQuantity } from '../units/display';
 import { AIRCRAFT_CLASS_TITLES } from './aircraft-class';
 import { regressionEmptyFraction } from './empty-mass-fraction';
@@ -64,8 +64,9 @@ function noClosure(mission: Mission, flown: FlownMission): { ok: false; field: s
 
 /**
  * m_0 where (m_payload + m_crew)/m_0 + W_e/W_0(m_0) + energy fraction = 1, by
- * bracketing from m_0 = payload + crew; NaN where none closes below the
- * bracket's top. `iterations` counts the evaluations of the balance.
+ * bracketing from m_0 = payload + crew (false position: the balance is smooth
+ * in m_0); NaN where none closes below the bracket's top. `iterations` counts
+ * the evaluations of the balance.
  */
 export function solveTakeoffMass(
   carriedKg: number,
@@ -79,7 +80,7 @@ export function solveTakeoffMass(
     return carriedKg / m + emptyFraction(m) + energyFraction - 1;
   };
   // The first upper end is held to the top too, so no mass above it is ever returned.
-  const takeoffKg = fallingRoot(leftOver, carriedKg, Math.min(2 * carriedKg, HEAVIEST_TAKEOFF_MASS_KG), HEAVIEST_TAKEOFF_MASS_KG);
+  const takeoffKg = smoothFallingRoot(leftOver, carriedKg, Math.min(2 * carriedKg, HEAVIEST_TAKEOFF_MASS_KG), HEAVIEST_TAKEOFF_MASS_KG);
   return { takeoffKg, iterations };
 }
 

@@ -39,7 +39,10 @@ export function smoothFallingRoot(f: (x: number) => number, low: number, high: n
     // Where the chord between the ends crosses zero; NaN when the low end is +Infinity, and on an end
     // when the other's value is zero or -Infinity: bisect then.
     const chord = lo + (hi - lo) * (fLo / (fLo - fHi));
-    const x = chord > lo && chord < hi ? chord : 0.5 * (lo + hi);
+    // A step at least a quarter of the final width inside either end: a chord that lands on an end (the
+    // root is that close) then brackets it at once, instead of leaving the other end to be halved in.
+    const margin = 0.25e-10 * hi;
+    const x = chord > lo && chord < hi ? Math.min(Math.max(chord, lo + margin), hi - margin) : 0.5 * (lo + hi);
     const fx = value(x);
     if (fx > 0) {
       [lo, fLo] = [x, fx];
