@@ -72,6 +72,18 @@ describe('smoothFallingRoot (Illinois false position)', () => {
     }
   });
 
+  it('closes the bracket at once when a chord lands on the root, as in a take-off mass balance', () => {
+    // The mission balance 780/m + 1.02 m^-0.06 + 0.32 - 1 (payload and crew 780 kg, an empty-mass power law,
+    // fuel fraction 0.32; core/methods.md section 12): the chords reach the root to the last digit, and the
+    // next step, a quarter width inside, brackets it (without that, the other end would be halved in: 28 calls).
+    const balance = (m: number) => 780 / m + 1.02 * m ** -0.06 + 0.32 - 1;
+    const fast = counted(balance);
+    const root = smoothFallingRoot(fast.f, 780, 1560, 1e6);
+    assertRelative(root, fallingRoot(balance, 780, 1560, 1e6), 1e-9, 'the bisection root');
+    expect(Math.abs(balance(root))).toBeLessThan(1e-12);
+    expect(fast.calls()).toBeLessThanOrEqual(16);
+  });
+
   it('takes the first x where the function is zero or less, across a flat zero before it falls below', () => {
     // 1 - x up to 1, then 0 up to 2, then -1: zero is reached at x = 1 (hand derivation), not 2. From the
     // bracket [0.25, 3] the first chord lands in the flat part, at 1.43.
