@@ -90,18 +90,28 @@ describe('the chance study runner', () => {
         };
         return worker;
       };
-      new StudyRunner({ ...host, helpers: { count, create } }, 3).handle({ type: 'run', id: 9, concept: stallOnly(650, 1.6, 2.8, 2600), grid: GRID });
+      let created = 0;
+      const counted = (): PartWorker => (created++, create());
+      const runner = new StudyRunner({ ...host, helpers: { count, create: counted } }, 3);
+      runner.handle({ type: 'run', id: 9, concept: stallOnly(650, 1.6, 2.8, 2600), grid: GRID });
       host.drain();
       const done = host.replies.find((reply) => reply.type === 'done');
       if (done?.type !== 'done') throw new Error(`no result: ${JSON.stringify(host.replies.at(-1))}`);
-      return { map: done.outcome.map, started, terminated, replies: host.replies };
+      // Run again: the helpers that answered are used again, none started anew, and the map is the same.
+      runner.handle({ type: 'run', id: 10, concept: stallOnly(650, 1.6, 2.8, 2600), grid: GRID });
+      host.drain();
+      const again = host.replies.find((reply) => reply.type === 'done' && reply.id === 10);
+      if (again?.type !== 'done') throw new Error(`no second result: ${JSON.stringify(host.replies.at(-1))}`);
+      return { map: done.outcome.map, again: again.outcome.map, started, terminated, created, replies: host.replies.filter((reply) => reply.id === 9) };
     };
     const alone = withHelpers(0);
     expect(alone.started).toEqual([]);
     for (const count of [1, 2, 3]) {
       const run = withHelpers(count);
-      expect(run.started).toHaveLength(count);
-      expect(run.terminated).toBe(count);
+      expect(run.started).toHaveLength(2 * count);
+      expect(run.created).toBe(count);
+      expect(run.terminated).toBe(0);
+      expect(Buffer.from(run.again.probability.buffer)).toEqual(Buffer.from(alone.map.probability.buffer));
       expect(run.map.samples).toBe(2600);
       expect(Buffer.from(run.map.probability.buffer)).toEqual(Buffer.from(alone.map.probability.buffer));
       expect(run.map.designPoint).toEqual(alone.map.designPoint);
@@ -109,6 +119,26 @@ describe('the chance study runner', () => {
       const progress = run.replies.flatMap((reply) => (reply.type === 'progress' ? [reply.done] : []));
       expect(Math.max(...progress)).toBe(2600);
     }
+  });
+
+  it('ends the helper threads still running a part when the run is cancelled, and starts new ones for the next run', () => {
+    // Helpers that never answer: a part cannot be interrupted, so cancel must end them, not keep them.
+    const host = testHost();
+    let created = 0;
+    let terminated = 0;
+    const create = (): PartWorker => {
+      created++;
+      return { onmessage: null, onerror: null, terminate: () => void terminated++, postMessage: () => undefined };
+    };
+    const runner = new StudyRunner({ ...host, helpers: { count: 2, create } }, 2);
+    runner.handle({ type: 'run', id: 1, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID });
+    host.drain(1);
+    runner.handle({ type: 'cancel', id: 1 });
+    host.drain();
+    expect(host.replies.at(-1)?.type).toBe('cancelled');
+    expect(terminated).toBe(2);
+    runner.handle({ type: 'run', id: 2, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID });
+    expect(created).toBe(4);
   });
 
   it('stops at the next pause when cancelled, and reports how far it got', () => {

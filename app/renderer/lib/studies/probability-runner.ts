@@ -8,7 +8,8 @@
  * Where the host offers helper threads (probability-part.worker.ts), the
  * samples are split into parts of whole random blocks (core `sampleParts`):
  * the helpers run the first parts, this thread the last, and their counts
- * are absorbed into one run: the very map one thread gives, sooner.
+ * are absorbed into one run: the very map one thread gives, sooner. Helpers
+ * that have answered are kept for the next run, warm.
  */
 import { parseConcept, probabilityMapRun, sampleParts, type ProbabilityGrid, type ProbabilityMapRun, type ProbabilityPart } from '../../../../core';
 import type { PartReply, PartRequest, StudyReply, StudyRequest } from './probability-protocol';
@@ -81,6 +82,11 @@ export class StudyRunner {
   readonly #host: RunnerHost;
   readonly #sliceMs: number;
   #job: Job | null = null;
+  /**
+   * Helper threads that finished their part, kept for the next run: their compiled code is warm, so
+   * "Run again" gets both cores at once instead of waiting for a new thread to start and compile.
+   */
+  readonly #idle: PartWorker[] = [];
 
   constructor(host: RunnerHost, sliceMs = 40) {
     this.#host = host;
@@ -125,7 +131,7 @@ export class StudyRunner {
     if (parts.length < 2) return;
     try {
       for (const part of parts.slice(0, -1)) {
-        const helper: Helper = { worker: helpers.create(), done: 0, part: null };
+        const helper: Helper = { worker: this.#idle.pop() ?? helpers.create(), done: 0, part: null };
         helper.worker.onmessage = (event) => this.#fromHelper(job, helper, event.data);
         helper.worker.onerror = (event) => {
           event.preventDefault?.();
@@ -143,8 +149,16 @@ export class StudyRunner {
     job.own = prepared.partRun(parts[parts.length - 1]);
   }
 
+  /** Ends the helpers still running a part (one cannot be interrupted); those done are already kept. */
   #stopHelpers(job: Job): void {
-    for (const helper of job.helpers) helper.worker.terminate();
+    for (const helper of job.helpers) if (!helper.part) helper.worker.terminate();
+  }
+
+  /** Keeps a helper that has answered, for the next run. */
+  #keep(worker: PartWorker): void {
+    worker.onmessage = null;
+    worker.onerror = null;
+    this.#idle.push(worker);
   }
 
   #fromHelper(job: Job, helper: Helper, reply: PartReply): void {
@@ -162,7 +176,7 @@ export class StudyRunner {
     }
     helper.part = reply.part;
     helper.done = reply.part.end - reply.part.first;
-    helper.worker.terminate();
+    this.#keep(helper.worker);
     this.#finishIfDone(job);
   }
 
