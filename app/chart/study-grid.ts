@@ -6,14 +6,12 @@
  * rows, continued upward.
  */
 import type { Evaluation } from '../../core/evaluation';
-import type { ProbabilityGrid } from '../../core/studies/probability-grid';
+import { MOST_GRID_POINTS, type ProbabilityGrid } from '../../core/studies/probability-grid';
 import { fromDisplay, type UnitSystem } from '../../core/units/display';
 import { chartData, type ChartDataOptions } from './data';
 import { defaultDomains, powerLoadingFactor } from './power-loading';
 import { chartDomains } from './scales';
 
-/** Most rows a map may have (core's checkedGrid allows 2000). */
-const MOST_ROWS = 2000;
 /** How near W/P = 0 the map reaches in the power-loading view: this share of the view's height. */
 const POWER_LOADING_REACH = 1 / 40;
 
@@ -44,6 +42,6 @@ export function diagramGrid(evaluation: Evaluation, options: DiagramGridOptions 
   const lowestShown = defaultDomains(data, true).y[1] * POWER_LOADING_REACH;
   const reach = fromDisplay(powerLoadingFactor(system) / lowestShown, evaluation.axis, system);
   const step = (y1 - y0) / (ny - 1);
-  const rows = Math.min(MOST_ROWS, Math.ceil((reach - y0) / step) + 1);
+  const rows = Math.min(MOST_GRID_POINTS, Math.ceil((reach - y0) / step) + 1);
   return rows > ny ? { wingLoading: [w0, w1], loading: [y0, y0 + (rows - 1) * step], nx, ny: rows } : { wingLoading: [w0, w1], loading: [y0, y1], nx, ny };
 }

@@ -10,6 +10,7 @@ import { dragCoefficient } from '../aero/drag-polar';
 import { RHO0 } from '../atmosphere';
 import type { Aircraft } from '../aircraft';
 import type { BoundaryOf } from '../boundary';
+import { fieldLoadingUnit, MOST_FIELD_THRUST_TO_WEIGHT } from '../constraints/field-loading';
 import { flightCondition, type FlightCondition } from '../constraints/flight-condition';
 import { quantityField } from '../concept/quantity-field';
 import { largerRoot } from '../numeric/quadratic';
@@ -50,17 +51,9 @@ export interface BalancedFieldTerms {
 }
 
 /**
- * BFL = 0.863/(1 + 2.3 dG) (w/(rho g0 C_L2) + h_obs) (1/(T_av/W - U) + 2.7) + 655 ft / sqrt(sigma),
- * dG = gamma_2 - gamma_min; x is T/W (jets) or P/W [m/s] (propellers) of the actual weight at the field.
- */
-export function balancedFieldTerms(r: BalancedFieldLengthRequirement, c: FlightCondition, engines: number, w: number, x: number): BalancedFieldTerms {
-  return balancedFieldTermsAt(r, c, engines, w)(x);
-}
-
-/**
  * What the terms at one wing loading w are made of: the climb gradient at V2 and the mean thrust of
  * the run are linear in x, and the rest does not depend on x (stall speed, C_L2, the drag term at V2,
- * U, gamma_min, the ground and constant terms), so it is worked out once per wing loading.
+ * U, gamma_min, the ground and constant terms); the closed form below reads them as coefficients.
  */
 interface FieldCoefficients {
   /** gamma_2 = climbPerX x - dragAtV2. */
@@ -95,18 +88,19 @@ function fieldCoefficients(r: BalancedFieldLengthRequirement, c: FlightCondition
   };
 }
 
-/** balancedFieldTerms at one wing loading w as a function of x alone. */
-export function balancedFieldTermsAt(r: BalancedFieldLengthRequirement, c: FlightCondition, engines: number, w: number): (x: number) => BalancedFieldTerms {
+/**
+ * BFL = 0.863/(1 + 2.3 dG) (w/(rho g0 C_L2) + h_obs) (1/(T_av/W - U) + 2.7) + 655 ft / sqrt(sigma),
+ * dG = gamma_2 - gamma_min; x is T/W (jets) or P/W [m/s] (propellers) of the actual weight at the field.
+ */
+export function balancedFieldTerms(r: BalancedFieldLengthRequirement, c: FlightCondition, engines: number, w: number, x: number): BalancedFieldTerms {
   const k = fieldCoefficients(r, c, engines, w);
-  return (x: number): BalancedFieldTerms => {
-    const climbGradient = k.climbPerX * x - k.dragAtV2;
-    const averageThrustToWeight = k.runPerX * x;
-    const dG = climbGradient - k.minimumGradient;
-    const excess = averageThrustToWeight - k.u;
-    // With a climb (gamma_2 > 0) and gamma_min at most 0.03, 1 + 2.3 dG stays above 0.93: the factor never changes sign.
-    const lengthM = climbGradient > 0 && excess > 0 ? (k.groundTerm / (1 + 2.3 * dG)) * (1 / excess + 2.7) + k.constantTerm : Infinity;
-    return { climbGradient, averageThrustToWeight, u: k.u, lengthM };
-  };
+  const climbGradient = k.climbPerX * x - k.dragAtV2;
+  const averageThrustToWeight = k.runPerX * x;
+  const dG = climbGradient - k.minimumGradient;
+  const excess = averageThrustToWeight - k.u;
+  // With a climb (gamma_2 > 0) and gamma_min at most 0.03, 1 + 2.3 dG stays above 0.93: the factor never changes sign.
+  const lengthM = climbGradient > 0 && excess > 0 ? (k.groundTerm / (1 + 2.3 * dG)) * (1 / excess + 2.7) + k.constantTerm : Infinity;
+  return { climbGradient, averageThrustToWeight, u: k.u, lengthM };
 }
 
 /**
@@ -142,10 +136,8 @@ export function balancedFieldLengthBoundary(r: BalancedFieldLengthRequirement, a
     kind: r.kind,
     required(w: number): number {
       if (!(w > 0) || !(c.alpha > 0) || !(engines >= 2)) return NaN;
-      // As for the take-off distance: a loading above 50 (T/W), or 50 V_s/eta_p (P/W), counts as out of reach.
-      const most = c.propeller ? (50 * stallSpeed(c.beta * w, c.densityKgM3, c.polar.clMax)) / c.propellerEfficiency : 50;
       const x = balancedFieldLoading(r, c, engines, w);
-      return x <= most ? (c.beta / c.alpha) * x : NaN;
+      return x <= MOST_FIELD_THRUST_TO_WEIGHT * fieldLoadingUnit(c, w) ? (c.beta / c.alpha) * x : NaN;
     },
     speedAt: (w: number): number => (w > 0 ? r.v2SpeedFactor * stallSpeed(c.beta * w, c.densityKgM3, c.polar.clMax) : NaN),
   };

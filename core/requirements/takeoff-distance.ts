@@ -10,6 +10,7 @@ import { stallSpeed } from '../aero/speeds';
 import { dragCoefficient } from '../aero/drag-polar';
 import type { Aircraft } from '../aircraft';
 import type { BoundaryOf } from '../boundary';
+import { fieldLoadingUnit, MOST_FIELD_THRUST_TO_WEIGHT } from '../constraints/field-loading';
 import { flightCondition, type FlightCondition } from '../constraints/flight-condition';
 import { rollDistance } from '../constraints/roll-distance';
 import { quantityField } from '../concept/quantity-field';
@@ -97,9 +98,9 @@ const total = (s: TakeoffSegments): number => s.groundRoll + s.rotation + s.tran
 
 /** Field loading x (see segmentsAtLoading) that takes off over the obstacle in the distance; NaN where none up to a T/W of 50 does. */
 function fieldLoadingRequired(r: TakeoffDistanceRequirement, c: FlightCondition, w: number): number {
-  const scale = c.propeller ? stallSpeed(c.beta * w, c.densityKgM3, c.polar.clMax) / c.propellerEfficiency : 1;
+  const scale = fieldLoadingUnit(c, w);
   const segments = segmentsAtLoading(r, c, w);
-  return smoothFallingRoot((x) => total(segments(x)) - r.distanceM, 1e-6 * scale, 0.3 * scale, 50 * scale);
+  return smoothFallingRoot((x) => total(segments(x)) - r.distanceM, 1e-6 * scale, 0.3 * scale, MOST_FIELD_THRUST_TO_WEIGHT * scale);
 }
 
 /** T_SL/W_TO (or P_SL/W_TO) = (beta/alpha) x, x solving S_G + S_R + S_TR + S_C = S_TO. */

@@ -17,13 +17,16 @@ export interface ProbabilityGrid {
 /** Contour levels drawn by default: 50 %, 90 %, 95 %. */
 export const PROBABILITY_LEVELS: readonly number[] = [0.5, 0.9, 0.95];
 
+/** Most points a grid may have along either axis. */
+export const MOST_GRID_POINTS = 2000;
+
 /** The grid, or a RangeError that names the bad value. */
 export function checkedGrid(grid: ProbabilityGrid): ProbabilityGrid {
   const { wingLoading: [w0, w1], loading: [y0, y1], nx, ny } = grid;
   if (!(w0 > 0 && w1 > w0 && Number.isFinite(w1))) throw new RangeError(`grid.wingLoading is [${w0}, ${w1}]; give 0 < low < high`);
   if (!(Number.isFinite(y0) && Number.isFinite(y1) && y1 > y0)) throw new RangeError(`grid.loading is [${y0}, ${y1}]; give low < high`);
   for (const [name, n] of [['nx', nx], ['ny', ny]] as const) {
-    if (!Number.isInteger(n) || n < 2 || n > 2000) throw new RangeError(`grid.${name} is ${n}; give a whole number from 2 to 2000`);
+    if (!Number.isInteger(n) || n < 2 || n > MOST_GRID_POINTS) throw new RangeError(`grid.${name} is ${n}; give a whole number from 2 to ${MOST_GRID_POINTS}`);
   }
   return { wingLoading: [w0, w1], loading: [y0, y1], nx, ny };
 }
