@@ -141,6 +141,44 @@ describe('the chance study runner', () => {
     expect(created).toBe(4);
   });
 
+  it('uses no more threads than the window asks for', () => {
+    const host = testHost();
+    let created = 0;
+    const create = (): PartWorker => {
+      created++;
+      return { onmessage: null, onerror: null, terminate: () => undefined, postMessage: () => undefined };
+    };
+    const runner = new StudyRunner({ ...host, helpers: { count: 3, create } }, 2);
+    runner.handle({ type: 'run', id: 1, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID, threads: 1 });
+    expect(created).toBe(0);
+    runner.handle({ type: 'run', id: 2, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID, threads: 3 });
+    expect(created).toBe(2);
+    runner.handle({ type: 'run', id: 3, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID });
+    // The two of run 2 never answered, so they were ended; run 3 starts three (its own count) anew.
+    expect(created).toBe(5);
+    // No more threads than random blocks: 1,000 samples are two blocks of 500, so one helper at most.
+    runner.handle({ type: 'run', id: 4, concept: stallOnly(650, 1.6, 2.8, 1000), grid: GRID });
+    expect(created).toBe(6);
+  });
+
+  it('tells the window how far it has got at most every 100 ms of its clock, and once at the end', () => {
+    // Each progress message redraws the window's progress bar: fewer of them leave the cores to the samples.
+    let clock = 0;
+    const queue: Array<() => void> = [];
+    const posted: Array<{ at: number; reply: StudyReply }> = [];
+    const host: RunnerHost = { post: (reply) => posted.push({ at: clock, reply }), defer: (next) => queue.push(next), now: () => (clock += 1) };
+    new StudyRunner(host, 2).handle({ type: 'run', id: 1, concept: stallOnly(650, 1.6, 2.8, 20000), grid: GRID });
+    while (queue.length > 0) queue.shift()!();
+    const progress = posted.filter(({ reply }) => reply.type === 'progress') as Array<{ at: number; reply: Extract<StudyReply, { type: 'progress' }> }>;
+    expect(progress[0].reply.done).toBe(0);
+    expect(progress.at(-1)?.reply.done).toBe(20000);
+    expect(progress.length).toBeGreaterThan(3);
+    for (let k = 1; k < progress.length - 1; k++) expect(progress[k].at - progress[k - 1].at).toBeGreaterThanOrEqual(100);
+    // Slices of 2 ms: without the spacing there would be one message per slice, hundreds of them.
+    expect(progress.length).toBeLessThan(clock / 100 + 3);
+    expect(posted.at(-1)?.reply.type).toBe('done');
+  });
+
   it('stops at the next pause when cancelled, and reports how far it got', () => {
     const host = testHost();
     const runner = new StudyRunner(host, 2);

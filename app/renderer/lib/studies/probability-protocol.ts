@@ -7,8 +7,12 @@
 import type { ProbabilityGrid, ProbabilityMap, ProbabilityPart } from '../../../../core';
 
 export type StudyRequest =
-  /** Runs the study of this concept document on this grid; a run already going is dropped. */
-  | { type: 'run'; id: number; concept: unknown; grid: ProbabilityGrid }
+  /**
+   * Runs the study of this concept document on this grid; a run already going is dropped. `threads`:
+   * how many threads it may use in all, the study's own included (the cores the window sees); when
+   * absent, the worker's own count.
+   */
+  | { type: 'run'; id: number; concept: unknown; grid: ProbabilityGrid; threads?: number }
   /** Stops run `id` at the next pause between chunks of samples. */
   | { type: 'cancel'; id: number };
 

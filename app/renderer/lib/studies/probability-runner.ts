@@ -52,7 +52,10 @@ export interface RunnerHost {
   /** Calls `next` soon, after any message already waiting has been handled. */
   defer(next: () => void): void;
   now(): number;
-  /** Helper threads for parts of a run: how many to use (0: this thread alone), and how to start one. */
+  /**
+   * Helper threads for parts of a run: how many at most (0: this thread alone; a run's `threads` may ask
+   * for fewer), and how to start one.
+   */
   helpers?: { count: number; create(): PartWorker };
 }
 
@@ -72,8 +75,13 @@ interface Job {
   whose: 'concept' | 'typical';
   ranged: number;
   started: number;
+  /** When progress was last posted. */
+  reported: number;
   cancelled: boolean;
 }
+
+/** Least time between two progress messages to the window [ms]. */
+const PROGRESS_MS = 100;
 
 /** Samples between clock readings inside a slice. */
 const STEP = 64;
@@ -116,9 +124,10 @@ export class StudyRunner {
       this.#host.post({ type: 'failed', id: request.id, message: prepared.message });
       return;
     }
-    const job: Job = { id: request.id, run: prepared.run, own: prepared.run, helpers: [], whose: prepared.whose, ranged: prepared.ranged, started: this.#host.now(), cancelled: false };
+    const job: Job = { id: request.id, run: prepared.run, own: prepared.run, helpers: [], whose: prepared.whose, ranged: prepared.ranged, started: this.#host.now(), reported: -Infinity, cancelled: false };
     this.#job = job;
     this.#startHelpers(job, request, prepared);
+    job.reported = this.#host.now();
     this.#host.post({ type: 'progress', id: job.id, done: 0, total: job.run.total });
     this.#host.defer(() => this.#slice(job));
   }
@@ -126,8 +135,9 @@ export class StudyRunner {
   /** Hands all but the last part to helper threads; this thread keeps the last. */
   #startHelpers(job: Job, request: Extract<StudyRequest, { type: 'run' }>, prepared: Extract<Prepared, { ok: true }>): void {
     const helpers = this.#host.helpers;
-    if (!helpers || helpers.count < 1) return;
-    const parts = sampleParts(job.run.total, helpers.count + 1);
+    const count = Math.min(helpers?.count ?? 0, request.threads === undefined ? Infinity : Math.floor(request.threads) - 1);
+    if (!helpers || !(count >= 1)) return;
+    const parts = sampleParts(job.run.total, count + 1);
     if (parts.length < 2) return;
     try {
       for (const part of parts.slice(0, -1)) {
@@ -165,7 +175,7 @@ export class StudyRunner {
     if (this.#job !== job) return;
     if (reply.type === 'progress') {
       helper.done = reply.done;
-      this.#host.post({ type: 'progress', id: job.id, done: this.#doneSoFar(job), total: job.run.total });
+      this.#progress(job);
       return;
     }
     if (reply.type === 'failed') {
@@ -178,6 +188,18 @@ export class StudyRunner {
     helper.done = reply.part.end - reply.part.first;
     this.#keep(helper.worker);
     this.#finishIfDone(job);
+  }
+
+  /**
+   * Tells the window how far the run has got: at most every PROGRESS_MS, and when every sample is done.
+   * Each message redraws the window's progress bar, on a core the samples could use.
+   */
+  #progress(job: Job): void {
+    const done = this.#doneSoFar(job);
+    const now = this.#host.now();
+    if (done < job.run.total && now - job.reported < PROGRESS_MS) return;
+    job.reported = now;
+    this.#host.post({ type: 'progress', id: job.id, done, total: job.run.total });
   }
 
   #doneSoFar(job: Job): number {
@@ -219,7 +241,7 @@ export class StudyRunner {
       this.#host.post({ type: 'failed', id: job.id, message: `the study stopped: ${error instanceof Error ? error.message : String(error)}` });
       return;
     }
-    this.#host.post({ type: 'progress', id: job.id, done: this.#doneSoFar(job), total: run.total });
+    this.#progress(job);
     // This thread's part goes on; once it is done, the helpers' last answers finish the run.
     if (!finished) this.#host.defer(() => this.#slice(job));
     else this.#finishIfDone(job);

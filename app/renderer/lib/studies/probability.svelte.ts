@@ -27,6 +27,12 @@ export interface StudyWorker {
   onerror: ((event: ErrorEvent) => void) | null;
 }
 
+/** The cores the window's own thread sees; undefined where the browser does not say. */
+function windowCores(): number | undefined {
+  const cores = typeof navigator === 'undefined' ? undefined : navigator.hardwareConcurrency;
+  return typeof cores === 'number' && cores >= 1 ? cores : undefined;
+}
+
 export class ProbabilityStudy {
   phase = $state<StudyPhase>('idle');
   done = $state(0);
@@ -41,8 +47,12 @@ export class ProbabilityStudy {
   #id = 0;
   #keys: { concept: string | null; key: string; pointKey: string } = { concept: null, key: '', pointKey: '' };
 
-  constructor(create: () => StudyWorker) {
+  /** How many threads a run may use in all: the cores the window sees (undefined: the worker decides). */
+  readonly #threads: () => number | undefined;
+
+  constructor(create: () => StudyWorker, threads: () => number | undefined = windowCores) {
     this.#create = create;
+    this.#threads = threads;
   }
 
   get running(): boolean {
@@ -70,7 +80,10 @@ export class ProbabilityStudy {
     this.total = 0;
     this.message = null;
     // A plain copy: the document may be a reactive proxy, which the structured clone refuses.
-    worker.postMessage({ type: 'run', id: this.#id, concept: JSON.parse(JSON.stringify(concept)), grid: { ...grid, wingLoading: [...grid.wingLoading], loading: [...grid.loading] } });
+    const request: Extract<StudyRequest, { type: 'run' }> = { type: 'run', id: this.#id, concept: JSON.parse(JSON.stringify(concept)), grid: { ...grid, wingLoading: [...grid.wingLoading], loading: [...grid.loading] } };
+    const threads = this.#threads();
+    if (threads !== undefined) request.threads = threads;
+    worker.postMessage(request);
   }
 
   cancel(): void {
