@@ -14,6 +14,7 @@ const benches = [
   ['Project file: save, list, open, size', 'test/bench/store.ts'],
   ['Trade studies: bands, tornado, Monte Carlo', 'test/bench/studies.ts'],
   ['Monte Carlo on one and two threads', 'test/bench/monte-carlo-cores.js'],
+  ["Window's chance study on one and two threads", 'test/bench/window-monte-carlo.js'],
   ['Designer window: drag to redraw', 'test/bench/drag.ts'],
 ];
 let failed = 0;
