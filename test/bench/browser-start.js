@@ -18,10 +18,12 @@ import { existsSync, mkdtempSync, rmSync, watch } from 'node:fs';
 import { loadavg, tmpdir } from 'node:os';
 import { basename, dirname, join } from 'node:path';
 import { chromium } from '@playwright/test';
+import { pageBenchChromium, printedAddress } from './page-bench.js';
+import { msText, spread } from './spread.js';
 
 const root = new URL('../..', import.meta.url).pathname;
 const RUNS = Number(process.env.RUNS ?? 7);
-const browserPath = [process.env.CHROMIUM_PATH, '/usr/bin/chromium', '/usr/bin/chromium-browser'].find((p) => p && existsSync(p));
+const browserPath = pageBenchChromium(root, 'browser-mode start');
 
 const FLOOR_SERVER = `
 const http = require('node:http');
@@ -98,15 +100,7 @@ async function launchToDiagram(browser, args, env, { driverSaw, breakdown, proje
     : null;
   const child = spawn(process.execPath, args, { cwd: root, env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] });
   try {
-    const url = await new Promise((resolve, reject) => {
-      let text = '';
-      child.stdout.on('data', (chunk) => {
-        text += chunk;
-        const line = text.split('\n').find((l) => l.startsWith('http'));
-        if (line) resolve(line.trim());
-      });
-      child.on('exit', (code) => reject(new Error(`the server exited (${code}) before printing its address`)));
-    });
+    const url = await printedAddress(child);
     const addressAt = performance.timeOrigin + performance.now();
     const page = await browser.newPage();
     await page.addInitScript(PAGE_MARKS);
@@ -133,21 +127,7 @@ async function launchToDiagram(browser, args, env, { driverSaw, breakdown, proje
   }
 }
 
-function stats(xs) {
-  const s = [...xs].sort((a, b) => a - b);
-  const at = (q) => s[Math.min(s.length - 1, Math.floor(q * s.length))];
-  return { median: at(0.5), p10: at(0.1), p90: at(0.9) };
-}
-const fmt = (x) => `${Math.round(x.median)} ms (${Math.round(x.p10)}-${Math.round(x.p90)})`;
 
-if (!browserPath) {
-  console.log('No Chromium (set CHROMIUM_PATH or install Debian\'s chromium): browser-mode start not measured.');
-  process.exit(0);
-}
-if (!existsSync(join(root, 'out/renderer/index.html'))) {
-  console.log('The page is not built (npm run build:renderer): browser-mode start not measured.');
-  process.exit(0);
-}
 const browser = await chromium.launch({ executablePath: browserPath });
 const folder = mkdtempSync(join(tmpdir(), 'loftpoint-start-'));
 try {
@@ -171,17 +151,17 @@ try {
       mode.push(await serve(r));
     }
   }
-  const m = stats(mode);
-  const f = stats(floor);
+  const m = spread(mode);
+  const f = spread(floor);
   // How busy the machine is, in the run's own terms: the CPU time of a bare Node start (80-150 ms on this machine when it is quiet).
   const nodeStart = spawnSync(process.execPath, ['-e', 'const u = process.cpuUsage(); console.log((u.user + u.system) / 1000)'], { encoding: 'utf8' });
   console.log(`Browser mode, launch to first diagram, median (10th-90th percentile) of ${RUNS} interleaved runs; load average ${loadavg().map((x) => x.toFixed(2)).join(' ')}; a bare Node start ${Math.round(Number(nodeStart.stdout))} ms CPU`);
-  console.log(`  loftpoint browser mode (new project)   ${fmt(m)}`);
-  console.log(`  floor: bare server and one-path page   ${fmt(f)}   ratio ${(m.median / f.median).toFixed(1)}x`);
-  console.log(`  (the frame that draws the curve, by the page's clock; the test driver heard of it at ${fmt(stats(modeSeen))} and ${fmt(stats(floorSeen))})`);
+  console.log(`  loftpoint browser mode (new project)   ${msText(m)}`);
+  console.log(`  floor: bare server and one-path page   ${msText(f)}   ratio ${(m.median / f.median).toFixed(1)}x`);
+  console.log(`  (the frame that draws the curve, by the page's clock; the test driver heard of it at ${msText(spread(modeSeen))} and ${msText(spread(floorSeen))})`);
   const median = (key) => {
     const values = breakdown.map((b) => b[key]).filter((v) => v !== null);
-    return values.length ? `${Math.round(stats(values).median)}`.padStart(5) : '    -';
+    return values.length ? `${Math.round(spread(values).median)}`.padStart(5) : '    -';
   };
   console.log('  where the time went (median ms from launch, each step on its own):');
   console.log(`    address printed ${median('address')}   page received ${median('html')}   page script received ${median('script')}   window mounted ${median('mounted')}`);

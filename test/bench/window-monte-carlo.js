@@ -19,39 +19,27 @@
 //
 // Run: node test/bench/window-monte-carlo.js (needs `npm run build:renderer` after a change to the page)
 import { spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from '@playwright/test';
+import { pageBenchChromium, printedAddress } from './page-bench.js';
+import { msText, spread } from './spread.js';
 
 const root = new URL('../..', import.meta.url).pathname;
 const RUNS = Number(process.env.RUNS ?? 9);
 const FIRST_RUNS = Number(process.env.FIRST_RUNS ?? 5);
-const browserPath = [process.env.CHROMIUM_PATH, '/usr/bin/chromium', '/usr/bin/chromium-browser'].find((p) => p && existsSync(p));
+const browserPath = pageBenchChromium(root, "the window's chance study");
 const DEMOS = [
   ['utility-twin', /utility twin/i],
   ['business-jet', /business jet/i],
 ];
 
-function stats(xs) {
-  const s = [...xs].sort((a, b) => a - b);
-  const at = (q) => s[Math.min(s.length - 1, Math.floor(q * s.length))];
-  return { median: at(0.5), p10: at(0.1), p90: at(0.9) };
-}
-const fmt = (x) => `${Math.round(x.median)} ms (${Math.round(x.p10)}-${Math.round(x.p90)})`;
 
 /** Starts browser mode on a fresh project; its address and how to stop it. */
 async function startServer(folder) {
   const child = spawn(process.execPath, [join(root, 'app/cli/browser-mode.cjs'), '--port', '0', '--project', join(folder, 'bench.loftpoint')], { cwd: root, stdio: ['ignore', 'pipe', 'inherit'] });
-  const url = await new Promise((resolve, reject) => {
-    let text = '';
-    child.stdout.on('data', (chunk) => {
-      text += chunk;
-      const line = text.split('\n').find((l) => l.startsWith('http'));
-      if (line) resolve(line.trim());
-    });
-    child.once('exit', (code) => reject(new Error(`browser mode ended (exit ${code}) before it gave its address`)));
-  });
+  const url = await printedAddress(child);
   return { url, stop: () => child.kill('SIGTERM') };
 }
 
@@ -133,27 +121,19 @@ async function measure(browser, url, slug, name) {
   }
   const samples = JSON.parse([...seen][0]).meta;
   await page.close();
-  const one = stats(times[1]);
-  const two = stats(times[2]);
+  const one = spread(times[1]);
+  const two = spread(times[2]);
   console.log(`Window chance study, ${slug} demo (${samples}); median (10th-90th percentile) of ${RUNS} interleaved runs, warm`);
   console.log(`  cores ${availableParallelism()}; load average ${loadavg().map((x) => x.toFixed(2)).join(' ')}`);
-  console.log(`  1 thread    study ${fmt(one)}   press to result shown ${fmt(stats(shown[1]))}`);
-  console.log(`  2 threads   study ${fmt(two)}   press to result shown ${fmt(stats(shown[2]))}   speed-up ${(one.median / two.median).toFixed(2)}x`);
-  const cold1 = stats(first[1]);
-  const cold2 = stats(first[2]);
-  console.log(`  first run after the window opens (worker and helper start and compile; ${FIRST_RUNS} each): 1 thread ${fmt(cold1)}, 2 threads ${fmt(cold2)}: ${(cold1.median / cold2.median).toFixed(2)}x`);
+  console.log(`  1 thread    study ${msText(one)}   press to result shown ${msText(spread(shown[1]))}`);
+  console.log(`  2 threads   study ${msText(two)}   press to result shown ${msText(spread(shown[2]))}   speed-up ${(one.median / two.median).toFixed(2)}x`);
+  const cold1 = spread(first[1]);
+  const cold2 = spread(first[2]);
+  console.log(`  first run after the window opens (worker and helper start and compile; ${FIRST_RUNS} each): 1 thread ${msText(cold1)}, 2 threads ${msText(cold2)}: ${(cold1.median / cold2.median).toFixed(2)}x`);
   console.log(`  results shown identical on 1 and 2 threads, every run (first runs included): ${seen.size === 1 ? 'yes' : `NO (${seen.size} different)`}`);
   return { slug, one: one.median, speedUp: one.median / two.median, identical: seen.size === 1 };
 }
 
-if (!browserPath) {
-  console.log('No Chromium found (set CHROMIUM_PATH): the window chance-study benchmark was not run.');
-  process.exit(0);
-}
-if (!existsSync(join(root, 'out/renderer/index.html'))) {
-  console.log('No built page (out/renderer): run `npm run build:renderer` first.');
-  process.exit(1);
-}
 const folder = mkdtempSync(join(tmpdir(), 'loftpoint-window-mc-'));
 const server = await startServer(folder);
 const browser = await chromium.launch({ executablePath: browserPath });
