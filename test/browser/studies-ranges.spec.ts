@@ -59,9 +59,20 @@ test('ranges: typical ranges, bands, the chance study with contours, cancel, and
   await expect(window.byTest('study-progress')).toHaveCount(0);
   const contours = window.byTest('contours').getByTestId('contour');
   await expect(contours).not.toHaveCount(0);
-  const labels = await window.byTest('contours').getByTestId('contour-label').allTextContents();
+  const labels = await window.byTest('contour-labels').getByTestId('contour-label').allTextContents();
   expect(labels.length).toBeGreaterThan(0);
   for (const label of labels) expect(['50 %', '90 %', '95 %']).toContain(label);
+  // The contour lines lie beneath the optimum and the boundary labels (the notes are drawn with them), which stay
+  // legible over them, as in the report; the contours' own level labels lie above everything.
+  const layering = await page.evaluate(() => {
+    const lines = document.querySelector('[data-testid="contours"]');
+    const after = (selector: string) => {
+      const nodes = [...document.querySelectorAll(selector)];
+      return nodes.length > 0 && lines !== null && nodes.every((node) => (lines.compareDocumentPosition(node) & Node.DOCUMENT_POSITION_FOLLOWING) !== 0);
+    };
+    return { optimum: after('[data-testid="optimum-marker"]'), labels: after('[data-testid^="label-"]'), levelLabels: after('[data-testid="contour-label"]') };
+  });
+  expect(layering).toEqual({ optimum: true, labels: true, levelLabels: true });
   const probability = Number(await window.byTest('point-probability').getAttribute('data-value'));
   expect(probability).toBeGreaterThanOrEqual(0);
   expect(probability).toBeLessThanOrEqual(1);
