@@ -161,6 +161,32 @@ describe('the chance study runner', () => {
     expect(created).toBe(6);
   });
 
+  it('starts the helpers a run would use when asked to prepare, and the first run uses them without starting more', () => {
+    const host = testHost();
+    let created = 0;
+    const started: PartRequest[] = [];
+    const create = (): PartWorker => {
+      created++;
+      return { onmessage: null, onerror: null, terminate: () => undefined, postMessage: (request: PartRequest) => void started.push(request) };
+    };
+    const runner = new StudyRunner({ ...host, helpers: { count: 3, create } }, 2);
+    runner.handle({ type: 'prepare', threads: 1 });
+    expect(created).toBe(0);
+    runner.handle({ type: 'prepare', threads: 3 });
+    expect(created).toBe(2);
+    // Asked again, nothing more: two are waiting.
+    runner.handle({ type: 'prepare', threads: 3 });
+    expect(created).toBe(2);
+    expect(started).toHaveLength(0);
+    expect(runner.busy).toBe(false);
+    runner.handle({ type: 'run', id: 1, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID, threads: 3 });
+    expect(created).toBe(2);
+    expect(started).toHaveLength(2);
+    // Without a count from the window, the host's own, three helpers: the two at work count, so one more.
+    runner.handle({ type: 'prepare' });
+    expect(created).toBe(3);
+  });
+
   it('tells the window how far it has got at most every 100 ms of its clock, and once at the end', () => {
     // Each progress message redraws the window's progress bar: fewer of them leave the cores to the samples.
     let clock = 0;

@@ -29,4 +29,21 @@ describe("the window's chance study", () => {
     expect(silent.sent[0].type).toBe('run');
     expect('threads' in silent.sent[0]).toBe(false);
   });
+
+  it('prepares the worker with the same thread count, before any run, and computes nothing', () => {
+    const worker = recordingWorker();
+    let made = 0;
+    const study = new ProbabilityStudy(() => (made++, worker), () => 2);
+    study.prepare();
+    expect(made).toBe(1);
+    expect(worker.sent).toEqual([{ type: 'prepare', threads: 2 }]);
+    expect(study.phase).toBe('idle');
+    // The run that follows goes to the same worker.
+    study.run(stallOnly(650), GRID, KEYS);
+    expect(made).toBe(1);
+    expect(worker.sent[1]).toMatchObject({ type: 'run', threads: 2 });
+    const silent = recordingWorker();
+    new ProbabilityStudy(() => silent, () => undefined).prepare();
+    expect(silent.sent).toEqual([{ type: 'prepare' }]);
+  });
 });

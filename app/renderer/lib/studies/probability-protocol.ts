@@ -14,7 +14,12 @@ export type StudyRequest =
    */
   | { type: 'run'; id: number; concept: unknown; grid: ProbabilityGrid; threads?: number }
   /** Stops run `id` at the next pause between chunks of samples. */
-  | { type: 'cancel'; id: number };
+  | { type: 'cancel'; id: number }
+  /**
+   * Starts the helper threads a run of `threads` threads would use, so that the first run finds them
+   * loaded (sent when the Ranges panel opens); a run going on is not touched.
+   */
+  | { type: 'prepare'; threads?: number };
 
 export interface StudyOutcome {
   map: ProbabilityMap;

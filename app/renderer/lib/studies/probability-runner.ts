@@ -106,6 +106,10 @@ export class StudyRunner {
   }
 
   handle(request: StudyRequest): void {
+    if (request.type === 'prepare') {
+      this.#prepareHelpers(this.#helperCount(request.threads));
+      return;
+    }
     if (request.type === 'cancel') {
       const job = this.#job;
       if (job?.id !== request.id) return;
@@ -132,11 +136,28 @@ export class StudyRunner {
     this.#host.defer(() => this.#slice(job));
   }
 
+  /** Helper threads a run of `threads` threads in all would use: no more than the host offers. */
+  #helperCount(threads: number | undefined): number {
+    const count = Math.min(this.#host.helpers?.count ?? 0, threads === undefined ? Infinity : Math.floor(threads) - 1);
+    return count >= 1 ? count : 0;
+  }
+
+  /** Starts helpers until `count` are waiting or at work on a run; where none can be started, the runs go on without them. */
+  #prepareHelpers(count: number): void {
+    const helpers = this.#host.helpers;
+    const working = this.#job?.helpers.filter((helper) => !helper.part).length ?? 0;
+    try {
+      while (helpers && this.#idle.length + working < count) this.#idle.push(helpers.create());
+    } catch {
+      // No helper threads here.
+    }
+  }
+
   /** Hands all but the last part to helper threads; this thread keeps the last. */
   #startHelpers(job: Job, request: Extract<StudyRequest, { type: 'run' }>, prepared: Extract<Prepared, { ok: true }>): void {
     const helpers = this.#host.helpers;
-    const count = Math.min(helpers?.count ?? 0, request.threads === undefined ? Infinity : Math.floor(request.threads) - 1);
-    if (!helpers || !(count >= 1)) return;
+    const count = this.#helperCount(request.threads);
+    if (!helpers || count < 1) return;
     const parts = sampleParts(job.run.total, count + 1);
     if (parts.length < 2) return;
     try {

@@ -86,6 +86,22 @@ export class ProbabilityStudy {
     worker.postMessage(request);
   }
 
+  /**
+   * Starts the study's worker and the helper threads a run would use, ahead of the first run (the Ranges
+   * panel asks when it opens): the first run then finds them loaded. Nothing is computed.
+   */
+  prepare(): void {
+    let worker: StudyWorker;
+    try {
+      worker = this.#ensureWorker();
+    } catch {
+      // The first run says why, if it cannot start either.
+      return;
+    }
+    const threads = this.#threads();
+    worker.postMessage(threads === undefined ? { type: 'prepare' } : { type: 'prepare', threads });
+  }
+
   cancel(): void {
     if (this.phase !== 'running' || !this.#worker) return;
     this.#worker.postMessage({ type: 'cancel', id: this.#id });
