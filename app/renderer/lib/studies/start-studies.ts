@@ -3,7 +3,9 @@
  * worker (an inline worker, so it loads the same way from the desktop
  * window's own protocol and over http:// in browser mode), and hands it to
  * the panels through its context. The worker's script is a chunk of its own,
- * fetched when a study first runs: the first diagram does not wait for it.
+ * fetched when the Ranges panel first opens (which starts the worker and its
+ * helper threads ahead of a run) or a study first runs: the first diagram does
+ * not wait for it.
  */
 import type { ProjectState } from '../state/project.svelte';
 import type { Workspace } from '../state/workspace.svelte';
