@@ -33,6 +33,17 @@ function testHost(): RunnerHost & { replies: StudyReply[]; drain(limit?: number)
   };
 }
 
+/** Helper threads that never answer: counts how many were started and ended, and keeps what each was asked. */
+function silentHelpers() {
+  const counts = { created: 0, terminated: 0 };
+  const started: PartRequest[] = [];
+  const create = (): PartWorker => {
+    counts.created++;
+    return { onmessage: null, onerror: null, terminate: () => void counts.terminated++, postMessage: (request: PartRequest) => void started.push(request) };
+  };
+  return { counts, started, create };
+}
+
 describe('the chance study runner', () => {
   it('gives the closed-form chance at the design point for a stall-only concept, within 4 standard errors', () => {
     const host = testHost();
@@ -124,67 +135,53 @@ describe('the chance study runner', () => {
   it('ends the helper threads still running a part when the run is cancelled, and starts new ones for the next run', () => {
     // Helpers that never answer: a part cannot be interrupted, so cancel must end them, not keep them.
     const host = testHost();
-    let created = 0;
-    let terminated = 0;
-    const create = (): PartWorker => {
-      created++;
-      return { onmessage: null, onerror: null, terminate: () => void terminated++, postMessage: () => undefined };
-    };
+    const { counts, create } = silentHelpers();
     const runner = new StudyRunner({ ...host, helpers: { count: 2, create } }, 2);
     runner.handle({ type: 'run', id: 1, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID });
     host.drain(1);
     runner.handle({ type: 'cancel', id: 1 });
     host.drain();
     expect(host.replies.at(-1)?.type).toBe('cancelled');
-    expect(terminated).toBe(2);
+    expect(counts.terminated).toBe(2);
     runner.handle({ type: 'run', id: 2, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID });
-    expect(created).toBe(4);
+    expect(counts.created).toBe(4);
   });
 
   it('uses no more threads than the window asks for', () => {
     const host = testHost();
-    let created = 0;
-    const create = (): PartWorker => {
-      created++;
-      return { onmessage: null, onerror: null, terminate: () => undefined, postMessage: () => undefined };
-    };
+    const { counts, create } = silentHelpers();
     const runner = new StudyRunner({ ...host, helpers: { count: 3, create } }, 2);
     runner.handle({ type: 'run', id: 1, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID, threads: 1 });
-    expect(created).toBe(0);
+    expect(counts.created).toBe(0);
     runner.handle({ type: 'run', id: 2, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID, threads: 3 });
-    expect(created).toBe(2);
+    expect(counts.created).toBe(2);
     runner.handle({ type: 'run', id: 3, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID });
     // The two of run 2 never answered, so they were ended; run 3 starts three (its own count) anew.
-    expect(created).toBe(5);
+    expect(counts.created).toBe(5);
     // No more threads than random blocks: 1,000 samples are two blocks of 500, so one helper at most.
     runner.handle({ type: 'run', id: 4, concept: stallOnly(650, 1.6, 2.8, 1000), grid: GRID });
-    expect(created).toBe(6);
+    expect(counts.created).toBe(6);
   });
 
   it('starts the helpers a run would use when asked to prepare, and the first run uses them without starting more', () => {
     const host = testHost();
-    let created = 0;
-    const started: PartRequest[] = [];
-    const create = (): PartWorker => {
-      created++;
-      return { onmessage: null, onerror: null, terminate: () => undefined, postMessage: (request: PartRequest) => void started.push(request) };
-    };
+    const { counts, started, create } = silentHelpers();
     const runner = new StudyRunner({ ...host, helpers: { count: 3, create } }, 2);
     runner.handle({ type: 'prepare', threads: 1 });
-    expect(created).toBe(0);
+    expect(counts.created).toBe(0);
     runner.handle({ type: 'prepare', threads: 3 });
-    expect(created).toBe(2);
+    expect(counts.created).toBe(2);
     // Asked again, nothing more: two are waiting.
     runner.handle({ type: 'prepare', threads: 3 });
-    expect(created).toBe(2);
+    expect(counts.created).toBe(2);
     expect(started).toHaveLength(0);
     expect(runner.busy).toBe(false);
     runner.handle({ type: 'run', id: 1, concept: stallOnly(650, 1.6, 2.8, 3000), grid: GRID, threads: 3 });
-    expect(created).toBe(2);
+    expect(counts.created).toBe(2);
     expect(started).toHaveLength(2);
     // Without a count from the window, the host's own, three helpers: the two at work count, so one more.
     runner.handle({ type: 'prepare' });
-    expect(created).toBe(3);
+    expect(counts.created).toBe(3);
   });
 
   it('tells the window how far it has got at most every 100 ms of its clock, and once at the end', () => {
