@@ -5,7 +5,6 @@
  * JSON only; readable output ends with the preliminary-sizing caution.
  */
 import type { Command } from 'commander';
-import { readFileSync, writeFileSync, existsSync } from 'node:fs';
 import { checkOutputTarget, writeWhole, type OutputTarget } from './output-file';
 import { basename, extname } from 'node:path';
 import { PRELIMINARY_CAUTION } from '../../core/caution';
@@ -39,9 +38,6 @@ function unitsOption(value: string | undefined): UnitSystem | undefined {
   if (value !== 'si' && value !== 'us' && value !== 'kt-ft') throw new InputError(`"${value}" is not a unit system: use si, us or kt-ft`, undefined, '--units');
   return value;
 }
-
-
-class ReportedFailure extends Error {}
 
 type ServiceModule = typeof import('../service');
 let serviceModule: ServiceModule | undefined;
@@ -218,7 +214,7 @@ export function registerProject(program: Command, io: CliIO, setExitCode: SetExi
           service.importConcept({
             conceptText,
             name,
-            note: options.note ?? `Imported from ${conceptFile === STANDARD_INPUT ? 'standard input' : basename(conceptFile)}.`,
+            note: options.note ?? `Imported from ${basename(inputName(conceptFile))}.`,
             ...(options.author !== undefined ? { author: options.author } : {}),
           }),
         );
