@@ -18,6 +18,11 @@ function points(d: string): Array<[number, number]> {
   return [...d.matchAll(/(-?[\d.]+),(-?[\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
 }
 
+/** A path's points read back through the scales into plot values, to 0.1. */
+function plottedPoints(d: string, s: ChartScales): number[][] {
+  return points(d).map(([px, py]) => [s.x.invert(px), s.y.invert(py)].map((v) => Math.round(v * 10) / 10));
+}
+
 const NO_LABELS: Labels = { boundaries: [], notes: [] };
 
 describe('bands in pixels', () => {
@@ -54,7 +59,7 @@ describe('bands in pixels', () => {
     const view = { powerLoading: true as const, factor: 1000 };
     const s = scales([0, 200]);
     const [shape] = bandShapes([band], s, view);
-    const drawn = points(shape.area).map(([px, py]) => [s.x.invert(px), s.y.invert(py)].map((v) => Math.round(v * 10) / 10));
+    const drawn = plottedPoints(shape.area, s);
     // Upper edge first (W/P from the lower P/W), then the lower edge back.
     expect(drawn).toEqual([
       [300, 125],
@@ -148,7 +153,7 @@ describe('contours past the top of the map', () => {
   it('in power loading runs down to W/P = 0: above the map the chance is taken as its last row', () => {
     const s = scales([0, 200]);
     const [shape] = contourShapes([open], s, { powerLoading: true, factor: 1000 });
-    const drawn = points(shape.d).map(([px, py]) => [s.x.invert(px), s.y.invert(py)].map((v) => Math.round(v * 10) / 10));
+    const drawn = plottedPoints(shape.d, s);
     // W/P = 1000 / (10 W/N) = 100 N/kW along the bottom of the region; the run above the map at W/P 0.
     expect(drawn).toEqual([
       [300, 100],
@@ -161,7 +166,7 @@ describe('contours past the top of the map', () => {
   it('in power-to-weight stays where d3 put it (the clip to the map hides the padding)', () => {
     const s = scales();
     const [shape] = contourShapes([open], s, { powerLoading: false });
-    const drawn = points(shape.d).map(([px, py]) => [s.x.invert(px), s.y.invert(py)].map((v) => Math.round(v * 10) / 10));
+    const drawn = plottedPoints(shape.d, s);
     expect(drawn[2]).toEqual([600, 21.5]);
   });
 });
